@@ -1,0 +1,5 @@
+import { CliError } from '../io';
+
+export async function run(_args: string[]): Promise<number> {
+  throw new CliError('The "mix" command is not built yet.', 2);
+}
