@@ -1,0 +1,71 @@
+import type { RobotConfig } from '@shared/schemas/robot-config';
+import type { IssueList } from './firmware-config-error';
+import type { PinRegistry } from './pin-registry';
+
+export interface UartModel {
+  port: string;
+  /** The whole begin statement(s), built here from constants and macros only. */
+  beginCode: string;
+  /** This port is also the USB serial port (console and uploads). */
+  usb: boolean;
+  baud: number;
+  note: string;
+}
+
+// SBUS: 100000 baud, 8 data bits, even parity, 2 stop bits, inverted; iBUS: 115200 8N1
+// (open protocol descriptions, REFERENCES §5).
+const SETTINGS = {
+  sbus: { baud: 100000, frame: 'SERIAL_8E2', invert: true },
+  ibus: { baud: 115200, frame: 'SERIAL_8N1', invert: false },
+} as const;
+
+/** RP2040 UART receive pins (RP2040 datasheet, GPIO function table, from memory). */
+function rp2040Port(gpio: number): string | null {
+  if ([1, 13, 17, 29].includes(gpio)) return 'Serial1';
+  if ([5, 9, 21, 25].includes(gpio)) return 'Serial2';
+  return null;
+}
+
+export function uartModel(config: RobotConfig, source: 'sbus' | 'ibus', pins: PinRegistry, issues: IssueList): UartModel | null {
+  const path = ['wiring', 'inputPins', 'rx', 'pin'];
+  const entry = pins.use(config.wiring.inputPins.rx?.pin, path, 'MW_PIN_INPUT_RX', `the receiver's serial output`, 'receiver');
+  if (!entry) return null;
+  const s = SETTINGS[source];
+  const board = pins.board;
+  if (board.family === 'avr') {
+    const uart = board.uarts.find((u) => u.rx === entry.pinId);
+    if (!uart) {
+      const choices = board.uarts.map((u) => u.rx).filter(Boolean).join(', ');
+      issues.add(path, `Pin ${entry.pinLabel} is not a serial receive pin on ${board.name} (use ${choices})`);
+      return null;
+    }
+    const note = s.invert
+      ? `SBUS is an inverted signal: ${board.name} needs an inverter between the receiver and ${entry.pinLabel}.`
+      : `iBUS at 115200 baud on ${uart.port}.`;
+    return { port: uart.port, beginCode: `MW_INPUT_SERIAL.begin(${s.baud}UL, ${s.frame});`, usb: uart.usb, baud: s.baud, note };
+  }
+  if (board.family === 'esp32') {
+    const uart = board.uarts.find((u) => !u.usb && u.remappable);
+    if (!uart) return null;
+    return {
+      port: uart.port,
+      beginCode: `MW_INPUT_SERIAL.begin(${s.baud}UL, ${s.frame}, MW_PIN_INPUT_RX, -1, ${s.invert});`,
+      usb: false,
+      baud: s.baud,
+      note: `${uart.port} on ${entry.pinLabel}${s.invert ? ', inverted in the UART (no external inverter needed)' : ''}.`,
+    };
+  }
+  const port = rp2040Port(Number(entry.code));
+  if (!port) {
+    issues.add(path, `Pin ${entry.pinLabel} is not a UART receive pin on ${board.name} (use GP1, GP5, GP9, GP13, GP17 or GP21)`);
+    return null;
+  }
+  const invert = s.invert ? ' MW_INPUT_SERIAL.setInvertRX(true);' : '';
+  return {
+    port,
+    beginCode: `MW_INPUT_SERIAL.setRX(MW_PIN_INPUT_RX);${invert} MW_INPUT_SERIAL.begin(${s.baud}UL, ${s.frame});`,
+    usb: false,
+    baud: s.baud,
+    note: `${port} on ${entry.pinLabel}${s.invert ? ', inverted in the UART (no external inverter needed)' : ''}.`,
+  };
+}
