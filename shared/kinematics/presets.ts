@@ -177,11 +177,8 @@ export function normalizeDeg(deg: number): number {
   return wrapped === -180 ? 180 : wrapped;
 }
 
-/** Micrometre resolution keeps files readable and kills the 1e-15 residue of cos 90°. */
+/** Removes the 1e-15 residue of cos 90°; other positions stay exact so symmetric layouts stay symmetric. */
 function tidyWheel(w: Wheel): Wheel {
-  const tidy = (v: number) => {
-    const r = Math.round(v * 1000) / 1000;
-    return r === 0 ? 0 : r;
-  };
+  const tidy = (v: number) => (Math.abs(v) < 1e-9 ? 0 : v);
   return { ...w, xMm: tidy(w.xMm), yMm: tidy(w.yMm) };
 }
