@@ -36,12 +36,31 @@ export function buildStarterConfig(options: StarterOptions): RobotConfig {
   const { layout, board = 'uno', input = 'rc-pwm', driver = 'dual-pwm' } = options;
   const chassis = presetChassis(layout);
   const motors = presetMotors(chassis);
-  const mixing = computeMixing({ chassis, motors });
+  const controls = starterControls(input, computeMixing({ chassis, motors }).canStrafe);
+  const config: RobotConfigInput = {
+    schemaVersion: CURRENT_SCHEMA_VERSION,
+    name: options.name ?? `${LAYOUT_LABELS[layout]} robot`,
+    chassis,
+    motors,
+    controls,
+    wiring: {
+      board,
+      drivers: starterDrivers(driver, motors.map((m) => m.name)),
+      inputPins: Object.fromEntries(inputPinRoles(input, controls.channels.map((c) => c.number)).map((r) => [r.id, unassigned()])),
+    },
+    // Motors stay off until the arming switch is on, whenever there is one.
+    safety: { armingRequired: controls.armingSwitch.channel !== null },
+  };
+  return RobotConfigSchema.parse(config);
+}
+
+/** Channels with the source's default calibration, mapped as STARTER_CHANNELS says. */
+function starterControls(input: InputSourceId, canStrafe: boolean) {
   const source = INPUT_SOURCES[input];
-  const fits = (n: number) => n <= source.maxChannels;
-  const strafe = mixing.canStrafe ? STARTER_CHANNELS.strafe : null;
-  const rateChannel = fits(STARTER_CHANNELS.rateSwitch) ? STARTER_CHANNELS.rateSwitch : null;
-  const armingChannel = fits(STARTER_CHANNELS.armingSwitch) ? STARTER_CHANNELS.armingSwitch : null;
+  const ifCarried = (n: number) => (n <= source.maxChannels ? n : null);
+  const strafe = canStrafe ? STARTER_CHANNELS.strafe : null;
+  const rateChannel = ifCarried(STARTER_CHANNELS.rateSwitch);
+  const armingChannel = ifCarried(STARTER_CHANNELS.armingSwitch);
   const roles: [string, number | null][] = [
     ['Strafe', strafe],
     ['Forward', STARTER_CHANNELS.forward],
@@ -53,32 +72,18 @@ export function buildStarterConfig(options: StarterOptions): RobotConfig {
     .filter((role): role is [string, number] => role[1] !== null)
     .map(([name, number]) => ({ number, name, ...source.defaultCalibration }))
     .sort((a, b) => a.number - b.number);
-  const config: RobotConfigInput = {
-    schemaVersion: CURRENT_SCHEMA_VERSION,
-    name: options.name ?? `${LAYOUT_LABELS[layout]} robot`,
-    chassis,
-    motors,
-    controls: {
-      source: input,
-      channels,
-      axes: {
-        forward: { channel: STARTER_CHANNELS.forward },
-        strafe: { channel: strafe },
-        yaw: { channel: STARTER_CHANNELS.yaw },
-      },
-      rateSwitch: { channel: rateChannel, positions: 2, rates: [0.5, 1] },
-      armingSwitch: { channel: armingChannel, armedWhen: 'high' },
-      desaturation: 'scale',
+  return {
+    source: input,
+    channels,
+    axes: {
+      forward: { channel: STARTER_CHANNELS.forward },
+      strafe: { channel: strafe },
+      yaw: { channel: STARTER_CHANNELS.yaw },
     },
-    wiring: {
-      board,
-      drivers: starterDrivers(driver, motors.map((m) => m.name)),
-      inputPins: Object.fromEntries(inputPinRoles(input, channels.map((c) => c.number)).map((r) => [r.id, unassigned()])),
-    },
-    // Motors stay off until the arming switch is on, whenever there is one.
-    safety: { armingRequired: armingChannel !== null },
+    rateSwitch: { channel: rateChannel, positions: 2 as const, rates: [0.5, 1] },
+    armingSwitch: { channel: armingChannel, armedWhen: 'high' as const },
+    desaturation: 'scale' as const,
   };
-  return RobotConfigSchema.parse(config);
 }
 
 /** Motors grouped onto drivers in order, as many per driver as the kind has channels. */
