@@ -1,7 +1,7 @@
 import { STICK_AXES } from '@shared/schemas/ids';
 import type { RobotConfig } from '@shared/schemas/robot-config';
 import type { IssueList } from './firmware-config-error';
-import { calibrationSide, deadbandScaleQ13, q14 } from './fixed-point';
+import { calibrationSide, q14, q15Unsigned } from './fixed-point';
 import { usedChannelNumbers, type InputModel } from './input-model';
 
 export interface SlotModel {
@@ -21,15 +21,18 @@ export interface AxisModel {
   slot: number;
   reverse: number;
   deadbandQ: number;
-  deadbandScaleQ13: number;
-  expoQ: number;
-  rateQ: number[];
+  /** 1 / (1 − deadband), Q15. */
+  deadbandScaleQ15: number;
+  /** Per rate-switch position: (1 − expo) × rate in Q14 and expo × rate in Q15. */
+  linearQ: number[];
+  cubicQ15: number[];
 }
 
 export interface ControlsModel {
   slots: SlotModel[];
   axes: AxisModel[];
-  rateSwitch: { slot: number; positions: number };
+  /** Thresholds on the raw reading ×4: the centre, and half-way from the centre to each end. */
+  rateSwitch: { slot: number; positions: number; centre4: number; low4: number; high4: number };
   arming: { slot: number; whenHigh: boolean; required: boolean };
 }
 
@@ -67,6 +70,17 @@ function slotModel(config: RobotConfig, number: number, slot: number, input: Inp
   };
 }
 
+/** Where a switch channel changes position (engine: 0 for two positions, ±0.5 for three). */
+function switchThresholds(slots: SlotModel[], channel: number | null) {
+  const slot = slots.find((s) => s.number === channel);
+  if (!slot) return { centre4: 0, low4: 0, high4: 0 };
+  return {
+    centre4: slot.centre4,
+    low4: slot.centre4 - Math.round(slot.lowSpan4 / 2),
+    high4: slot.centre4 + Math.round(slot.highSpan4 / 2),
+  };
+}
+
 export function buildControlsModel(config: RobotConfig, input: InputModel, issues: IssueList): ControlsModel {
   const { controls, safety } = config;
   const used = usedChannelNumbers(config);
@@ -84,9 +98,9 @@ export function buildControlsModel(config: RobotConfig, input: InputModel, issue
       slot: slotOf(axis.channel),
       reverse: axis.reverse ? 1 : 0,
       deadbandQ: q14(axis.deadband),
-      deadbandScaleQ13: deadbandScaleQ13(axis.deadband),
-      expoQ: q14(axis.expo),
-      rateQ: rates.map((r) => q14(axis.rate * r)),
+      deadbandScaleQ15: q15Unsigned(1 / (1 - axis.deadband)),
+      linearQ: rates.map((r) => q14((1 - axis.expo) * axis.rate * r)),
+      cubicQ15: rates.map((r) => q15Unsigned(axis.expo * axis.rate * r)),
     };
   });
   if (safety.armingRequired && controls.armingSwitch.channel === null) {
@@ -95,7 +109,7 @@ export function buildControlsModel(config: RobotConfig, input: InputModel, issue
   return {
     slots,
     axes,
-    rateSwitch: { slot: slotOf(rateSwitch.channel), positions: rateSwitch.positions },
+    rateSwitch: { slot: slotOf(rateSwitch.channel), positions: rateSwitch.positions, ...switchThresholds(slots, rateSwitch.channel) },
     arming: { slot: slotOf(controls.armingSwitch.channel), whenHigh: controls.armingSwitch.armedWhen === 'high', required: safety.armingRequired },
   };
 }

@@ -1,7 +1,7 @@
 import type { RobotConfig } from '@shared/schemas/robot-config';
 import { cString } from '../c-text';
 import { FIRMWARE_GENERATOR_VERSION } from '../generator-version';
-import { computeMixing } from '../pending/engine-adapter';
+import { computeMixing } from '@shared/kinematics/mixing';
 import { getBoard, type BoardProfile } from '../pending/boards-adapter';
 import { configHash } from './config-hash';
 import { buildControlsModel, type ControlsModel } from './controls-model';

@@ -3,11 +3,13 @@ import type { Driver, RobotConfig } from '@shared/schemas/robot-config';
 import { CHANNEL_PREFIXES, DRIVER_KINDS } from '@shared/drivers/driver-kinds';
 import { cString, macroPart } from '../c-text';
 import type { IssueList } from './firmware-config-error';
-import { q14 } from './fixed-point';
+import { q14, q15Signed } from './fixed-point';
 import type { PinRegistry } from './pin-registry';
 
 export interface MotorModel {
   index: number;
+  /** The motor's mixing sum in C, from its Q15 row (see mixExpression). */
+  mixExpression: string;
   nameLiteral: string;
   row: number[];
   thresholdQ: number;
@@ -50,6 +52,21 @@ const FUNCTION_PREFIX: Record<DriverKindId, string> = {
   'two-input': 'mw_two_input',
   'servo-esc': 'mw_servo_esc',
 };
+
+/**
+ * The C expression summing one motor's mixing terms: a zero entry is left out, ±1.0 (held as
+ * ±32767) becomes an addition or subtraction of the stick, anything else one scaled product.
+ */
+export function mixExpression(motor: number, row: number[]): string {
+  const terms = row.flatMap((q, k) => {
+    if (q === 0) return [];
+    if (q === 32767) return [`+ s[${k}]`];
+    if (q === -32767) return [`- s[${k}]`];
+    return [`+ mw_scale_signed(s[${k}], MW_MIX[${motor}][${k}])`];
+  });
+  if (terms.length === 0) return '0';
+  return `(int32_t)0 ${terms.join(' ')}`;
+}
 
 /** Which driver and channel each motor is on; issues for motors on none or on two. */
 function motorPlacement(config: RobotConfig, issues: IssueList): Map<number, { driver: number; channel: number }> {
@@ -115,8 +132,8 @@ export function buildOutputModel(config: RobotConfig, matrix: number[][], pins: 
   const servoPinMacros: string[] = [];
   config.motors.forEach((motor, m) => {
     const place = placed.get(m);
-    const row = (matrix[m] ?? [0, 0, 0]).map((v) => q14(Math.max(-1, Math.min(1, v))));
-    const base = { index: m, nameLiteral: cString(motor.name), row, thresholdQ: q14(Math.min(motor.startThreshold, 0.99)) };
+    const row = (matrix[m] ?? [0, 0, 0]).map((v) => q15Signed(Math.max(-1, Math.min(1, v))));
+    const base = { index: m, mixExpression: mixExpression(m, row), nameLiteral: cString(motor.name), row, thresholdQ: q14(Math.min(motor.startThreshold, 0.99)) };
     if (!place) {
       motors.push({ ...base, driveCall: '(void)direction; (void)duty', stopCall: '(void)0' });
       return;

@@ -1,0 +1,46 @@
+// ATmega328P data-space register addresses (ATmega328P datasheet, register summary) and how
+// the Arduino core drives a pin: analogWrite() connects the timer output (COMnx1 set in
+// TCCRnA) with OCRnx = duty, except 0 and 255, which it writes as plain LOW and HIGH.
+
+export const PORTB = 0x25;
+export const PORTC = 0x28;
+export const PORTD = 0x2b;
+export const GPIOR0 = 0x3e;
+
+interface PwmOutput {
+  tccra: number;
+  comBit: number;
+  ocr: number;
+}
+
+/** Uno timer outputs (digital_pin_to_timer_PGM in the core's standard variant). */
+const UNO_PWM: Record<number, PwmOutput> = {
+  6: { tccra: 0x44, comBit: 7, ocr: 0x47 },
+  5: { tccra: 0x44, comBit: 5, ocr: 0x48 },
+  9: { tccra: 0x80, comBit: 7, ocr: 0x88 },
+  10: { tccra: 0x80, comBit: 5, ocr: 0x8a },
+  11: { tccra: 0xb0, comBit: 7, ocr: 0xb3 },
+  3: { tccra: 0xb0, comBit: 5, ocr: 0xb4 },
+};
+
+/** Arduino pin number (as code writes it: '9', 'A0') → port register and bit on the Uno. */
+export function unoPort(code: string): { port: number; bit: number } {
+  const n = code.startsWith('A') ? 14 + Number(code.slice(1)) : Number(code);
+  if (n < 8) return { port: PORTD, bit: n };
+  if (n < 14) return { port: PORTB, bit: n - 8 };
+  return { port: PORTC, bit: n - 14 };
+}
+
+/** Registers to dump so that every pin's level or duty can be read back. */
+export function unoRegisters(): number[] {
+  const pwm = Object.values(UNO_PWM).flatMap((o) => [o.tccra, o.ocr]);
+  return [...new Set([PORTB, PORTC, PORTD, ...pwm])].sort((a, b) => a - b);
+}
+
+/** What analogWrite() last set on a pin, 0..255, or the digital level as 0 / 255. */
+export function unoPinDuty(code: string, regs: Record<number, number>): number {
+  const out = UNO_PWM[Number(code)];
+  if (out && (regs[out.tccra] >> out.comBit) & 1) return regs[out.ocr];
+  const { port, bit } = unoPort(code);
+  return (regs[port] >> bit) & 1 ? 255 : 0;
+}
