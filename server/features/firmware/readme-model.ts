@@ -60,6 +60,7 @@ export function buildReadmeModel(
     remoteWiring: remote ? wiringRows(remote.pins) : [],
     notes: model.notes.map(markdownText),
     hasArming: model.arming.slot >= 0,
+    benchPossible: model.serial.commands || model.bench.pinPresent,
     desaturation: config.controls.desaturation === 'scale' ? 'all motors scaled together, keeping the direction of travel' : 'each motor clipped at full',
     rampPerSecond: config.safety.rampPerSecond,
     outputLimitPercent: config.safety.outputLimitPercent,

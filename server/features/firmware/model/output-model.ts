@@ -98,7 +98,7 @@ function wireMotor(config: RobotConfig, m: number, d: number, channel: number, p
     const roleId = `${prefix}.${role.key}`;
     const macro = `MW_PIN_M${m}_${macroPart(motor.name, 'MOTOR')}_${role.key.toUpperCase()}`;
     const path = ['wiring', 'drivers', d, 'pins', roleId, 'pin'];
-    const entry = pins.use(driver.pins[roleId]?.pin, path, macro, `${role.label} of motor ${m + 1}`, driver.name, !role.optional);
+    const entry = pins.use(driver.pins[roleId]?.pin, path, macro, `${role.label} of motor ${motor.name}`, driver.name, !role.optional);
     if (!entry) continue;
     result.pins[role.key] = macro;
     if (role.need === 'pwm') result.pwmPins.push({ macro, pinId: entry.pinId });

@@ -39,9 +39,11 @@ export function uartModel(config: RobotConfig, source: 'sbus' | 'ibus', pins: Pi
       issues.add(path, `Pin ${entry.pinLabel} is not a serial receive pin on ${board.name} (use ${choices})`);
       return null;
     }
-    const note = s.invert
-      ? `SBUS is an inverted signal: ${board.name} needs an inverter between the receiver and ${entry.pinLabel}.`
-      : `iBUS at 115200 baud on ${uart.port}.`;
+    const inverter = s.invert ? `SBUS is an inverted signal: ${board.name} needs an inverter between the receiver and ${entry.pinLabel}. ` : '';
+    const usb = uart.usb
+      ? `${entry.pinLabel} is also the USB serial port: disconnect the receiver from it while uploading.`
+      : `The receiver uses ${uart.port}.`;
+    const note = `${inverter}${usb}`;
     return { port: uart.port, beginCode: `MW_INPUT_SERIAL.begin(${s.baud}UL, ${s.frame});`, usb: uart.usb, baud: s.baud, note };
   }
   if (board.family === 'esp32') {
