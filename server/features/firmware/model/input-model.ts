@@ -23,7 +23,8 @@ const DECODERS: Record<InputSourceId, { header: string; type: string; prefix: st
   ppm: { header: 'mw_ppm.h', type: 'MwPpmDecoder', prefix: 'mw_ppm' },
   sbus: { header: 'mw_sbus.h', type: 'MwSbusDecoder', prefix: 'mw_sbus' },
   ibus: { header: 'mw_ibus.h', type: 'MwIbusDecoder', prefix: 'mw_ibus' },
-  nrf24: { header: 'mw_nrf24.h', type: 'MwNrfSettings', prefix: 'mw_nrf' },
+  // The nRF24L01+ driver itself is included after the SPI hooks it calls (mw_input.h).
+  nrf24: { header: 'mw_link_packet.h', type: 'MwLinkPacket', prefix: 'mw_link' },
 };
 
 export interface RcChannelModel {
