@@ -25,8 +25,11 @@ export interface PwmSetting {
 
 const EXACT_TOLERANCE = 0.02;
 
+/** 20000 → "20 kHz", 31372.5 → "31.4 kHz", 7812.5 → "7.81 kHz", 490.196 → "490.2 Hz". */
 function hz(value: number): string {
-  return value >= 1000 ? `${(value / 1000).toFixed(value >= 10000 ? 1 : 2)} kHz` : `${value.toFixed(1)} Hz`;
+  const trim = (text: string) => text.replace(/\.0+$|(\.\d*?)0+$/, '$1');
+  if (value >= 1000) return `${trim((value / 1000).toFixed(value >= 10000 ? 1 : 2))} kHz`;
+  return `${trim(value.toFixed(1))} Hz`;
 }
 
 function mhz(value: number): string {

@@ -37,8 +37,9 @@ export function pwmBudget(ctx: PlanContext): PwmBudget {
     return { unitWord: 'PWM pins', total: pins.length, available: free.length - servoLost.length, needed: pwmDemands, losses };
   }
   if (units.kind === 'ledc') {
+    // Pins lost to a bus matter only when fewer pins than channels are left.
     const available = Math.min(units.channels, free.length);
-    return { unitWord: 'PWM channels', total: units.channels, available, needed: pwmDemands + servoDemands, losses };
+    return { unitWord: 'PWM channels', total: units.channels, available, needed: pwmDemands + servoDemands, losses: available < units.channels ? losses : [] };
   }
   const channels = (list: BoardPin[]) => new Set(list.map((p) => JSON.stringify(p.pwm))).size;
   return { unitWord: 'PWM slice channels', total: channels(pins), available: channels(free), needed: pwmDemands + servoDemands, losses };
@@ -47,6 +48,6 @@ export function pwmBudget(ctx: PlanContext): PwmBudget {
 /** "the Uno has 6 PWM pins, this layout needs 8" (with what was lost, when anything was). */
 export function pwmBudgetSentence(ctx: PlanContext, budget: PwmBudget): string {
   const head = `${boardWords(ctx)} has ${budget.total} ${budget.unitWord}`;
-  if (budget.losses.length === 0) return `${head}, this layout needs ${budget.needed}`;
+  if (budget.losses.length === 0 || budget.available === budget.total) return `${head}, this layout needs ${budget.needed}`;
   return `${head}, ${budget.available} once ${budget.losses.join(' and ')}; this layout needs ${budget.needed}`;
 }
