@@ -55,7 +55,11 @@ function assignSide(ctx: PlanContext): { placed: Map<string, string> } | { reaso
 function placeOptional(ctx: PlanContext, state: PlanState, optional: PinDemand[], placed: Map<string, string>): void {
   const order = (d: PinDemand) => (d.owner === 'status-led' ? 0 : d.owner === 'driver' ? 1 : 2);
   for (const demand of [...optional].sort((a, b) => order(a) - order(b))) {
-    const pin = rankedPins(ctx, demand, true).find((p) => state.allows(demand, p, true));
+    // A status LED on a strapping pin (a warning) beats no status LED (also a warning); a
+    // bench-test switch held low at reset would change the boot mode, so it never goes there.
+    const pin =
+      rankedPins(ctx, demand, true).find((p) => state.allows(demand, p, true)) ??
+      (demand.owner === 'status-led' ? rankedPins(ctx, demand, false).find((p) => state.allows(demand, p, false) && !p.usbSerial) : undefined);
     if (!pin) continue;
     state.apply(demand, pin, 1);
     placed.set(demand.key, pin.id);

@@ -9,6 +9,13 @@ import { busReason, type PlanContext } from './plan-context';
 // pin's other abilities would be wasted on it. Shared by the check's hints and the assignment.
 
 /**
+ * How much trouble a strapping pin makes when used (ESP32 boot-mode notes, from memory): GPIO 5
+ * and 15 only set SDIO timing and the boot log, GPIO 0 and 2 choose the boot mode, GPIO 12
+ * chooses the flash voltage and can stop the module booting (REFERENCES §3).
+ */
+const STRAPPING_RISK: Record<string, number> = { '5': 30, '15': 30, '2': 50, '0': 55, '12': 80 };
+
+/**
  * strict: also avoid what only draws a warning (strapping pins, USB serial pins, a PWM frequency
  * the timer can only approximate).
  */
@@ -46,7 +53,7 @@ export function pinCost(ctx: PlanContext, demand: PinDemand, pin: BoardPin): num
   else if (pin.spi) cost += 10;
   if (pin.i2c) cost += 8;
   if (pin.analogIn && need !== 'analog-in') cost += 3;
-  if (pin.strapping) cost += 50;
+  if (pin.strapping) cost += STRAPPING_RISK[pin.code] ?? 50;
   if (pin.usbSerial) cost += 60;
   if (pin.builtinLed) cost += need === 'led' ? -30 : 15;
   if (pin.inputOnly && !isOutputNeed(need)) cost -= 4;
