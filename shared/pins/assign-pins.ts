@@ -72,8 +72,13 @@ function failureReason(ctx: PlanContext, culprit: PinDemand | null, exhausted: b
   return `no pin is left on ${boardWords(ctx)} for ${culprit.label}, which needs ${NEED_WORDS[culprit.need]}, once the other roles and their timers are placed`;
 }
 
+/** A copy with new pin assignments; only the records that hold pins are copied. */
 function writePins(config: RobotConfig, demands: PinDemand[], placed: Map<string, string>): RobotConfig {
-  const next = structuredClone(config);
+  const next: RobotConfig = {
+    ...config,
+    wiring: { ...config.wiring, drivers: config.wiring.drivers.map((d) => ({ ...d, pins: { ...d.pins } })), inputPins: { ...config.wiring.inputPins } },
+    controls: { ...config.controls, link: { ...config.controls.link, remotePins: { ...config.controls.link.remotePins } } },
+  };
   for (const d of demands) {
     if (d.locked && d.pin !== null) continue;
     const value = { pin: placed.get(d.key) ?? null, locked: false };

@@ -135,23 +135,6 @@ interface Variable {
   ranked: Map<BoardPin, RankedPin>;
 }
 
-/** Pigeonhole test: the unplaced roles (outside share groups) need as many distinct pins, and PWM units. */
-function pigeonholeFails(state: PlanState, open: Variable[], allowed: Map<Variable, BoardPin[]>): boolean {
-  const lone = open.filter((v) => v.demand.shareGroup === null);
-  const pins = new Set<string>();
-  const units = new Set<string>();
-  let pwmCount = 0;
-  for (const v of lone) {
-    const isPwm = v.demand.need === 'pwm' || v.demand.need === 'servo-pulse';
-    if (isPwm) pwmCount += 1;
-    for (const pin of allowed.get(v)!) {
-      pins.add(pin.id);
-      if (isPwm) units.add(state.unitOf(v.demand, pin));
-    }
-  }
-  return pins.size < lone.length || units.size < pwmCount;
-}
-
 export function searchPlacement(ctx: PlanContext, state: PlanState, demands: PinDemand[], options: SearchOptions): SearchOutcome {
   const variables: Variable[] = demands.map((demand) => {
     const ranked = rankedPinCosts(ctx, demand, options.strict);
@@ -168,17 +151,42 @@ export function searchPlacement(ctx: PlanContext, state: PlanState, demands: Pin
       exhausted = true;
       return false;
     }
-    const allowed = new Map(open.map((v) => [v, v.domain.filter((p) => state.allows(v.demand, p, options.strict))]));
+    // One pass: how many pins each open role still has (fewest first = most constrained), and
+    // a pigeonhole test: the open roles outside share groups need that many distinct pins, and
+    // the PWM ones that many distinct PWM units.
     let pick = open[0];
-    for (const v of open) if (allowed.get(v)!.length < allowed.get(pick)!.length) pick = v;
-    if (allowed.get(pick)!.length === 0) {
+    let pickCount = Infinity;
+    const pins = new Set<string>();
+    const units = new Set<string>();
+    let lone = 0;
+    let pwmLone = 0;
+    for (const v of open) {
+      const isLone = v.demand.shareGroup === null;
+      const isPwm = v.demand.need === 'pwm' || v.demand.need === 'servo-pulse';
+      if (isLone) lone += 1;
+      if (isLone && isPwm) pwmLone += 1;
+      let count = 0;
+      for (const pin of v.domain) {
+        if (!state.allows(v.demand, pin, options.strict)) continue;
+        count += 1;
+        if (!isLone) continue;
+        pins.add(pin.id);
+        if (isPwm) units.add(state.unitOf(v.demand, pin));
+      }
+      if (count < pickCount) {
+        pick = v;
+        pickCount = count;
+      }
+      if (count === 0) break;
+    }
+    if (pickCount === 0) {
       starved.set(pick, (starved.get(pick) ?? 0) + 1);
       return false;
     }
-    if (pigeonholeFails(state, open, allowed)) return false;
+    if (pins.size < lone || units.size < pwmLone) return false;
     const rest = open.filter((v) => v !== pick);
     const score = (p: BoardPin) => pick.ranked.get(p)!.cost + state.bonus(pick.demand, p);
-    const values = [...allowed.get(pick)!].sort((a, b) => score(a) - score(b) || pick.ranked.get(a)!.order - pick.ranked.get(b)!.order);
+    const values = pick.domain.filter((p) => state.allows(pick.demand, p, options.strict)).sort((a, b) => score(a) - score(b) || pick.ranked.get(a)!.order - pick.ranked.get(b)!.order);
     for (const pin of values) {
       nodes += 1;
       state.apply(pick.demand, pin, 1);
