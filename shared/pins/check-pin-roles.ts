@@ -18,7 +18,7 @@ function candidates(ctx: PlanContext, demand: PinDemand, used: Set<string>): str
     .filter((p) => !used.has(p.id))
     .map((p) => p.id);
   if (ids.length === 0) return `No free pin on ${boardWords(ctx)} can do it; free one up or choose another board.`;
-  return `Pins that can: ${ids.slice(0, 6).join(', ')}${ids.length > 6 ? '…' : ''}.`;
+  return `Pins that can: ${ids.slice(0, 6).join(', ')}${ids.length > 6 ? ` and ${ids.length - 6} more` : ''}.`;
 }
 
 function checkOne(ctx: PlanContext, demand: PinDemand, used: Set<string>): Problem[] {
