@@ -7,7 +7,7 @@ import { checkPinRoles } from './check-pin-roles';
 import { checkPwmHardware } from './check-pwm-hardware';
 import { PlanState, searchPlacement } from './assign-search';
 import { shortageReason } from './assign-reasons';
-import { collectDemands, NEED_WORDS, type PinDemand } from './pin-demands';
+import { collectDemands, NEED_WORDS, strayDriverRoles, strayInputRoles, type PinDemand } from './pin-demands';
 import { rankedPins } from './pin-fit';
 import { boardWords, type PlanContext, planContexts } from './plan-context';
 
@@ -79,6 +79,14 @@ function writePins(config: RobotConfig, demands: PinDemand[], placed: Map<string
     wiring: { ...config.wiring, drivers: config.wiring.drivers.map((d) => ({ ...d, pins: { ...d.pins } })), inputPins: { ...config.wiring.inputPins } },
     controls: { ...config.controls, link: { ...config.controls.link, remotePins: { ...config.controls.link.remotePins } } },
   };
+  // Unlocked pins kept under roles that no longer exist (another kind or source before) go.
+  for (const { driverIndex, roleId } of strayDriverRoles(config)) {
+    if (!next.wiring.drivers[driverIndex].pins[roleId].locked) delete next.wiring.drivers[driverIndex].pins[roleId];
+  }
+  for (const { roleId, remote } of strayInputRoles(config)) {
+    const record = remote ? next.controls.link.remotePins : next.wiring.inputPins;
+    if (!record[roleId].locked) delete record[roleId];
+  }
   for (const d of demands) {
     if (d.locked && d.pin !== null) continue;
     const value = { pin: placed.get(d.key) ?? null, locked: false };

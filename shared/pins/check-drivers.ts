@@ -4,7 +4,7 @@ import { INPUT_SOURCES } from '../inputs/input-sources';
 import { formatHz } from '../boards/pwm-timing';
 import type { Problem } from '../problems/problem';
 import type { Driver, RobotConfig } from '../schemas/robot-config';
-import { strayDriverRoles } from './pin-demands';
+import { strayDriverRoles, strayInputRoles } from './pin-demands';
 
 // Checks of the drivers themselves and how they meet the board: which motor sits on which
 // driver, PWM frequency limits, logic levels, stop modes; plus the SBUS inverter on ATmega.
@@ -63,11 +63,20 @@ function checkDriver(config: RobotConfig, driver: Driver, index: number): Proble
 }
 
 function checkStrayRoles(config: RobotConfig): Problem[] {
-  return strayDriverRoles(config).map(({ driverIndex, roleId }) => {
+  const inputs = strayInputRoles(config).map(({ roleId, pin, remote }): Problem => ({
+    severity: 'warning',
+    code: 'role-unknown',
+    pins: [pin],
+    roles: [`${remote ? 'remote' : 'input'}/${roleId}`],
+    message: `The ${remote ? 'remote' : 'input source'} has no role “${roleId}” now, so ${pin} is kept for nothing.`,
+    hint: 'Clear that pin; it is left over from another input source or channel table.',
+    path: remote ? ['controls', 'link', 'remotePins', roleId, 'pin'] : ['wiring', 'inputPins', roleId, 'pin'],
+  }));
+  return [...inputs, ...strayDriverRoles(config).map(({ driverIndex, roleId }) => {
     const driver = config.wiring.drivers[driverIndex];
     const pin = driver.pins[roleId].pin!;
-    return { severity: 'warning', code: 'role-unknown', pins: [pin], roles: [`${driver.name}/${roleId}`], message: `${driver.name} has no role “${roleId}”, so ${pin} is kept for nothing.`, hint: 'Clear that pin; it is left over from another driver kind or motor count.', path: ['wiring', 'drivers', driverIndex, 'pins', roleId, 'pin'] };
-  });
+    return { severity: 'warning', code: 'role-unknown', pins: [pin], roles: [`${driver.name}/${roleId}`], message: `${driver.name} has no role “${roleId}”, so ${pin} is kept for nothing.`, hint: 'Clear that pin; it is left over from another driver kind or motor count.', path: ['wiring', 'drivers', driverIndex, 'pins', roleId, 'pin'] } satisfies Problem;
+  })];
 }
 
 function checkInverter(config: RobotConfig): Problem[] {

@@ -69,7 +69,7 @@ function quietPins(ctx: PlanContext, driverIndex: number, maxHz: number, suggest
   const taken = new Set(othersPlaced.map((o) => o.pin.id));
   const quiet: QuietPin[] = [];
   for (const pin of ctx.board.pins) {
-    if (!pin.pwm || !pin.onHeader || pin.inputOnly || pin.flash || taken.has(pin.id) || busReason(ctx, pin)) continue;
+    if (!pin.pwm || !pin.onHeader || pin.inputOnly || pin.flash || pin.strapping || taken.has(pin.id) || busReason(ctx, pin)) continue;
     const timer = timerOfPin(ctx.board, pin);
     if (timer && (timer.id === 0 || ctx.servoTimerIds.includes(timer.id))) continue;
     // The suggestion itself, else what an 8-bit timer gives flat out (timer 2: 31.4 kHz).

@@ -135,6 +135,16 @@ describe('choices the assignment makes', () => {
     for (const precious of ['D2', 'D3', 'D18', 'D19', 'D20', 'D21', 'D14', 'D15', 'D16', 'D17', 'D50', 'D51', 'D52', 'D53', 'D0', 'D1']) expect(driverPins).not.toContain(precious);
   });
 
+  it('drops unlocked pins of roles that no longer exist, and keeps locked ones', () => {
+    const config = withPins(withPins(buildConfig({ source: 'ppm' }), { 'input/rx': 'D4', 'Driver 1/c.pwm': 'D5' }), { 'input/ch9': 'A5' }, true);
+    const result = assignPins(config);
+    expect(result.ok).toBe(true);
+    if (!result.ok) return;
+    expect(result.config.wiring.inputPins.rx).toBeUndefined();
+    expect(result.config.wiring.drivers[0].pins['c.pwm']).toBeUndefined();
+    expect(result.config.wiring.inputPins.ch9).toEqual({ pin: 'A5', locked: true });
+  });
+
   it('puts the status LED on the board’s LED when the SPI bus leaves it free', () => {
     const result = assignPins(buildConfig({ source: 'ppm' }));
     expect(result.ok && result.config.wiring.statusLed.pin).toBe('D13');

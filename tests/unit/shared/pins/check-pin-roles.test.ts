@@ -205,6 +205,11 @@ describe('role-unknown', () => {
   it('is quiet for a role the driver has', () => {
     expect(codes(unoPlan())).not.toContain('role-unknown');
   });
+
+  it('warns about an input pin left over from another input source', () => {
+    const plan = unoPlan({}, { 'input/rx': 'D4' });
+    expect(problemsWith(plan, 'role-unknown')[0]).toMatchObject({ roles: ['input/rx'], path: ['wiring', 'inputPins', 'rx', 'pin'] });
+  });
 });
 
 describe('missing pins on an empty plan', () => {
