@@ -135,6 +135,40 @@ interface Variable {
   ranked: Map<BoardPin, RankedPin>;
 }
 
+/**
+ * One pass over the open roles: the one with fewest pins left (most constrained), and a
+ * pigeonhole test: roles outside share groups need that many distinct pins, and the PWM ones
+ * that many distinct PWM units.
+ */
+function survey(state: PlanState, open: Variable[], strict: boolean): { pick: Variable; count: number; pigeonholeOk: boolean } {
+  let pick = open[0];
+  let pickCount = Infinity;
+  const pins = new Set<string>();
+  const units = new Set<string>();
+  let lone = 0;
+  let pwmLone = 0;
+  for (const v of open) {
+    const isLone = v.demand.shareGroup === null;
+    const isPwm = v.demand.need === 'pwm' || v.demand.need === 'servo-pulse';
+    if (isLone) lone += 1;
+    if (isLone && isPwm) pwmLone += 1;
+    let count = 0;
+    for (const pin of v.domain) {
+      if (!state.allows(v.demand, pin, strict)) continue;
+      count += 1;
+      if (!isLone) continue;
+      pins.add(pin.id);
+      if (isPwm) units.add(state.unitOf(v.demand, pin));
+    }
+    if (count < pickCount) {
+      pick = v;
+      pickCount = count;
+    }
+    if (count === 0) return { pick, count: 0, pigeonholeOk: false };
+  }
+  return { pick, count: pickCount, pigeonholeOk: pins.size >= lone && units.size >= pwmLone };
+}
+
 export function searchPlacement(ctx: PlanContext, state: PlanState, demands: PinDemand[], options: SearchOptions): SearchOutcome {
   const variables: Variable[] = demands.map((demand) => {
     const ranked = rankedPinCosts(ctx, demand, options.strict);
@@ -151,39 +185,12 @@ export function searchPlacement(ctx: PlanContext, state: PlanState, demands: Pin
       exhausted = true;
       return false;
     }
-    // One pass: how many pins each open role still has (fewest first = most constrained), and
-    // a pigeonhole test: the open roles outside share groups need that many distinct pins, and
-    // the PWM ones that many distinct PWM units.
-    let pick = open[0];
-    let pickCount = Infinity;
-    const pins = new Set<string>();
-    const units = new Set<string>();
-    let lone = 0;
-    let pwmLone = 0;
-    for (const v of open) {
-      const isLone = v.demand.shareGroup === null;
-      const isPwm = v.demand.need === 'pwm' || v.demand.need === 'servo-pulse';
-      if (isLone) lone += 1;
-      if (isLone && isPwm) pwmLone += 1;
-      let count = 0;
-      for (const pin of v.domain) {
-        if (!state.allows(v.demand, pin, options.strict)) continue;
-        count += 1;
-        if (!isLone) continue;
-        pins.add(pin.id);
-        if (isPwm) units.add(state.unitOf(v.demand, pin));
-      }
-      if (count < pickCount) {
-        pick = v;
-        pickCount = count;
-      }
-      if (count === 0) break;
-    }
-    if (pickCount === 0) {
+    const { pick, count, pigeonholeOk } = survey(state, open, options.strict);
+    if (count === 0) {
       starved.set(pick, (starved.get(pick) ?? 0) + 1);
       return false;
     }
-    if (pins.size < lone || units.size < pwmLone) return false;
+    if (!pigeonholeOk) return false;
     const rest = open.filter((v) => v !== pick);
     const score = (p: BoardPin) => pick.ranked.get(p)!.cost + state.bonus(pick.demand, p);
     const values = pick.domain.filter((p) => state.allows(pick.demand, p, options.strict)).sort((a, b) => score(a) - score(b) || pick.ranked.get(a)!.order - pick.ranked.get(b)!.order);
