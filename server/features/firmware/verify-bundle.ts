@@ -3,7 +3,7 @@ import { mkdir, mkdtemp, rm, writeFile } from 'node:fs/promises';
 import { dirname, join } from 'node:path';
 import { RobotConfigSchema } from '@shared/schemas/robot-config';
 import type { BoardId } from '@shared/schemas/ids';
-import { getBoard } from './pending/boards-adapter';
+import { getBoard } from '@shared/boards/boards';
 import type { BundleFile } from './render-bundle';
 import { AVR_TARGETS } from './toolchain/avr-boards';
 import { compileAvrSketch } from './toolchain/avr-compile';

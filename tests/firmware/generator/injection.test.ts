@@ -2,6 +2,7 @@ import { join } from 'node:path';
 import fc from 'fast-check';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { RobotConfigSchema, type RobotConfig } from '@shared/schemas/robot-config';
+import { assignPins } from '@shared/pins/assign-pins';
 import { renderBundle, type BundleFile } from '@server/features/firmware/render-bundle';
 import { compileAvrSketch, type AvrCompileResult } from '@server/features/firmware/toolchain/avr-compile';
 import { runLimited } from '@server/features/firmware/toolchain/run-tool';
@@ -54,8 +55,12 @@ function hostileConfig(names: Names): RobotConfig {
     config.controls.channels.forEach((c) => Object.assign(c, { low: 0, centre: 512, high: 1023 }));
     config.wiring.drivers[0].pins['b.pwm'] = { pin: 'D5', locked: false };
     config.wiring.drivers[0].pins['b.in1'] = { pin: 'A1', locked: false };
-    config.wiring.inputPins = { ce: { pin: 'A2', locked: false }, csn: { pin: 'A3', locked: false } };
+    config.wiring.inputPins = {};
     config.wiring.statusLed = { pin: null, locked: false };
+    // The pin plan places the transceiver and the remote's pins.
+    const assigned = assignPins(RobotConfigSchema.parse(config));
+    if (!assigned.ok) throw new Error(assigned.reason);
+    return assigned.config;
   }
   return RobotConfigSchema.parse(config);
 }

@@ -7,6 +7,7 @@ import { FirmwareConfigError } from '@server/features/firmware/model/firmware-co
 import { configHash } from '@server/features/firmware/model/config-hash';
 import { renderBundle, type BundleFile } from '@server/features/firmware/render-bundle';
 import { zipBundle } from '@server/features/firmware/zip-bundle';
+import { getBoard } from '@shared/boards/boards';
 import { sampleConfig } from '../helpers/sample-config';
 
 const file = (files: BundleFile[], path: string) => {
@@ -118,7 +119,7 @@ describe('a configuration that cannot become firmware', () => {
     config.wiring.drivers[0].pins['a.in1'] = { pin: null, locked: false };
     expect(issuesOf(() => renderBundle(config, { revision: 1 }))).toContainEqual({
       path: ['wiring', 'drivers', 0, 'pins', 'a.in1', 'pin'],
-      message: expect.stringContaining('No pin is chosen'),
+      message: expect.stringContaining('has no pin'),
     });
   });
 
@@ -127,7 +128,7 @@ describe('a configuration that cannot become firmware', () => {
     config.wiring.drivers[0].pins['b.pwm'] = { pin: 'D99', locked: false };
     expect(issuesOf(() => renderBundle(config, { revision: 1 }))).toContainEqual({
       path: ['wiring', 'drivers', 0, 'pins', 'b.pwm', 'pin'],
-      message: 'Arduino Uno has no pin "D99"',
+      message: expect.stringContaining(`D99 (for Main driver B PWM) is not a pin of the ${getBoard('uno').shortName}`),
     });
   });
 

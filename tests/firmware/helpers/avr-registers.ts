@@ -23,12 +23,12 @@ const UNO_PWM: Record<number, PwmOutput> = {
   3: { tccra: 0xb0, comBit: 5, ocr: 0xb4 },
 };
 
-/** Arduino pin number (as code writes it: '9', 'A0') → port register and bit on the Uno. */
-export function unoPort(code: string): { port: number; bit: number } {
+/** Arduino pin number (as code writes it: '9', 'A0') → port register, port letter and bit on the Uno. */
+export function unoPort(code: string): { register: number; port: string; bit: number } {
   const n = code.startsWith('A') ? 14 + Number(code.slice(1)) : Number(code);
-  if (n < 8) return { port: PORTD, bit: n };
-  if (n < 14) return { port: PORTB, bit: n - 8 };
-  return { port: PORTC, bit: n - 14 };
+  if (n < 8) return { register: PORTD, port: 'D', bit: n };
+  if (n < 14) return { register: PORTB, port: 'B', bit: n - 8 };
+  return { register: PORTC, port: 'C', bit: n - 14 };
 }
 
 /** Registers to dump so that every pin's level or duty can be read back. */
@@ -41,6 +41,6 @@ export function unoRegisters(): number[] {
 export function unoPinDuty(code: string, regs: Record<number, number>): number {
   const out = UNO_PWM[Number(code)];
   if (out && (regs[out.tccra] >> out.comBit) & 1) return regs[out.ocr];
-  const { port, bit } = unoPort(code);
-  return (regs[port] >> bit) & 1 ? 255 : 0;
+  const { register, bit } = unoPort(code);
+  return (regs[register] >> bit) & 1 ? 255 : 0;
 }

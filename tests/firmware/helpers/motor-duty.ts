@@ -1,6 +1,6 @@
 import type { RobotConfig } from '@shared/schemas/robot-config';
 import { CHANNEL_PREFIXES } from '@shared/drivers/driver-kinds';
-import { findPin, getBoard } from '@server/features/firmware/pending/boards-adapter';
+import { findPin, getBoard } from '@shared/boards/boards';
 import { unoPinDuty } from './avr-registers';
 
 /**

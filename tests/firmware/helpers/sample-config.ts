@@ -37,6 +37,7 @@ export function sampleConfigInput(overrides: Partial<RobotConfigInput> = {}): Ro
       inputPins: { rx: pin('D0') },
       statusLed: pin('D13'),
     },
+    firmware: { serialDiagnostics: false },
     ...overrides,
   };
 }

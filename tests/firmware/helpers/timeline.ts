@@ -39,3 +39,34 @@ export class Timeline {
     return this;
   }
 }
+
+/** One input pin of the Uno: port letter and bit. */
+export interface PortPin {
+  port: string;
+  bit: number;
+}
+
+/**
+ * PPM on one pin: a 300 µs pulse starts each channel, the channel's width later the next one
+ * starts, and after the last channel a sync gap fills the 22.5 ms frame (REFERENCES §5).
+ */
+export function ppmFrames(t: Timeline, pin: PortPin, fromMs: number, toMs: number, widthsUs: number[]): void {
+  for (let frameUs = fromMs * 1000; frameUs + 22_500 <= toMs * 1000; frameUs += 22_500) {
+    let edgeUs = frameUs;
+    for (const width of [...widthsUs, 0]) {
+      t.pin(edgeUs / 1000, pin.port, pin.bit, 1).pin((edgeUs + 300) / 1000, pin.port, pin.bit, 0);
+      edgeUs += width;
+    }
+  }
+}
+
+/** Servo pulses on one wire per channel, every 20 ms, channels one after another. */
+export function rcFrames(t: Timeline, pins: PortPin[], fromMs: number, toMs: number, widthsUs: number[]): void {
+  for (let frameUs = fromMs * 1000; frameUs + 20_000 <= toMs * 1000; frameUs += 20_000) {
+    let startUs = frameUs;
+    pins.forEach((pin, i) => {
+      t.pin(startUs / 1000, pin.port, pin.bit, 1).pin((startUs + widthsUs[i]) / 1000, pin.port, pin.bit, 0);
+      startUs += widthsUs[i] + 100;
+    });
+  }
+}

@@ -12,6 +12,14 @@ export function unoWiredConfig(layout: DriveLayoutId, input: InputSourceId, driv
   const config = structuredClone(buildStarterConfig({ layout, board: 'uno', input, driver }));
   const pwm = ['D9', 'D10', 'D5', 'D6', 'D3', 'D11'];
   const digital = ['D2', 'D4', 'D7', 'D8', 'D12', 'A0', 'A1', 'A2', 'A4', 'A5'];
+  const take = (pin: string) => digital.splice(digital.indexOf(pin), 1)[0];
+  if (input === 'ppm') config.wiring.inputPins = { ppm: { pin: take('D2'), locked: false } };
+  if (input === 'rc-pwm') {
+    const pulsePins = ['A0', 'A1', 'A2', 'A4', 'A5'];
+    config.wiring.inputPins = Object.fromEntries(
+      config.controls.channels.map((c, i) => [`ch${c.number}`, { pin: take(pulsePins[i]), locked: false }]),
+    );
+  }
   for (const d of config.wiring.drivers) {
     for (const role of driverPinRoles(d.kind, d.motors.length)) {
       if (role.optional) continue;
@@ -20,7 +28,11 @@ export function unoWiredConfig(layout: DriveLayoutId, input: InputSourceId, driv
       d.pins[role.id] = { pin, locked: false };
     }
   }
-  if (input === 'sbus' || input === 'ibus') config.wiring.inputPins = { rx: { pin: 'D0', locked: false } };
+  if (input === 'sbus' || input === 'ibus') {
+    // The Uno's only serial port takes the receiver; the pin plan then wants diagnostics off.
+    config.wiring.inputPins = { rx: { pin: 'D0', locked: false } };
+    config.firmware.serialDiagnostics = false;
+  }
   config.wiring.statusLed = { pin: 'D13', locked: false };
   tweak(config);
   return RobotConfigSchema.parse(config);

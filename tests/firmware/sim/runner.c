@@ -150,7 +150,12 @@ static void apply(const struct event *e, int *first_dump) {
 		avr_irq_t *input = avr_io_getirq(avr, AVR_IOCTL_UART_GETIRQ('0'), UART_IRQ_INPUT);
 		for (int i = 0; i < e->length; i++) avr_raise_irq(input, e->bytes[i]);
 	} else if (e->kind == EV_PIN) {
-		avr_raise_irq(avr_io_getirq(avr, AVR_IOCTL_IOPORT_GETIRQ(e->port), e->bit), (uint32_t)e->level);
+		avr_irq_t *pin = avr_io_getirq(avr, AVR_IOCTL_IOPORT_GETIRQ(e->port), e->bit);
+		if (!pin) {
+			fprintf(stderr, "no pin %c%d on this chip\n", e->port, e->bit);
+			exit(2);
+		}
+		avr_raise_irq(pin, (uint32_t)e->level);
 	} else {
 		print_dump(e, first_dump);
 	}

@@ -16,7 +16,10 @@ export class FirmwareConfigError extends Error {
 export class IssueList {
   readonly issues: FirmwareIssue[] = [];
 
+  /** Adds an issue unless one is already listed for the same field. */
   add(path: (string | number)[], message: string): void {
+    const key = path.join('.');
+    if (this.issues.some((i) => i.path.join('.') === key)) return;
     this.issues.push({ path, message });
   }
 

@@ -2,7 +2,9 @@ import type { RobotConfig } from '@shared/schemas/robot-config';
 import { cString } from '../c-text';
 import { FIRMWARE_GENERATOR_VERSION } from '../generator-version';
 import { computeMixing } from '@shared/kinematics/mixing';
-import { getBoard, type BoardProfile } from '../pending/boards-adapter';
+import { getBoard } from '@shared/boards/boards';
+import { checkPinPlan } from '@shared/pins/check-pins';
+import type { BoardProfile } from '@shared/boards/board-types';
 import { configHash } from './config-hash';
 import { buildControlsModel, type ControlsModel } from './controls-model';
 import { IssueList } from './firmware-config-error';
@@ -61,6 +63,9 @@ function optionalPins(config: RobotConfig, pins: PinRegistry) {
  */
 export function buildFirmwareModel(config: RobotConfig, revision: number): FirmwareModel {
   const issues = new IssueList();
+  // The pin plan's errors first (two roles on one pin, timer and bus clashes …): firmware for a
+  // plan that cannot work is not generated. Its warnings are for the wiring screen.
+  for (const problem of checkPinPlan(config)) if (problem.severity === 'error') issues.add(problem.path, problem.message);
   const board = getBoard(config.wiring.board);
   const pins = new PinRegistry(board, issues);
   const input = buildInputModel(config, pins, issues);

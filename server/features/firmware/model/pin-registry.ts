@@ -1,4 +1,5 @@
-import { findPin, type BoardPin, type BoardProfile } from '../pending/boards-adapter';
+import { findPin } from '@shared/boards/boards';
+import type { BoardPin, BoardProfile } from '@shared/boards/board-types';
 import type { IssueList } from './firmware-config-error';
 
 /** One pin the firmware uses: its macro in mw_config.h and what the wiring table says. */

@@ -1,5 +1,6 @@
 import type { RobotConfig } from '@shared/schemas/robot-config';
-import { findPin, type BoardProfile } from '../pending/boards-adapter';
+import { findPin } from '@shared/boards/boards';
+import type { BoardProfile } from '@shared/boards/board-types';
 import type { IssueList } from './firmware-config-error';
 import type { MotorWiring } from './output-model';
 

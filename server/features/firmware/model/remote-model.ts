@@ -1,6 +1,6 @@
 import type { RobotConfig } from '@shared/schemas/robot-config';
 import { LINK_CHANNEL_COUNT } from '../link-packet';
-import { getBoard, findPin } from '../pending/boards-adapter';
+import { findPin, getBoard } from '@shared/boards/boards';
 import { IssueList } from './firmware-config-error';
 import { CORE_NAMES, type FirmwareModel } from './firmware-model';
 import { PinRegistry, type PinEntry } from './pin-registry';
@@ -13,9 +13,6 @@ export interface RemoteModel {
   sendIntervalMs: number;
   sendRateHz: number;
 }
-
-/** Defaults for an AVR remote: transceiver on D9/D10, sticks on A0…, two-position switches on D2…. */
-const AVR_DEFAULTS = { ce: 'D9', csn: 'D10', analog: ['A0', 'A1', 'A2', 'A3', 'A4', 'A5', 'A6', 'A7'], digital: ['D2', 'D3', 'D4', 'D5', 'D6', 'D7', 'D8'] };
 
 function twoPositionSwitches(config: RobotConfig): Set<number> {
   const { rateSwitch, armingSwitch } = config.controls;
@@ -31,24 +28,21 @@ export function buildRemoteModel(config: RobotConfig, robot: FirmwareModel): Rem
   const link = config.controls.link;
   const board = getBoard(link.remoteBoard);
   const pins = new PinRegistry(board, issues);
-  const avr = board.family === 'avr';
-  const chosen = (role: string, fallback: string | undefined) => link.remotePins[role]?.pin ?? (avr ? (fallback ?? null) : null);
-  pins.use(chosen('ce', AVR_DEFAULTS.ce), ['controls', 'link', 'remotePins', 'ce', 'pin'], 'MW_PIN_NRF_CE', 'transceiver CE', 'remote nRF24L01+');
-  pins.use(chosen('csn', AVR_DEFAULTS.csn), ['controls', 'link', 'remotePins', 'csn', 'pin'], 'MW_PIN_NRF_CSN', 'transceiver CSN', 'remote nRF24L01+');
+  // The pin plan places the remote's roles too (controls.link.remotePins).
+  const chosen = (role: string) => link.remotePins[role]?.pin ?? null;
+  pins.use(chosen('ce'), ['controls', 'link', 'remotePins', 'ce', 'pin'], 'MW_PIN_NRF_CE', 'transceiver CE', 'remote nRF24L01+');
+  pins.use(chosen('csn'), ['controls', 'link', 'remotePins', 'csn', 'pin'], 'MW_PIN_NRF_CSN', 'transceiver CSN', 'remote nRF24L01+');
   pins.use(board.spi.sck, ['controls', 'link'], 'MW_PIN_NRF_SCK', 'transceiver SCK (SPI clock)', 'remote nRF24L01+');
   pins.use(board.spi.mosi, ['controls', 'link'], 'MW_PIN_NRF_MOSI', 'transceiver MOSI', 'remote nRF24L01+');
   pins.use(board.spi.miso, ['controls', 'link'], 'MW_PIN_NRF_MISO', 'transceiver MISO', 'remote nRF24L01+');
   const switches = twoPositionSwitches(config);
-  const analogLeft = [...AVR_DEFAULTS.analog];
-  const digitalLeft = [...AVR_DEFAULTS.digital];
   const channels: RemoteModel['channels'] = [];
   const listed = [...config.controls.channels].filter((c) => c.number <= LINK_CHANNEL_COUNT).sort((a, b) => a.number - b.number);
   for (const channel of listed) {
     const isSwitch = switches.has(channel.number);
-    const fallback = isSwitch ? digitalLeft.shift() : analogLeft.shift();
     const macro = `MW_PIN_CH${channel.number}`;
     const what = isSwitch ? `switch for channel ${channel.number} (to ground)` : `stick or knob for channel ${channel.number} (wiper)`;
-    const entry = pins.use(chosen(`ch${channel.number}`, fallback), ['controls', 'link', 'remotePins', `ch${channel.number}`, 'pin'], macro, what, 'remote');
+    const entry = pins.use(chosen(`ch${channel.number}`), ['controls', 'link', 'remotePins', `ch${channel.number}`, 'pin'], macro, what, 'remote');
     if (!entry) continue;
     const pin = findPin(board, entry.pinId)!;
     if (!pin.analogIn && !pin.digital) issues.add(['controls', 'link', 'remotePins', `ch${channel.number}`, 'pin'], `Pin ${pin.label} cannot be read`);

@@ -19,12 +19,6 @@ const SETTINGS = {
   ibus: { baud: 115200, frame: 'SERIAL_8N1', invert: false },
 } as const;
 
-/** RP2040 UART receive pins (RP2040 datasheet, GPIO function table, from memory). */
-function rp2040Port(gpio: number): string | null {
-  if ([1, 13, 17, 29].includes(gpio)) return 'Serial1';
-  if ([5, 9, 21, 25].includes(gpio)) return 'Serial2';
-  return null;
-}
 
 export function uartModel(config: RobotConfig, source: 'sbus' | 'ibus', pins: PinRegistry, issues: IssueList): UartModel | null {
   const path = ['wiring', 'inputPins', 'rx', 'pin'];
@@ -32,8 +26,10 @@ export function uartModel(config: RobotConfig, source: 'sbus' | 'ibus', pins: Pi
   if (!entry) return null;
   const s = SETTINGS[source];
   const board = pins.board;
+  // The serial port whose receive line is on this pin, from the board profile.
+  const rxPort = entry.pin.uart?.find((u) => u.role === 'rx')?.port;
   if (board.family === 'avr') {
-    const uart = board.uarts.find((u) => u.rx === entry.pinId);
+    const uart = board.uarts.find((u) => u.port === rxPort);
     if (!uart) {
       const choices = board.uarts.map((u) => u.rx).filter(Boolean).join(', ');
       issues.add(path, `Pin ${entry.pinLabel} is not a serial receive pin on ${board.name} (use ${choices})`);
@@ -57,9 +53,10 @@ export function uartModel(config: RobotConfig, source: 'sbus' | 'ibus', pins: Pi
       note: `${uart.port} on ${entry.pinLabel}${s.invert ? ', inverted in the UART (no external inverter needed)' : ''}.`,
     };
   }
-  const port = rp2040Port(Number(entry.code));
+  const port = rxPort;
   if (!port) {
-    issues.add(path, `Pin ${entry.pinLabel} is not a UART receive pin on ${board.name} (use GP1, GP5, GP9, GP13, GP17 or GP21)`);
+    const choices = board.uarts.map((u) => u.rx).filter(Boolean).join(', ');
+    issues.add(path, `Pin ${entry.pinLabel} is not a UART receive pin on ${board.name} (use ${choices})`);
     return null;
   }
   const invert = s.invert ? ' MW_INPUT_SERIAL.setInvertRX(true);' : '';
