@@ -43,7 +43,9 @@ describe('a differential robot fed a PPM sum signal', () => {
     const pin = portOf(config, 'ppm');
     const t = new Timeline('ibus');
     ppmFrames(t, pin, 50, 400, centred);
-    ppmFrames(t, pin, 400, 2600, moved);
+    // Ten frames with a 400 µs channel: out of range, so bad frames.
+    ppmFrames(t, pin, 400, 625, centred.map((w, i) => (i === 6 ? 400 : w)));
+    ppmFrames(t, pin, 625, 2600, moved);
     t.dump(2590, 'moved');
     result = await simulate((await buildForSimulator(config, 1)).elfPath, {
       mcu: 'atmega328p',
@@ -63,13 +65,13 @@ describe('a differential robot fed a PPM sum signal', () => {
     expect(duties(config, result, 'signal-gone')).toEqual([0, 0]);
   });
 
-  it('reports about 44 good frames a second, then the failsafe, in its health lines', () => {
+  it('reports about 44 good frames a second, the bad frames and then the failsafe in its health lines', () => {
     const lines = result.uart.toString('latin1').split('\r\n').filter((l) => l.startsWith('health '));
     const rates = lines.map((l) => Number(/good=(\d+)\/s/.exec(l)![1]));
     // One frame every 22.5 ms is 44.4 frames a second.
     expect(Math.max(...rates)).toBeGreaterThanOrEqual(43);
     expect(Math.max(...rates)).toBeLessThanOrEqual(45);
-    expect(lines[lines.length - 1]).toMatch(/failsafes=1 state=waiting for=input/);
+    expect(lines[lines.length - 1]).toMatch(/ bad=10 .* failsafes=1 state=waiting for=input/);
   });
 });
 
