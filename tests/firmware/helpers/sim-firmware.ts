@@ -14,12 +14,15 @@ export interface SimBuild {
   ramBytes: number;
 }
 
-/** Renders a bundle and compiles its robot sketch for the Uno with simulator marks on GPIOR0. */
-export async function buildForSimulator(config: RobotConfig, revision: number): Promise<SimBuild> {
+/**
+ * Renders a bundle and compiles its robot sketch for the Uno with simulator marks on GPIOR0
+ * (`MW_SIM_MARKS_ATOMIC` also holds interrupts off inside the marked control step).
+ */
+export async function buildForSimulator(config: RobotConfig, revision: number, marks = 'MW_SIM_MARKS'): Promise<SimBuild> {
   const files = renderBundle(config, { revision });
   const root = await writeBundle(files, 'sim-');
   const folder = sketchFolders(files)[0];
-  const build = await compileAvrSketch(join(root, folder), 'uno', { defines: ['MW_SIM_MARKS'], outDir: join(root, 'build') });
+  const build = await compileAvrSketch(join(root, folder), 'uno', { defines: [marks], outDir: join(root, 'build') });
   if (!build.ok) throw new Error(build.messages);
   return { files, elfPath: build.elfPath!, flashBytes: build.flashBytes, ramBytes: build.ramBytes };
 }

@@ -18,6 +18,8 @@ export interface SlotModel {
 
 export interface AxisModel {
   name: string;
+  /** Has a channel (slot >= 0). */
+  mapped: boolean;
   slot: number;
   reverse: number;
   deadbandQ: number;
@@ -95,6 +97,7 @@ export function buildControlsModel(config: RobotConfig, input: InputModel, issue
     const axis = controls.axes[name];
     return {
       name,
+      mapped: axis.channel !== null,
       slot: slotOf(axis.channel),
       reverse: axis.reverse ? 1 : 0,
       deadbandQ: q14(axis.deadband),
