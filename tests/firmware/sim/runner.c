@@ -10,14 +10,17 @@
  *   uart <cycle> <hex bytes>     push bytes into UART0's receiver at this cycle
  *   pin <port> <bit> <cycle> <0|1>  drive an input pin (port letter A..L)
  *   dump <cycle> <tag>           read the `regs` addresses at this cycle
+ *   watch <port> <bit>           record every level change of this pin (outputs included)
  *
  * It prints one JSON object: the cycle reached, why it stopped, everything UART0 sent
- * (hex), the marks as [cycle, value] pairs and the dumps.
+ * (hex), the marks as [cycle, value] pairs, the watched edges as [cycle, pin, level] (pin =
+ * port letter code * 8 + bit) and the dumps.
  */
 #include <stdio.h>
 #include <stdlib.h>
 #include <string.h>
 #include <unistd.h>
+#include <stdint.h>
 #include <simavr/sim_avr.h>
 #include <simavr/sim_elf.h>
 #include <simavr/sim_io.h>
@@ -47,6 +50,8 @@ static unsigned char *uart_out;
 static size_t uart_len, uart_cap;
 static unsigned long long (*marks)[2];
 static size_t mark_count, mark_cap;
+static unsigned long long (*edges)[3];
+static size_t edge_count, edge_cap;
 static int stop_requested;
 static avr_t *avr;
 static FILE *json; /* the original standard output; libsimavr's own messages go to stderr */
@@ -73,6 +78,24 @@ static void on_mark_write(struct avr_t *core, avr_io_addr_t addr, uint8_t value,
 	marks[mark_count][1] = value;
 	mark_count++;
 	if (value == 0xFF) stop_requested = 1;
+}
+
+static void on_pin_change(struct avr_irq_t *irq, uint32_t value, void *param) {
+	(void)irq;
+	edges = grow(edges, &edge_cap, edge_count + 1, sizeof *edges);
+	edges[edge_count][0] = avr->cycle;
+	edges[edge_count][1] = (unsigned long long)(uintptr_t)param;
+	edges[edge_count][2] = value;
+	edge_count++;
+}
+
+static void watch_pin(char port, int bit) {
+	avr_irq_t *pin = avr_io_getirq(avr, AVR_IOCTL_IOPORT_GETIRQ(port), bit);
+	if (!pin) {
+		fprintf(stderr, "no pin %c%d on this chip\n", port, bit);
+		exit(2);
+	}
+	avr_irq_register_notify(pin, on_pin_change, (void *)(uintptr_t)(port * 8 + bit));
 }
 
 static struct event *new_event(void) {
@@ -122,6 +145,14 @@ static unsigned long long read_script(FILE *in, unsigned *mark_addr) {
 				fprintf(stderr, "bad pin line: %s", line);
 				exit(2);
 			}
+		} else if (!strcmp(word, "watch")) {
+			char port;
+			int bit;
+			if (sscanf(rest, " %c %d", &port, &bit) != 2) {
+				fprintf(stderr, "bad watch line: %s", line);
+				exit(2);
+			}
+			watch_pin(port, bit);
 		} else if (!strcmp(word, "dump")) {
 			struct event *e = new_event();
 			e->kind = EV_DUMP;
@@ -215,6 +246,8 @@ int main(int argc, char **argv) {
 	for (size_t i = 0; i < uart_len; i++) fprintf(json, "%02x", uart_out[i]);
 	fprintf(json, "\",\"marks\":[");
 	for (size_t i = 0; i < mark_count; i++) fprintf(json, "%s[%llu,%llu]", i ? "," : "", marks[i][0], marks[i][1]);
+	fprintf(json, "],\"edges\":[");
+	for (size_t i = 0; i < edge_count; i++) fprintf(json, "%s[%llu,%llu,%llu]", i ? "," : "", edges[i][0], edges[i][1], edges[i][2]);
 	fprintf(json, "]}\n");
 	return 0;
 }

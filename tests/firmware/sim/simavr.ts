@@ -14,6 +14,12 @@ export type SimEvent =
   | { kind: 'pin'; port: string; bit: number; cycle: number; level: 0 | 1 }
   | { kind: 'dump'; cycle: number; tag: string };
 
+/** A pin whose every level change is recorded. */
+export interface WatchedPin {
+  port: string;
+  bit: number;
+}
+
 export interface SimScript {
   mcu: 'atmega328p' | 'atmega2560';
   limitCycles: number;
@@ -21,6 +27,7 @@ export interface SimScript {
   registers?: number[];
   /** I/O data-space address whose writes are recorded (GPIOR0 = 0x3E); 0xFF written there stops the run. */
   markAddress?: number;
+  watch?: WatchedPin[];
   events: SimEvent[];
 }
 
@@ -35,8 +42,13 @@ export interface SimResult {
   reason: 'limit' | 'marker' | 'done' | 'crashed';
   uart: Buffer;
   marks: [number, number][];
+  /** Level changes of watched pins: cycle, pin (port letter code × 8 + bit), level. */
+  edges: [number, number, number][];
   dumps: SimDump[];
 }
+
+/** The pin number in `edges` for a port letter and bit. */
+export const edgePin = (port: string, bit: number) => port.charCodeAt(0) * 8 + bit;
 
 export const F_CPU = 16_000_000;
 export const cyclesPerMs = F_CPU / 1000;
@@ -67,6 +79,7 @@ function scriptText(script: SimScript): string {
   const lines = [`limit ${Math.round(script.limitCycles)}`];
   if (script.registers?.length) lines.push(`regs ${script.registers.map((r) => r.toString(16)).join(' ')}`);
   if (script.markAddress !== undefined) lines.push(`mark ${script.markAddress.toString(16)}`);
+  for (const pin of script.watch ?? []) lines.push(`watch ${pin.port} ${pin.bit}`);
   for (const event of script.events) {
     const cycle = Math.round(event.cycle);
     if (event.kind === 'uart') {
