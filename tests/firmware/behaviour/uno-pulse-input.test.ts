@@ -110,3 +110,42 @@ describe('a differential robot fed servo pulses, one wire per channel', () => {
     expect(duties(config, result, 'channels-missing')).toEqual([0, 0]);
   });
 });
+
+describe('serial commands when the serial port is free', () => {
+  let config: RobotConfig;
+  let result: SimResult;
+  const text = (s: string) => [...Buffer.from(s, 'latin1')];
+
+  beforeAll(async () => {
+    config = unoWiredConfig('differential', 'ppm', 'pwm-in1-in2-stby', noArming);
+    config.firmware.serialDiagnostics = false;
+    const t = new Timeline('ibus');
+    t.events.push({ kind: 'uart', cycle: 100 * cyclesPerMs, bytes: text('about\n') });
+    t.events.push({ kind: 'uart', cycle: 150 * cyclesPerMs, bytes: text('health\n') });
+    t.events.push({ kind: 'uart', cycle: 200 * cyclesPerMs, bytes: text('bench\n') });
+    t.dump(600, 'bench-running');
+    t.events.push({ kind: 'uart', cycle: 700 * cyclesPerMs, bytes: text('x') });
+    t.dump(750, 'bench-stopped');
+    result = await simulate((await buildForSimulator(config, 4)).elfPath, {
+      mcu: 'atmega328p',
+      limitCycles: 800 * cyclesPerMs,
+      registers: unoRegisters(),
+      events: t.events,
+    });
+  });
+
+  it('prints the boot line again for "about" and a health line for "health"', () => {
+    const lines = result.uart.toString('latin1').split('\r\n');
+    expect(lines.filter((l) => l.startsWith('boot robot=') && l.includes('revision=4'))).toHaveLength(2);
+    expect(lines.filter((l) => l.startsWith('health good='))).toHaveLength(1);
+  });
+
+  it('runs the bench test on "bench" and stops it on the next key', () => {
+    const duty = Math.round(config.firmware.benchTestDuty * 255);
+    const running = duties(config, result, 'bench-running');
+    expect(Math.abs(running[0] - duty)).toBeLessThanOrEqual(1);
+    expect(running[1]).toBe(0);
+    expect(duties(config, result, 'bench-stopped')).toEqual([0, 0]);
+    expect(result.uart.toString('latin1')).toContain('bench motor 1/2 "Left" forward\r\nbench stopped');
+  });
+});
