@@ -1,7 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { RobotConfig } from '@shared/schemas/robot-config';
 import { cyclesPerMs, simulate, type SimResult } from '../sim/simavr';
-import { unoPort, unoRegisters } from '../helpers/avr-registers';
+import { ICR1L, TCCR1B, unoPort, unoRegisters } from '../helpers/avr-registers';
 import { signedUnoDuty } from '../helpers/motor-duty';
 import { buildForSimulator, engineDuties } from '../helpers/sim-firmware';
 import { ppmFrames, rcFrames, Timeline } from '../helpers/timeline';
@@ -147,5 +147,34 @@ describe('serial commands when the serial port is free', () => {
     expect(running[1]).toBe(0);
     expect(duties(config, result, 'bench-stopped')).toEqual([0, 0]);
     expect(result.uart.toString('latin1')).toContain('bench motor 1/2 "Left" forward\r\nbench stopped');
+  });
+});
+
+describe('a chosen PWM frequency on the Uno', () => {
+  let config: RobotConfig;
+  let result: SimResult;
+  const moved = [1500, 1750, 1500, 1350, 2000, 1500, 1500, 1500];
+
+  beforeAll(async () => {
+    config = unoWiredConfig('differential', 'ppm', 'pwm-in1-in2-stby', (c) => {
+      noArming(c);
+      c.wiring.drivers[0].pwmFrequencyHz = 20_000;
+    });
+    const t = new Timeline('ibus');
+    ppmFrames(t, portOf(config, 'ppm'), 50, 400, [1500, 1500, 1500, 1500, 1000, 1500, 1500, 1500]);
+    ppmFrames(t, portOf(config, 'ppm'), 400, 800, moved);
+    t.dump(790, 'moved');
+    result = await simulate((await buildForSimulator(config, 1)).elfPath, { mcu: 'atmega328p', limitCycles: 800 * cyclesPerMs, registers: unoRegisters(), events: t.events });
+  });
+
+  it('runs timer 1 in phase-correct mode with ICR1 = 400 at clock / 1: 16 MHz / (2 × 400) = 20 kHz', () => {
+    const regs = result.dumps[0].regs;
+    expect(regs[ICR1L] | (regs[ICR1L + 1] << 8)).toBe(400);
+    expect(regs[TCCR1B] & 0x1f).toBe(0x10 | 0x01);
+  });
+
+  it("scales the duties to that TOP and still matches the engine's", () => {
+    const expected = engineDuties(config, { 1: moved[0], 2: moved[1], 4: moved[3], 5: moved[4] }).duties;
+    duties(config, result, 'moved').forEach((d, i) => expect(Math.abs(d - expected[i])).toBeLessThanOrEqual(PULSE_TOLERANCE));
   });
 });

@@ -13,6 +13,11 @@ interface PwmOutput {
   ocr: number;
 }
 
+// Timer 1 (16 bits): TCCR1B 0x81 (WGM13 is bit 4), ICR1 0x86/0x87, OCR1A 0x88/0x89, OCR1B 0x8A/0x8B.
+export const TCCR1B = 0x81;
+export const ICR1L = 0x86;
+const TIMER1_HIGH_BYTES = [0x87, 0x89, 0x8b];
+
 /** Uno timer outputs (digital_pin_to_timer_PGM in the core's standard variant). */
 const UNO_PWM: Record<number, PwmOutput> = {
   6: { tccra: 0x44, comBit: 7, ocr: 0x47 },
@@ -34,13 +39,21 @@ export function unoPort(code: string): { register: number; port: string; bit: nu
 /** Registers to dump so that every pin's level or duty can be read back. */
 export function unoRegisters(): number[] {
   const pwm = Object.values(UNO_PWM).flatMap((o) => [o.tccra, o.ocr]);
-  return [...new Set([PORTB, PORTC, PORTD, ...pwm])].sort((a, b) => a - b);
+  return [...new Set([PORTB, PORTC, PORTD, TCCR1B, ICR1L, ...TIMER1_HIGH_BYTES, ...pwm])].sort((a, b) => a - b);
 }
 
-/** What analogWrite() last set on a pin, 0..255, or the digital level as 0 / 255. */
+const word = (regs: Record<number, number>, low: number) => regs[low] | ((regs[low + 1] ?? 0) << 8);
+
+/**
+ * The duty on a pin as 0..255: what analogWrite() set, or the digital level as 0 / 255. When
+ * timer 1 runs with ICR1 as TOP (mode 10, a chosen PWM frequency), OCR1x / ICR1 scaled to 255.
+ */
 export function unoPinDuty(code: string, regs: Record<number, number>): number {
   const out = UNO_PWM[Number(code)];
-  if (out && (regs[out.tccra] >> out.comBit) & 1) return regs[out.ocr];
+  if (out && (regs[out.tccra] >> out.comBit) & 1) {
+    if (out.tccra === 0x80 && (regs[TCCR1B] >> 4) & 1) return (word(regs, out.ocr) * 255) / word(regs, ICR1L);
+    return regs[out.ocr];
+  }
   const { register, bit } = unoPort(code);
   return (regs[register] >> bit) & 1 ? 255 : 0;
 }

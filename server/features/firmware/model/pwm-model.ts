@@ -1,20 +1,37 @@
 import type { RobotConfig } from '@shared/schemas/robot-config';
 import { findPin } from '@shared/boards/boards';
 import type { BoardProfile } from '@shared/boards/board-types';
+import { formatHz, pwmSettingForPin, type PwmSetting } from '@shared/boards/pwm-timing';
+import { DRIVER_KINDS } from '@shared/drivers/driver-kinds';
 import type { IssueList } from './firmware-config-error';
 import type { MotorWiring } from './output-model';
 
+/** One AVR timer the firmware re-programs, as the pin plan's PWM timing says. */
 export interface AvrTimerSetting {
   timer: number;
+  /** Clock-select bits for TCCRnB (position of the prescaler in the timer's list, plus one). */
   clockSelect: number;
-  hz: number;
+  /** 16-bit timer in phase-correct mode 10 with ICRn as TOP; otherwise TOP stays 255. */
+  icrTop: number | null;
+  /** 8-bit timer: fast PWM (mode 3) or phase-correct (mode 1). */
+  fast: boolean;
+  hz: string;
   asked: number;
+}
+
+/** A PWM pin on a timer with its own TOP: duty is scaled to it and written to OCRnx directly. */
+export interface TopPin {
+  macro: string;
+  timer: number;
+  channel: string;
+  /** round(TOP × 257): duty × this >> 16 is duty × TOP / 255 (1/255 ≈ 257/65536). */
+  scale: number;
 }
 
 export interface PwmModel {
   max: number;
-  /** AVR: timers whose prescaler changes (never timer 0). */
   avrTimers: AvrTimerSetting[];
+  topPins: TopPin[];
   /** ESP32 and RP2040: one frequency for all PWM outputs. */
   frequencyHz: number;
   bits: number;
@@ -29,67 +46,74 @@ export interface ServoModel {
   pinMacros: string[];
 }
 
-const F_CPU = 16_000_000;
-// ESP32 LEDC runs from the 80 MHz APB clock: at most floor(log2(80 MHz / f)) bits (REFERENCES §3).
-const LEDC_CLOCK = 80_000_000;
 /** Up to 8 pulses of at most 2.2 ms fit one 20 ms servo frame. */
 export const MAX_SERVO_OUTPUTS = 8;
+/** The control step's duty arithmetic holds at most 14-bit duties (Q14 × max < 2^28). */
+const MAX_DUTY_BITS = 14;
 
-/** AVR timers 1–5 in the core's 8-bit phase-correct mode: f = 16 MHz / prescaler / 510. */
-function nearestPrescaler(prescalers: number[], asked: number): { index: number; hz: number } {
-  let best = { index: 0, hz: F_CPU / prescalers[0] / 510 };
-  for (let i = 1; i < prescalers.length; i++) {
-    const hz = F_CPU / prescalers[i] / 510;
-    if (Math.abs(Math.log(hz / asked)) < Math.abs(Math.log(best.hz / asked))) best = { index: i, hz };
-  }
-  return best;
+interface PinSetting {
+  macro: string;
+  /** The timer output ('A', 'B', 'C') on AVR. */
+  channel: string | null;
+  setting: PwmSetting;
+  asked: number | null;
 }
 
-function avrTimers(config: RobotConfig, board: BoardProfile, wiring: MotorWiring[], notes: string[]): AvrTimerSetting[] {
-  const settings = new Map<number, AvrTimerSetting>();
-  for (const motor of wiring) {
-    const asked = config.wiring.drivers[motor.driverIndex].pwmFrequencyHz;
-    if (asked === null) continue;
-    for (const { pinId } of motor.pwmPins) {
-      const pwm = findPin(board, pinId)?.pwm;
-      if (!pwm || !('timer' in pwm)) continue;
-      if (pwm.timer === 0) {
-        notes.push(`Pin ${pinId} stays at the default PWM frequency: timer 0 also runs millis() and micros().`);
-        continue;
-      }
-      const timer = board.timers.find((t) => t.id === pwm.timer);
-      if (!timer) continue;
-      const { index, hz } = nearestPrescaler(timer.prescalers, asked);
-      const existing = settings.get(timer.id);
-      if (existing && existing.clockSelect !== index + 1) {
-        notes.push(`Timer ${timer.id} runs at ${existing.hz} Hz for an earlier driver; pin ${pinId} shares it.`);
-        continue;
-      }
-      settings.set(timer.id, { timer: timer.id, clockSelect: index + 1, hz: Math.round(hz), asked });
+/** Each driver PWM pin with the setting the pin plan's timing function gives it. */
+function pinSettings(config: RobotConfig, board: BoardProfile, wiring: MotorWiring[]): PinSetting[] {
+  return wiring.flatMap((motor) => {
+    const driver = config.wiring.drivers[motor.driverIndex];
+    const ceiling = DRIVER_KINDS[driver.kind].maxPwmHz ?? Infinity;
+    return motor.pwmPins.flatMap(({ macro, pinId }) => {
+      const pin = findPin(board, pinId);
+      const setting = pin ? pwmSettingForPin(board, pin, driver.pwmFrequencyHz, ceiling) : null;
+      const channel = pin?.pwm && 'timer' in pin.pwm ? pin.pwm.channel : null;
+      return setting ? [{ macro, channel, setting, asked: driver.pwmFrequencyHz }] : [];
+    });
+  });
+}
+
+/**
+ * AVR: the timers to re-program (never timer 0, which keeps millis()), and the pins whose
+ * timer then has its own TOP. The pin check refuses two frequencies on one timer, so the
+ * first request for a timer is the only one.
+ */
+function avrModel(settings: PinSetting[], board: BoardProfile) {
+  const timers = new Map<number, AvrTimerSetting>();
+  const topPins: TopPin[] = [];
+  for (const { macro, channel, setting, asked } of settings) {
+    const avr = setting.avr;
+    if (!avr || asked === null || avr.timer === 0) continue;
+    const timer = board.timers.find((t) => t.id === avr.timer)!;
+    if (!timers.has(avr.timer)) {
+      timers.set(avr.timer, {
+        timer: avr.timer,
+        clockSelect: timer.prescalers.indexOf(avr.prescaler) + 1,
+        icrTop: avr.topRegister === 'ICR' ? avr.top : null,
+        fast: avr.mode === 'fast',
+        hz: formatHz(setting.actualHz),
+        asked,
+      });
     }
+    if (avr.topRegister === 'ICR' && channel) topPins.push({ macro, timer: avr.timer, channel, scale: Math.round(avr.top * 257) });
   }
-  return [...settings.values()].sort((a, b) => a.timer - b.timer);
-}
-
-function sharedFrequency(config: RobotConfig, board: BoardProfile): number {
-  const asked = config.wiring.drivers.map((d) => d.pwmFrequencyHz).filter((f): f is number => f !== null);
-  return asked.length > 0 ? Math.max(...asked) : Math.round(board.defaultPwmHz['*'] ?? 1000);
+  return { timers: [...timers.values()].sort((a, b) => a.timer - b.timer), topPins };
 }
 
 export function buildPwmModel(config: RobotConfig, board: BoardProfile, wiring: MotorWiring[]): PwmModel {
   const notes: string[] = [];
-  const pinMacros = wiring.flatMap((w) => w.pwmPins.map((p) => p.macro));
+  const settings = pinSettings(config, board, wiring);
+  const pinMacros = settings.map((s) => s.macro);
   if (board.family === 'avr') {
-    return { max: 255, avrTimers: avrTimers(config, board, wiring, notes), frequencyHz: 0, bits: 8, pinMacros, notes };
+    const { timers, topPins } = avrModel(settings, board);
+    return { max: 255, avrTimers: timers, topPins, frequencyHz: 0, bits: 8, pinMacros, notes };
   }
-  const frequencyHz = sharedFrequency(config, board);
+  const frequencyHz = Math.round(settings.find((s) => s.asked !== null)?.setting.actualHz ?? board.defaultPwmHz['*'] ?? 1000);
   if (board.family === 'esp32') {
-    const bits = Math.min(10, Math.floor(Math.log2(LEDC_CLOCK / frequencyHz)));
-    return { max: 2 ** bits - 1, avrTimers: [], frequencyHz, bits, pinMacros, notes };
+    const bits = Math.min(MAX_DUTY_BITS, Math.max(...settings.map((s) => s.setting.ledc?.bits ?? MAX_DUTY_BITS), 1));
+    return { max: 2 ** bits - 1, avrTimers: [], topPins: [], frequencyHz, bits, pinMacros, notes };
   }
-  const distinct = new Set(config.wiring.drivers.map((d) => d.pwmFrequencyHz).filter((f) => f !== null));
-  if (distinct.size > 1) notes.push(`Every PWM output runs at ${frequencyHz} Hz: the core sets one frequency for all.`);
-  return { max: 1023, avrTimers: [], frequencyHz, bits: 10, pinMacros, notes };
+  return { max: 1023, avrTimers: [], topPins: [], frequencyHz, bits: 10, pinMacros, notes };
 }
 
 export function buildServoModel(board: BoardProfile, pinMacros: string[], issues: IssueList): ServoModel {
