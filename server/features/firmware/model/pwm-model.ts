@@ -104,6 +104,16 @@ export function buildPwmModel(config: RobotConfig, board: BoardProfile, wiring: 
   const notes: string[] = [];
   const settings = pinSettings(config, board, wiring);
   const pinMacros = settings.map((s) => s.macro);
+  const described = new Set<string>();
+  for (const { setting, asked } of settings) {
+    if (asked === null) continue;
+    const where = setting.avr ? `timer ${setting.avr.timer}` : 'the PWM outputs';
+    const text = setting.avr?.timer === 0
+      ? `PWM on timer 0 stays at ${formatHz(setting.actualHz)}: millis() and micros() run on that timer.`
+      : `PWM on ${where}: ${setting.formula}${setting.exact ? '' : ` (asked for ${formatHz(asked)})`}.`;
+    if (!described.has(text)) notes.push(text);
+    described.add(text);
+  }
   if (board.family === 'avr') {
     const { timers, topPins } = avrModel(settings, board);
     return { max: 255, avrTimers: timers, topPins, frequencyHz: 0, bits: 8, pinMacros, notes };
