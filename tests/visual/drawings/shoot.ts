@@ -41,9 +41,17 @@ try {
   for (const [i, query] of (queries.length ? queries : ['']).entries()) {
     await page.goto(`http://127.0.0.1:${port}/?${query}`);
     await page.waitForTimeout(1200);
+    // hold=w,e: focus the floor view and hold those keys for a while before the shot.
+    const hold = new URLSearchParams(query).get('hold');
+    if (hold) {
+      await page.focus('[role=application]');
+      for (const key of hold.split(',')) await page.keyboard.down(key);
+      await page.waitForTimeout(Number(new URLSearchParams(query).get('ms') ?? 2500));
+    }
     const file = join(outDir, `${String(i).padStart(2, '0')}-${query.replace(/[^a-z0-9]+/gi, '_') || 'all'}.png`);
     await page.screenshot({ path: file, fullPage: process.env.FULL === '1' });
     console.log(file);
+    if (hold) for (const key of hold.split(',')) await page.keyboard.up(key);
   }
 } finally {
   await context.close();

@@ -2,9 +2,10 @@ import { useId } from 'react';
 import type { MotionFractions } from '@shared/kinematics/motion-words';
 import { drawingFrame, labelPlacement, wheelShape, type DrawingFrame, type WheelLike, type WheelShape } from '../lib/chassis-geometry';
 import { describeChassis } from '../lib/describe-chassis';
-import { formatPercent, type ScreenPoint } from '../lib/screen-frame';
+import { topRollerAngleDeg } from '@shared/kinematics/roller-pattern';
+import { formatPercent, screenDirection, type ScreenPoint } from '../lib/screen-frame';
 import { Arrow, DrawingGrid, ForwardMark, ScaleBar, TurnArrow } from './drawing-parts';
-import { WheelGlyph } from './wheel-glyph';
+import { CommandArrow, WheelGlyph } from './wheel-glyph';
 
 export interface ChassisDrawingProps {
   /** The wheel table (`config.chassis.wheels`), drawn to scale. */
@@ -24,6 +25,8 @@ export interface ChassisDrawingProps {
   highlightMotor?: string | null;
   /** Also draw the ground rollers, dashed (they lie mirrored beneath the top rollers). */
   showGroundRollers?: boolean;
+  /** Extend each mecanum wheel's top-roller line across the drawing, so the X or O shows. */
+  rollerGuides?: boolean;
   className?: string;
 }
 
@@ -42,6 +45,7 @@ export function ChassisDrawing({
   intendedMotion,
   highlightMotor = null,
   showGroundRollers = false,
+  rollerGuides = false,
   className,
 }: ChassisDrawingProps) {
   const id = useId();
@@ -61,7 +65,8 @@ export function ChassisDrawing({
       <DrawingGrid width={width} height={height} origin={frame.origin} step={frame.gridMm * frame.scale} />
       <CentreLines frame={frame} />
       <BodyPlate frame={frame} />
-      <ForwardMark at={{ x: frame.origin.x, y: Math.max(34, topOfRobot(frame, shapes) - 8) }} />
+      {rollerGuides && <RollerGuides shapes={shapes} frame={frame} />}
+      <ForwardMark at={{ x: 18, y: 40 }} />
       {shapes.map((shape, i) => (
         <WheelGlyph
           key={`${shape.wheel.name}-${i}`}
@@ -85,10 +90,31 @@ export function ChassisDrawing({
   );
 }
 
-function topOfRobot(frame: DrawingFrame, shapes: WheelShape[]): number {
-  const plateTop = frame.outline.kind === 'circle' ? frame.origin.y - frame.outline.radiusMm * frame.scale : frame.origin.y - frame.outline.front * frame.scale;
-  const wheelTops = shapes.map((s) => s.centre.y - Math.max(s.halfLength, s.halfWidth));
-  return Math.min(plateTop, ...wheelTops);
+/** Each mecanum wheel's top-roller line, extended through the plate (dashed). */
+function RollerGuides({ shapes, frame }: { shapes: WheelShape[]; frame: DrawingFrame }) {
+  const reach = Math.hypot(frame.width, frame.height);
+  return (
+    <g aria-hidden="true" data-testid="roller-guides">
+      {shapes
+        .filter((s) => s.wheel.kind === 'mecanum')
+        .map((s, i) => {
+          const d = screenDirection(topRollerAngleDeg(s.wheel));
+          return (
+            <line
+              key={i}
+              x1={s.centre.x - d.x * reach}
+              y1={s.centre.y - d.y * reach}
+              x2={s.centre.x + d.x * reach}
+              y2={s.centre.y + d.y * reach}
+              className="stroke-accent"
+              strokeWidth={1.2}
+              strokeDasharray="6 4"
+              opacity={0.8}
+            />
+          );
+        })}
+    </g>
+  );
 }
 
 function CentreLines({ frame }: { frame: DrawingFrame }) {
@@ -111,26 +137,6 @@ function BodyPlate({ frame }: { frame: DrawingFrame }) {
   const w = (outline.left - outline.right) * scale;
   const h = (outline.front - outline.rear) * scale;
   return <rect x={x} y={y} width={w} height={h} rx={Math.min(w, h) * 0.08} className="fill-paper stroke-ink-soft" strokeWidth={1.4} opacity={0.92} />;
-}
-
-/** The way a wheel turns for a command: an arrow along it, as long as the command is strong. */
-function CommandArrow({ shape, command }: { shape: WheelShape; command: number }) {
-  const { centre, angleDeg, halfLength, wheel } = shape;
-  const push = Math.sign(command) * (wheel.reversed ? -1 : 1);
-  if (Math.abs(command) < 0.005) {
-    return (
-      <g transform={`translate(${centre.x} ${centre.y})`} data-testid={`command-${wheel.name}`} data-push={0}>
-        <circle r={5} className="fill-paper-raised stroke-ink-muted" strokeWidth={1.4} />
-        <line x1={-3} y1={0} x2={3} y2={0} className="stroke-ink-muted" strokeWidth={1.4} />
-      </g>
-    );
-  }
-  const length = Math.max(12, (2 * halfLength + 18) * Math.min(1, Math.abs(command)));
-  return (
-    <g transform={`translate(${centre.x} ${centre.y}) rotate(${angleDeg})`} data-testid={`command-${wheel.name}`} data-push={push}>
-      <Arrow from={{ x: (-push * length) / 2, y: 0 }} to={{ x: (push * length) / 2, y: 0 }} className="stroke-accent fill-accent" width={3} head={9} />
-    </g>
-  );
 }
 
 function MotionMark({ frame, motion, intended = false }: { frame: DrawingFrame; motion: MotionFractions; intended?: boolean }) {

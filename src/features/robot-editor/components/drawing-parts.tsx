@@ -45,7 +45,7 @@ export function Arrow({
         strokeWidth={width}
         strokeLinecap="round"
         strokeDasharray={dashed ? '4 3' : undefined}
-        fill="none"
+        style={{ fill: 'none' }}
       />
       <polygon points={points} className={className} strokeWidth={0.8} strokeLinejoin="round" />
     </g>
@@ -162,7 +162,7 @@ export function TurnArrow({
       <path
         d={`M ${p0.x} ${p0.y} A ${radius} ${radius} 0 ${large} ${clockwise ? 1 : 0} ${p1.x} ${p1.y}`}
         className={className}
-        fill="none"
+        style={{ fill: 'none' }}
         strokeWidth={width}
         strokeLinecap="round"
         strokeDasharray={dashed ? '4 3' : undefined}

@@ -42,12 +42,12 @@ function fullScaleWords(mixing: Mixing): Record<StickAxis, string> {
 function ValueCell({ value, ignored }: { value: number; ignored: boolean }) {
   const width = Math.min(1, Math.abs(value)) * 50;
   return (
-    <td className="px-3 py-1.5 text-right">
+    <td className="px-2 py-1.5 text-right">
       <div className="flex items-center justify-end gap-2">
         <span className={`font-mono text-[13px] tabular-nums ${ignored ? 'text-ink-faint' : value === 0 ? 'text-ink-muted' : 'text-ink'}`}>
           {formatSigned(value, 2)}
         </span>
-        <svg viewBox="0 0 100 10" className="h-2.5 w-16 shrink-0" aria-hidden="true">
+        <svg viewBox="0 0 100 10" className="h-2.5 w-10 shrink-0" aria-hidden="true">
           <rect x={0} y={3.5} width={100} height={3} rx={1.5} className="fill-paper-sunken" />
           {width > 0 && (
             <rect x={value < 0 ? 50 - width : 50} y={1} width={width} height={8} rx={1} className={value < 0 ? 'fill-warn' : 'fill-accent'} />
@@ -68,20 +68,20 @@ export function MixingMatrixTable({ mixing, highlightMotor = null, onHighlightMo
   const used: Record<StickAxis, boolean> = { forward: mixing.canDrive, strafe: mixing.canStrafe, yaw: mixing.canTurn };
   const full = fullScaleWords(mixing);
   return (
-    <div className={`font-sans text-ink ${className ?? ''}`}>
+    <div className={`overflow-x-auto font-sans text-ink ${className ?? ''}`}>
       <table className="w-full border-collapse text-sm">
         <caption className="mb-2 text-left text-sm text-ink-muted">
           {caption ?? 'Motor command for each stick pushed fully (−1 full reverse … +1 full ahead).'}
         </caption>
         <thead>
           <tr className="border-b border-rule-strong">
-            <th scope="col" className="px-3 py-1.5 text-left font-semibold">
+            <th scope="col" className="px-2 py-1.5 text-left align-bottom font-semibold">
               Motor
             </th>
             {STICK_AXES.map((axis) => (
-              <th key={axis} scope="col" className={`px-3 py-1.5 text-right font-semibold ${used[axis] ? '' : 'text-ink-faint'}`}>
+              <th key={axis} scope="col" className={`px-2 py-1.5 text-right align-bottom font-semibold ${used[axis] ? '' : 'text-ink-faint'}`}>
                 {AXIS_HEADINGS[axis].title}
-                <span className="ml-1 font-normal text-ink-muted">({AXIS_HEADINGS[axis].hint})</span>
+                <span className="block text-xs font-normal text-ink-muted">{AXIS_HEADINGS[axis].hint}</span>
               </th>
             ))}
           </tr>
@@ -94,7 +94,7 @@ export function MixingMatrixTable({ mixing, highlightMotor = null, onHighlightMo
               onMouseEnter={onHighlightMotor && (() => onHighlightMotor(motor))}
               onMouseLeave={onHighlightMotor && (() => onHighlightMotor(null))}
             >
-              <th scope="row" className="px-3 py-1.5 text-left font-normal">
+              <th scope="row" className="whitespace-nowrap px-2 py-1.5 text-left font-normal">
                 {motor}
               </th>
               {STICK_AXES.map((axis, k) => (
@@ -105,11 +105,11 @@ export function MixingMatrixTable({ mixing, highlightMotor = null, onHighlightMo
         </tbody>
         <tfoot>
           <tr className="text-ink-muted">
-            <th scope="row" className="px-3 py-1.5 text-left text-xs font-normal">
-              Full stick gives
+            <th scope="row" className="whitespace-nowrap px-2 py-1.5 text-left text-xs font-normal">
+              Full stick
             </th>
             {STICK_AXES.map((axis) => (
-              <td key={axis} className="px-3 py-1.5 text-right font-mono text-xs tabular-nums">
+              <td key={axis} className="whitespace-nowrap px-2 py-1.5 text-right font-mono text-xs tabular-nums">
                 {full[axis]}
               </td>
             ))}

@@ -103,6 +103,7 @@ export function WhatIfReversedPanel({ config, defaultMotor = null, motor, onMoto
         </div>
       </div>
       <ChassisDrawing
+        className="max-w-[560px]"
         wheels={config.chassis.wheels}
         title={chosen ? `${AXIS_LABEL[shownAxis]} pushed fully with ${chosen} reversed` : `${AXIS_LABEL[shownAxis]} pushed fully`}
         motorCommands={byMotor}

@@ -65,3 +65,24 @@ export function WheelGlyph({ shape, showDriveArrow = true, showGroundRollers = f
     </g>
   );
 }
+
+/** The way a wheel turns for a command: an arrow along it, as long as the command is strong. */
+export function CommandArrow({ shape, command, showStopped = true }: { shape: WheelShape; command: number; showStopped?: boolean }) {
+  const { centre, angleDeg, halfLength, wheel } = shape;
+  const push = Math.sign(command) * (wheel.reversed ? -1 : 1);
+  if (Math.abs(command) < 0.005) {
+    if (!showStopped) return null;
+    return (
+      <g transform={`translate(${centre.x} ${centre.y})`} data-testid={`command-${wheel.name}`} data-push={0}>
+        <circle r={5} className="fill-paper-raised stroke-ink-muted" strokeWidth={1.4} />
+        <line x1={-3} y1={0} x2={3} y2={0} className="stroke-ink-muted" strokeWidth={1.4} />
+      </g>
+    );
+  }
+  const length = Math.max(12, (2 * halfLength + 18) * Math.min(1, Math.abs(command)));
+  return (
+    <g transform={`translate(${centre.x} ${centre.y}) rotate(${angleDeg})`} data-testid={`command-${wheel.name}`} data-push={push}>
+      <Arrow from={{ x: (-push * length) / 2, y: 0 }} to={{ x: (push * length) / 2, y: 0 }} className="stroke-accent fill-accent" width={3} head={9} />
+    </g>
+  );
+}

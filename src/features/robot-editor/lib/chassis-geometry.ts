@@ -124,7 +124,7 @@ export interface FrameMargins {
   side: number;
 }
 
-export const DEFAULT_MARGINS: FrameMargins = { top: 46, bottom: 42, side: 92 };
+export const DEFAULT_MARGINS: FrameMargins = { top: 40, bottom: 42, side: 92 };
 
 /** Fits the wheels and plate into a drawing `width` × `height`, centred on the robot's centre. */
 export function drawingFrame(wheels: WheelLike[], width: number, height: number, margins: FrameMargins = DEFAULT_MARGINS): DrawingFrame {
