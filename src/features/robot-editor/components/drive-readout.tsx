@@ -1,7 +1,7 @@
 import type { DriveStep } from '@shared/kinematics/drive-step';
 import type { Sticks } from '@shared/kinematics/mixing';
 import { STICK_AXES } from '@shared/schemas/ids';
-import { formatPercent, formatSigned } from '../lib/screen-frame';
+import { formatPercent } from '../lib/screen-frame';
 
 export interface DriveReadoutProps {
   step: DriveStep;
@@ -12,10 +12,20 @@ export interface DriveReadoutProps {
 
 const AXIS_NAME = { forward: 'Forward', strafe: 'Strafe', yaw: 'Yaw' } as const;
 
+const SMALL = 0.005;
+
+/** Body speeds in words with units, e.g. "ahead 0.42 m/s · right 0.10 m/s · turning 35 °/s right". */
+export function twistWords(twist: DriveStep['motion']['twist']): string {
+  const along = Math.abs(twist.vxMps) < SMALL ? 'ahead 0.00 m/s' : `${twist.vxMps > 0 ? 'ahead' : 'back'} ${Math.abs(twist.vxMps).toFixed(2)} m/s`;
+  const side = Math.abs(twist.vyMps) < SMALL ? 'sideways 0.00 m/s' : `${twist.vyMps > 0 ? 'left' : 'right'} ${Math.abs(twist.vyMps).toFixed(2)} m/s`;
+  const degPerS = (twist.omegaRadps * 180) / Math.PI;
+  const turn = Math.abs(degPerS) < 0.5 ? 'turning 0 °/s' : `turning ${Math.abs(degPerS).toFixed(0)} °/s ${degPerS > 0 ? 'left' : 'right'}`;
+  return `${along} · ${side} · ${turn}`;
+}
+
 /** The numbers behind the preview: each stick before and after shaping, and the body motion. */
 export function DriveReadout({ step, sticks, outputLimitPercent }: DriveReadoutProps) {
   const { twist } = step.motion;
-  const yawDeg = (-twist.omegaRadps * 180) / Math.PI;
   return (
     <div className="space-y-2 text-sm">
       <table className="w-full border-collapse">
@@ -46,9 +56,7 @@ export function DriveReadout({ step, sticks, outputLimitPercent }: DriveReadoutP
           ))}
         </tbody>
       </table>
-      <p className="font-mono text-[13px] tabular-nums text-ink-soft">
-        {`ahead ${formatSigned(twist.vxMps, 2)} m/s · left ${formatSigned(twist.vyMps, 2)} m/s · turn right ${formatSigned(yawDeg, 0)} °/s`}
-      </p>
+      <p className="font-mono text-[13px] tabular-nums text-ink-soft">{twistWords(twist)}</p>
       <p className="text-ink">
         The robot {step.motion.words}.
       </p>

@@ -42,6 +42,15 @@ export function topSpeedWords(envelope: MotionEnvelope): string {
   );
 }
 
+/** Whether full stick reaches the wheels' limit everywhere, in words. */
+export function fullStickWords(envelope: MotionEnvelope): string {
+  const reachable = envelope.samples.filter((s) => s.speedMps > 0);
+  if (reachable.length === 0) return '';
+  const worst = Math.min(...reachable.map((s) => s.fullStickMps / s.speedMps));
+  if (worst > 0.99) return 'Full stick reaches the wheel limit in every heading (the two lines coincide).';
+  return `Full stick gives at least ${Math.round(worst * 100)} % of the wheel limit in every heading it can go.`;
+}
+
 /**
  * The motion envelope as a polar plot: the top speed the wheels allow in every heading
  * (filled), and the speed full stick gives after mixing and desaturation (dashed). Heading
@@ -115,6 +124,7 @@ export function EnvelopePlot({ envelope, title = 'Motion envelope', size = 360, 
           </span>
         </p>
         <p className="text-ink-soft">{topSpeedWords(envelope)}</p>
+        <p className="text-ink-soft">{fullStickWords(envelope)}</p>
         <p className="text-ink-soft">{yawRateWords(envelope.topYawRadps)}</p>
       </figcaption>
     </figure>
