@@ -22,7 +22,7 @@ export function WheelGlyph({ shape, showDriveArrow = true, showGroundRollers = f
   const marks = wheelMarks(wheel.kind, wheel.rollerAngleDeg, hl, hw);
   const ground = showGroundRollers && marks.style === 'hatch' ? wheelMarks(wheel.kind, -wheel.rollerAngleDeg, hl, hw).segments : [];
   const corner = Math.min(hw * 0.45, wheel.kind === 'track' || wheel.kind === 'omni-track' ? hw : hl * 0.35);
-  const arrowLength = Math.max(hl * 0.8, 9);
+  const arrowLength = Math.max(2 * hl + 6, 16);
   const sign = wheel.reversed ? -1 : 1;
   return (
     <g
@@ -46,7 +46,7 @@ export function WheelGlyph({ shape, showDriveArrow = true, showGroundRollers = f
       ))}
       {marks.segments.map((s, i) =>
         marks.style === 'caps' ? (
-          <line key={i} x1={s.u1} y1={s.v1} x2={s.u2} y2={s.v2} className="stroke-ink-muted" strokeWidth={Math.max(2, hw * 0.55)} strokeLinecap="round" opacity={0.55} />
+          <line key={i} x1={s.u1} y1={s.v1} x2={s.u2} y2={s.v2} className="stroke-ink-muted" strokeWidth={Math.max(1.6, hw * 0.38)} strokeLinecap="round" opacity={0.5} />
         ) : (
           <line key={i} x1={s.u1} y1={s.v1} x2={s.u2} y2={s.v2} className={marks.style === 'hatch' ? 'stroke-ink-soft' : 'stroke-ink-faint'} strokeWidth={marks.style === 'hatch' ? 1.3 : 1} strokeLinecap="round" />
         ),

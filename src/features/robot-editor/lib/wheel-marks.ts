@@ -62,13 +62,13 @@ export function omniRollerCaps(hl: number, hw: number, perRow = 3): Segment[] {
   const out: Segment[] = [];
   const piece = (2 * hl) / perRow;
   [-1, 1].forEach((side, row) => {
-    const v = (side * hw) / 2;
+    const v = side * hw * 0.42;
     const shift = row === 0 ? 0 : piece / 2;
     for (let k = 0; k <= perRow; k += 1) {
       const start = -hl + shift + k * piece - piece / 2 + piece * 0.16;
       const end = start + piece * 0.68;
-      const u1 = Math.max(start, -hl * 0.92);
-      const u2 = Math.min(end, hl * 0.92);
+      const u1 = Math.max(start, -hl * 0.8);
+      const u2 = Math.min(end, hl * 0.8);
       if (u2 - u1 > piece * 0.3) out.push({ u1, v1: v, u2, v2: v });
     }
   });
