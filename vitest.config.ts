@@ -22,6 +22,7 @@ export default defineConfig({
           name: 'component',
           environment: 'happy-dom',
           include: ['tests/component/**/*.test.{ts,tsx}'],
+          setupFiles: ['tests/component/setup.ts'],
         },
       },
       {
