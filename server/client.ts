@@ -1,4 +1,4 @@
-import { existsSync } from 'node:fs';
+import { existsSync, realpathSync } from 'node:fs';
 import type { Server } from 'node:http';
 import { join, resolve } from 'node:path';
 import express, { type RequestHandler } from 'express';
@@ -10,9 +10,11 @@ export interface ClientHandlers {
 
 /** Development: Vite compiles the client on request and pushes updates over the same port. */
 export async function viteClient(httpServer: Server): Promise<ClientHandlers> {
-  const { createServer } = await import('vite');
+  const { createServer, searchForWorkspaceRoot } = await import('vite');
+  // node_modules may be a link to a shared folder; fonts are served from it.
+  const allow = [searchForWorkspaceRoot(process.cwd()), realpathSync('node_modules')];
   const vite = await createServer({
-    server: { middlewareMode: true, hmr: { server: httpServer } },
+    server: { middlewareMode: true, hmr: { server: httpServer }, fs: { allow } },
     appType: 'spa',
   });
   return { handlers: [vite.middlewares], close: () => vite.close() };

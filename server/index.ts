@@ -36,6 +36,10 @@ const client: ClientHandlers =
 const app = createApp({ db: database.db, mailer, config, mailbox: fakeSmtp?.mailbox, client: client.handlers });
 httpServer.on('request', app);
 
+httpServer.once('error', (error: NodeJS.ErrnoException) => {
+  console.error(error.code === 'EADDRINUSE' ? `Port ${env.PORT} is in use; stop the other server or set PORT` : error);
+  process.exit(1);
+});
 httpServer.listen(env.PORT, () => {
   console.log(`Mixwright (${env.NODE_ENV}) is at ${config.appUrl}`);
   if (fakeSmtp) console.log(`E-mail is caught locally; read it at ${config.appUrl}/dev/mailbox`);

@@ -13,9 +13,11 @@ export function findLiveRobot(db: Db, robotId: string) {
     .get();
 }
 
-const updatedAt = sql<number>`(select max(v.created_at) from ${revisions} v where v.robot_id = ${robots.id})`;
+// Written with plain table names: drizzle leaves columns unqualified in one-table queries, and an
+// unqualified "id" inside these subqueries would mean the inner table's id.
+const updatedAt = sql<number>`(select max(v.created_at) from revisions v where v.robot_id = robots.id)`;
 const lastFlash = sql<string | null>`(select json_object('revisionNumber', f.revision_number, 'flashedAt', f.flashed_at)
-  from ${flashes} f where f.robot_id = ${robots.id} order by f.flashed_at desc, f.id desc limit 1)`;
+  from flashes f where f.robot_id = robots.id order by f.flashed_at desc, f.id desc limit 1)`;
 
 const summaryColumns = {
   id: robots.id,

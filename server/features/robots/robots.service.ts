@@ -74,7 +74,7 @@ export function saveRevision(
       actorId: user.id,
       action: 'revision.saved',
       target: `robot:${robotId}`,
-      detail: { number: next, message: input.message },
+      detail: { name: robot.name, number: next, message: input.message },
     });
     return next;
   });

@@ -1,6 +1,6 @@
 import { and, asc, count, eq, sql } from 'drizzle-orm';
 import type { Db } from '@server/db/client';
-import { memberships, robots, teams, users } from '@server/db/schema';
+import { memberships, teams, users } from '@server/db/schema';
 import { newId } from '@server/lib/ids';
 import type { Role, TeamMember, TeamSummary } from '@shared/schemas/teams';
 
@@ -25,8 +25,8 @@ export function findTeam(db: Db, teamId: string) {
 }
 
 export function listTeamsOf(db: Db, userId: string): TeamSummary[] {
-  const memberCount = sql<number>`(select count(*) from ${memberships} m where m.team_id = ${teams.id})`;
-  const robotCount = sql<number>`(select count(*) from ${robots} r where r.team_id = ${teams.id} and r.deleted_at is null)`;
+  const memberCount = sql<number>`(select count(*) from memberships m where m.team_id = teams.id)`;
+  const robotCount = sql<number>`(select count(*) from robots r where r.team_id = teams.id and r.deleted_at is null)`;
   return db
     .select({
       id: teams.id,

@@ -1,5 +1,6 @@
 import type { AppContext } from '@server/config';
 import { recordEvent } from '@server/features/audit/audit.repository';
+import { findUserById } from '@server/features/auth/auth.repository';
 import { HttpError } from '@server/lib/http-error';
 import type { CurrentUser } from '@shared/schemas/auth';
 import type { Role, TeamDetail } from '@shared/schemas/teams';
@@ -40,7 +41,7 @@ export function changeRole(ctx: AppContext, actor: CurrentUser, teamId: string, 
       actorId: actor.id,
       action: 'member.role_changed',
       target: `user:${userId}`,
-      detail: { from: membership.role, to: role },
+      detail: { name: findUserById(tx, userId)?.name, from: membership.role, to: role },
     });
   });
 }
@@ -62,7 +63,7 @@ export function removeMember(ctx: AppContext, actor: CurrentUser, actorRole: Rol
       actorId: actor.id,
       action: actor.id === userId ? 'member.left' : 'member.removed',
       target: `user:${userId}`,
-      detail: { role: membership.role },
+      detail: { name: findUserById(tx, userId)?.name, role: membership.role },
     });
   });
 }

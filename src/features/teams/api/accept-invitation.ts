@@ -1,0 +1,16 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiRequest } from '@/lib/api-client';
+import type { Role } from '@shared/schemas/teams';
+import { teamKeys } from './team-keys';
+
+export function acceptInvitation(token: string): Promise<{ teamId: string; role: Role }> {
+  return apiRequest(`/invitations/${encodeURIComponent(token)}/accept`, { method: 'POST' });
+}
+
+export function useAcceptInvitation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: acceptInvitation,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: teamKeys.all }),
+  });
+}
