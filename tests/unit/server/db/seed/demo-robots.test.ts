@@ -1,0 +1,64 @@
+import { describe, expect, it } from 'vitest';
+import { demoRobotConfigs } from '@server/db/seed/demo-robots';
+import { RobotConfigSchema, type RobotConfig } from '@shared/schemas/robot-config';
+
+const byName = (name: string): RobotConfig => demoRobotConfigs().find((c) => c.name === name)!;
+const rad = (deg: number) => (deg * Math.PI) / 180;
+
+describe('the demo robots', () => {
+  it('are the four robots of the demo scenario, each a valid configuration', () => {
+    const configs = demoRobotConfigs();
+    expect(configs.map((c) => c.name)).toEqual(['Greenhouse Cart', 'Aisle Scout', 'Garden Hauler', 'Bench Kiwi']);
+    for (const config of configs) expect(RobotConfigSchema.safeParse(config).success).toBe(true);
+  });
+
+  it.each([
+    ['Greenhouse Cart', 'trio-omni', 'nano', 'ppm', 'pwm-in1-in2-stby'],
+    ['Aisle Scout', 'quad-mecanum', 'esp32-devkitc', 'sbus', 'pwm-dir'],
+    ['Garden Hauler', 'differential', 'uno', 'rc-pwm', 'dual-pwm'],
+    ['Bench Kiwi', 'quad-omni-x', 'rp2040-pico', 'nrf24', 'two-input'],
+  ])('%s is a %s on %s with %s input and %s drivers', (name, layout, board, source, driver) => {
+    const config = byName(name);
+    expect(config.chassis.layout).toBe(layout);
+    expect(config.wiring.board).toBe(board);
+    expect(config.controls.source).toBe(source);
+    expect(new Set(config.wiring.drivers.map((d) => d.kind))).toEqual(new Set([driver]));
+  });
+
+  it('puts every motor on exactly one driver channel', () => {
+    for (const config of demoRobotConfigs()) {
+      const onDrivers = config.wiring.drivers.flatMap((d) => d.motors).sort();
+      expect(onDrivers).toEqual(config.motors.map((m) => m.name).sort());
+    }
+  });
+
+  // Three omni wheels 120° apart, each driving along the tangent (common practice for this layout).
+  it('spaces the Greenhouse Cart wheels 120° apart, each driving tangentially', () => {
+    const wheels = byName('Greenhouse Cart').chassis.wheels;
+    const angles = wheels.map((w) => (Math.atan2(w.yMm, w.xMm) * 180) / Math.PI);
+    expect(angles.map((a) => Math.round((a + 360) % 360))).toEqual([0, 120, 240]);
+    for (const w of wheels) {
+      const along = Math.cos(rad(w.driveAngleDeg)) * w.xMm + Math.sin(rad(w.driveAngleDeg)) * w.yMm;
+      expect(Math.abs(along)).toBeLessThan(0.5);
+      expect(Math.hypot(w.xMm, w.yMm)).toBeCloseTo(120, 0);
+    }
+  });
+
+  // Lynch & Park, Modern Robotics (2017) §13.2.1, four-mecanum example: rollers −45°, +45°,
+  // −45°, +45° in the order front-left, front-right, rear-right, rear-left.
+  it('sets the Aisle Scout mecanum rollers in an X seen from above', () => {
+    const wheels = byName('Aisle Scout').chassis.wheels;
+    expect(wheels.map((w) => w.rollerAngleDeg)).toEqual([-45, 45, -45, 45]);
+    expect(wheels.map((w) => [Math.sign(w.xMm), Math.sign(w.yMm)])).toEqual([[1, 1], [1, -1], [-1, -1], [-1, 1]]);
+  });
+
+  it('places the Garden Hauler tracks symmetrically either side of the centre line', () => {
+    const [left, right] = byName('Garden Hauler').chassis.wheels;
+    expect(left.yMm).toBe(-right.yMm);
+    expect(left.yMm).toBeGreaterThan(0);
+  });
+
+  it('turns every Bench Kiwi wheel forwards for a forward command', () => {
+    for (const w of byName('Bench Kiwi').chassis.wheels) expect(Math.cos(rad(w.driveAngleDeg))).toBeCloseTo(Math.SQRT1_2, 6);
+  });
+});
