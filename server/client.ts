@@ -31,7 +31,7 @@ export function staticClient(dir: string): ClientHandlers {
     if (req.method !== 'GET' && req.method !== 'HEAD') return next();
     // The page itself is never cached, so a new build is picked up; hashed assets may be.
     res.set('Cache-Control', 'no-cache');
-    res.sendFile(index);
+    res.sendFile('index.html', { root });
   };
   return {
     handlers: [express.static(root, { index: false, maxAge: '1h' }), fallback],

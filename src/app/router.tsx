@@ -3,21 +3,11 @@ import { useMemo } from 'react';
 import { createBrowserRouter, redirect, RouterProvider } from 'react-router';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { redirectIfSignedIn, requireSignedIn } from './guards';
-import { AcceptInvitationRoute } from './routes/accept-invitation';
 import { AppLayout } from './routes/app-layout';
 import { AuthLayout } from './routes/auth-layout';
-import { ForgotPasswordRoute } from './routes/forgot-password';
-import { NotFoundRoute } from './routes/not-found';
-import { ResetPasswordRoute } from './routes/reset-password';
 import { RouteError } from './routes/route-error';
-import { SignInRoute } from './routes/sign-in';
-import { SignUpRoute } from './routes/sign-up';
-import { TeamActivityRoute } from './routes/team-activity';
-import { TeamLayout } from './routes/team-layout';
-import { TeamPeopleRoute } from './routes/team-people';
-import { TeamRobotsRoute } from './routes/team-robots';
-import { TeamsRoute } from './routes/teams';
 
+// Pages load on first visit, so the sign-in page does not carry every screen of the app.
 export function createAppRouter(queryClient: QueryClient) {
   return createBrowserRouter([
     {
@@ -30,28 +20,36 @@ export function createAppRouter(queryClient: QueryClient) {
         {
           element: <AuthLayout />,
           children: [
-            { path: 'sign-in', loader: redirectIfSignedIn(queryClient), element: <SignInRoute /> },
-            { path: 'sign-up', loader: redirectIfSignedIn(queryClient), element: <SignUpRoute /> },
-            { path: 'forgot-password', element: <ForgotPasswordRoute /> },
-            { path: 'reset-password', element: <ResetPasswordRoute /> },
-            { path: 'invitations/:token', element: <AcceptInvitationRoute /> },
+            {
+              path: 'sign-in',
+              loader: redirectIfSignedIn(queryClient),
+              lazy: async () => ({ Component: (await import('./routes/sign-in')).SignInRoute }),
+            },
+            {
+              path: 'sign-up',
+              loader: redirectIfSignedIn(queryClient),
+              lazy: async () => ({ Component: (await import('./routes/sign-up')).SignUpRoute }),
+            },
+            { path: 'forgot-password', lazy: async () => ({ Component: (await import('./routes/forgot-password')).ForgotPasswordRoute }) },
+            { path: 'reset-password', lazy: async () => ({ Component: (await import('./routes/reset-password')).ResetPasswordRoute }) },
+            { path: 'invitations/:token', lazy: async () => ({ Component: (await import('./routes/accept-invitation')).AcceptInvitationRoute }) },
           ],
         },
         {
           element: <AppLayout />,
           loader: requireSignedIn(queryClient),
           children: [
-            { path: 'teams', element: <TeamsRoute /> },
+            { path: 'teams', lazy: async () => ({ Component: (await import('./routes/teams')).TeamsRoute }) },
             {
               path: 'teams/:teamId',
-              element: <TeamLayout />,
+              lazy: async () => ({ Component: (await import('./routes/team-layout')).TeamLayout }),
               children: [
-                { index: true, element: <TeamRobotsRoute /> },
-                { path: 'people', element: <TeamPeopleRoute /> },
-                { path: 'activity', element: <TeamActivityRoute /> },
+                { index: true, lazy: async () => ({ Component: (await import('./routes/team-robots')).TeamRobotsRoute }) },
+                { path: 'people', lazy: async () => ({ Component: (await import('./routes/team-people')).TeamPeopleRoute }) },
+                { path: 'activity', lazy: async () => ({ Component: (await import('./routes/team-activity')).TeamActivityRoute }) },
               ],
             },
-            { path: '*', element: <NotFoundRoute /> },
+            { path: '*', lazy: async () => ({ Component: (await import('./routes/not-found')).NotFoundRoute }) },
           ],
         },
       ],

@@ -11,6 +11,7 @@ export function useAcceptInvitation() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: acceptInvitation,
+    // The invitation's own preview is left alone: asked again now it would answer "already used".
     onSuccess: () => queryClient.invalidateQueries({ queryKey: teamKeys.all }),
   });
 }

@@ -5,5 +5,6 @@ export const teamKeys = {
   members: (teamId: string) => [...teamKeys.all, 'detail', teamId, 'members'] as const,
   invitations: (teamId: string) => [...teamKeys.all, 'detail', teamId, 'invitations'] as const,
   activity: (teamId: string) => [...teamKeys.all, 'detail', teamId, 'activity'] as const,
-  invitationPreview: (token: string) => [...teamKeys.all, 'invitation', token] as const,
+  /** Outside `all` on purpose: refreshing teams after accepting must not re-read a used invitation. */
+  invitationPreview: (token: string) => ['invitation-preview', token] as const,
 };
