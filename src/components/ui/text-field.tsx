@@ -17,7 +17,8 @@ export function FieldShell({ label, hint, error, children, className }: FieldShe
   const inputId = useId();
   const hintId = `${inputId}-hint`;
   const errorId = `${inputId}-error`;
-  const describedBy = [hint ? hintId : null, error ? errorId : null].filter(Boolean).join(' ') || undefined;
+  // The error replaces the hint, so only what is on screen is read out.
+  const describedBy = error ? errorId : hint ? hintId : undefined;
   return (
     <div className={cx('flex flex-col gap-1.5', className)}>
       <label htmlFor={inputId} className="text-sm font-semibold text-ink-soft">
