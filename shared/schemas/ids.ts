@@ -36,7 +36,12 @@ export const DRIVER_KIND_IDS = [
 export const DriverKindIdSchema = z.enum(DRIVER_KIND_IDS);
 export type DriverKindId = z.infer<typeof DriverKindIdSchema>;
 
-export const WHEEL_KINDS = ['omni', 'mecanum', 'fixed', 'track'] as const;
+/**
+ * omni: rollers at 0° (free sideways); mecanum: rollers at ±45°; fixed: a plain wheel;
+ * track: a plain track (skids when turning); omni-track: a track whose links carry free
+ * rollers, which moves like an omni wheel.
+ */
+export const WHEEL_KINDS = ['omni', 'mecanum', 'fixed', 'track', 'omni-track'] as const;
 export const WheelKindSchema = z.enum(WHEEL_KINDS);
 export type WheelKind = z.infer<typeof WheelKindSchema>;
 
