@@ -35,24 +35,27 @@ function channels(source: InputSourceId, names: string[]) {
   return names.map((name, index) => ({ number: index + 1, name, low, centre, high }));
 }
 
-/** Three omni wheels 120° apart, 120 mm from the centre; the front wheel drives sideways. */
+/**
+ * Three omni wheels 120° apart, 120 mm from the centre; the front wheel drives sideways. Each
+ * wheel drives clockwise round the centre, as the engine's trio-omni starter layout has it.
+ */
 function greenhouseCart(): RobotConfigInput {
   const d = 120;
-  const at = (deg: number) => ({ x: d * Math.cos((deg * Math.PI) / 180), y: d * Math.sin((deg * Math.PI) / 180), drive: deg + 90 });
+  const at = (deg: number, drive: number) => ({ x: d * Math.cos((deg * Math.PI) / 180), y: d * Math.sin((deg * Math.PI) / 180), drive });
   const spec = { radiusMm: 29, maxRpm: 180 };
   return {
     schemaVersion: 1,
     name: 'Greenhouse Cart',
     chassis: {
       layout: 'trio-omni',
-      params: { wheelDistanceMm: d, wheelRadiusMm: 29 },
+      params: { loneWheel: 'front', element: 'omni-wheels', centreDistanceMm: d, wheelRadiusMm: 29, maxRpm: 180 },
       wheels: [
-        wheel('Front', 'Motor F', at(0), spec),
-        wheel('Rear left', 'Motor RL', { ...at(120), drive: -150 }, spec),
-        wheel('Rear right', 'Motor RR', { ...at(240), drive: -30 }, spec),
+        wheel('Front', 'Motor F', at(0, -90), spec),
+        wheel('Rear right', 'Motor RR', at(240, 150), spec),
+        wheel('Rear left', 'Motor RL', at(120, 30), spec),
       ],
     },
-    motors: ['Motor F', 'Motor RL', 'Motor RR'].map((name) => ({ name, startThreshold: 0.08, stallCurrentA: 1.6, ratedVoltage: 6 })),
+    motors: ['Motor F', 'Motor RR', 'Motor RL'].map((name) => ({ name, startThreshold: 0.08, stallCurrentA: 1.6, ratedVoltage: 6 })),
     controls: {
       source: 'ppm',
       channels: channels('ppm', ['Right stick across', 'Right stick up', 'Left stick up', 'Left stick across', 'Arm switch', 'Rate switch']),
@@ -63,8 +66,8 @@ function greenhouseCart(): RobotConfigInput {
     wiring: {
       board: 'nano',
       drivers: [
-        { name: 'Front driver', kind: 'pwm-in1-in2-stby', motors: ['Motor F', 'Motor RL'] },
-        { name: 'Rear driver', kind: 'pwm-in1-in2-stby', motors: ['Motor RR'] },
+        { name: 'Front driver', kind: 'pwm-in1-in2-stby', motors: ['Motor F', 'Motor RR'] },
+        { name: 'Rear driver', kind: 'pwm-in1-in2-stby', motors: ['Motor RL'] },
       ],
     },
     safety: { armingRequired: true, failsafeTimeoutMs: 250 },
@@ -82,7 +85,7 @@ function aisleScout(): RobotConfigInput {
     name: 'Aisle Scout',
     chassis: {
       layout: 'quad-mecanum',
-      params: { halfLengthMm: l, halfWidthMm: w, wheelRadiusMm: 40 },
+      params: { rollers: 'x', wheelbaseMm: 2 * l, trackWidthMm: 2 * w, wheelRadiusMm: 40, maxRpm: 250 },
       wheels: [
         wheel('Front left', 'Motor FL', { x: l, y: w, drive: 0, roller: -45 }, spec),
         wheel('Front right', 'Motor FR', { x: l, y: -w, drive: 0, roller: 45 }, spec),
@@ -118,7 +121,7 @@ function gardenHauler(): RobotConfigInput {
     name: 'Garden Hauler',
     chassis: {
       layout: 'differential',
-      params: { trackWidthMm: 260, sprocketRadiusMm: 35 },
+      params: { element: 'tracks', trackWidthMm: 260, wheelRadiusMm: 35, maxRpm: 120 },
       wheels: [
         wheel('Left track', 'Motor L', { x: 0, y: 130, drive: 0 }, spec),
         wheel('Right track', 'Motor R', { x: 0, y: -130, drive: 0 }, spec),
@@ -143,7 +146,7 @@ function gardenHauler(): RobotConfigInput {
   };
 }
 
-/** Four omni wheels at the corners of a 160 mm square, each driving at 45° (the X layout). */
+/** Four omni wheels at the corners of a 160 mm square, each driving across its corner (the X layout). */
 function benchKiwi(): RobotConfigInput {
   const a = 80;
   const spec = { radiusMm: 24, maxRpm: 300 };
@@ -152,11 +155,11 @@ function benchKiwi(): RobotConfigInput {
     name: 'Bench Kiwi',
     chassis: {
       layout: 'quad-omni-x',
-      params: { cornerOffsetMm: a, wheelRadiusMm: 24 },
+      params: { centreDistanceMm: round(a * Math.SQRT2), wheelRadiusMm: 24, maxRpm: 300 },
       wheels: [
         wheel('Front left', 'Motor FL', { x: a, y: a, drive: -45 }, spec),
-        wheel('Front right', 'Motor FR', { x: a, y: -a, drive: 45 }, spec),
-        wheel('Rear right', 'Motor RR', { x: -a, y: -a, drive: -45 }, spec),
+        wheel('Front right', 'Motor FR', { x: a, y: -a, drive: -135 }, spec),
+        wheel('Rear right', 'Motor RR', { x: -a, y: -a, drive: 135 }, spec),
         wheel('Rear left', 'Motor RL', { x: -a, y: a, drive: 45 }, spec),
       ],
     },

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { demoRobotConfigs } from '@server/db/seed/demo-robots';
+import { computeMixing } from '@shared/kinematics/mixing';
 import { RobotConfigSchema, type RobotConfig } from '@shared/schemas/robot-config';
 
 const byName = (name: string): RobotConfig => demoRobotConfigs().find((c) => c.name === name)!;
@@ -36,7 +37,7 @@ describe('the demo robots', () => {
   it('spaces the Greenhouse Cart wheels 120° apart, each driving tangentially', () => {
     const wheels = byName('Greenhouse Cart').chassis.wheels;
     const angles = wheels.map((w) => (Math.atan2(w.yMm, w.xMm) * 180) / Math.PI);
-    expect(angles.map((a) => Math.round((a + 360) % 360))).toEqual([0, 120, 240]);
+    expect(angles.map((a) => Math.round((a + 360) % 360))).toEqual([0, 240, 120]);
     for (const w of wheels) {
       const along = Math.cos(rad(w.driveAngleDeg)) * w.xMm + Math.sin(rad(w.driveAngleDeg)) * w.yMm;
       expect(Math.abs(along)).toBeLessThan(0.5);
@@ -58,7 +59,27 @@ describe('the demo robots', () => {
     expect(left.yMm).toBeGreaterThan(0);
   });
 
-  it('turns every Bench Kiwi wheel forwards for a forward command', () => {
-    for (const w of byName('Bench Kiwi').chassis.wheels) expect(Math.cos(rad(w.driveAngleDeg))).toBeCloseTo(Math.SQRT1_2, 6);
+  // Trade rule of thumb (common practice) for three omni wheels: forward leaves the wheel at right
+  // angles to forward idle; sideways runs the two angled wheels at cos 60° = 0.5 of the straight
+  // one, opposite sign; rotation runs all three equally.
+  it('mixes the Greenhouse Cart as the three-omni rules of thumb say', () => {
+    const { matrix } = computeMixing(byName('Greenhouse Cart'));
+    const [forward, strafe, yaw] = [0, 1, 2].map((k) => matrix.map((row) => row[k]));
+    expect(forward[0]).toBeCloseTo(0, 9);
+    expect(strafe[1] / strafe[0]).toBeCloseTo(-0.5, 9);
+    expect(strafe[2] / strafe[0]).toBeCloseTo(-0.5, 9);
+    for (const v of yaw) expect(v).toBeCloseTo(yaw[0], 9);
+    expect(Math.abs(yaw[0])).toBeGreaterThan(0.5);
+  });
+
+  it.each([
+    ['Greenhouse Cart', 3],
+    ['Aisle Scout', 3],
+    ['Garden Hauler', 2],
+    ['Bench Kiwi', 3],
+  ])('gives %s a mixing of rank %i, so it drives as its layout should', (name, rank) => {
+    const mixing = computeMixing(byName(name as string));
+    expect(mixing.rank).toBe(rank);
+    expect(mixing.canDrive && mixing.canTurn).toBe(true);
   });
 });
