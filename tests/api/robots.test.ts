@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { listTeamEvents } from '@server/features/audit/audit.repository';
-import { robotConfigInput } from '../fixtures/robot-config';
+import { robotConfigInput } from '../factories/robot-config';
 import { makeRobot, makeTeamScenario } from './support/factories';
 import { clientAs, createTestContext, type TestContext } from './support/test-app';
 

@@ -6,7 +6,7 @@ import { hashToken, newToken } from '@server/lib/ids';
 import { hashPassword } from '@server/lib/password';
 import type { CurrentUser } from '@shared/schemas/auth';
 import type { Role } from '@shared/schemas/teams';
-import { robotConfig } from '../../fixtures/robot-config';
+import { robotConfig } from '../../factories/robot-config';
 import type { TestContext } from './test-app';
 
 let counter = 0;

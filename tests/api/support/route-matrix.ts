@@ -1,4 +1,4 @@
-import { robotConfigInput } from '../../fixtures/robot-config';
+import { robotConfigInput } from '../../factories/robot-config';
 import { uniqueEmail, type TeamScenario } from './factories';
 
 export type Caller = 'anonymous' | 'outsider' | 'viewer' | 'editor' | 'owner';

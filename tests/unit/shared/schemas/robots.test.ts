@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { CreateRobotInputSchema, SaveRevisionInputSchema } from '@shared/schemas/robots';
-import { robotConfigInput } from '../../../fixtures/robot-config';
+import { robotConfigInput } from '../../../factories/robot-config';
 
 describe('robot request schemas', () => {
   it('accepts a new robot with a full configuration', () => {
