@@ -9,7 +9,7 @@ import { NewPasswordSchema } from '@shared/schemas/auth';
 import { useResetPassword } from '../api/reset-password';
 
 const FormSchema = z
-  .object({ password: NewPasswordSchema, repeat: z.string() })
+  .object({ password: NewPasswordSchema, repeat: z.string().min(1, 'Type the new password again') })
   .refine((v) => v.password === v.repeat, { path: ['repeat'], message: 'The two passwords differ' });
 type Values = z.input<typeof FormSchema>;
 
