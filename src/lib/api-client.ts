@@ -34,13 +34,21 @@ export async function apiRequest<T>(path: string, options: RequestOptions = {}):
     signal: options.signal,
   });
   if (response.status === 204) return undefined as T;
-  const text = await response.text();
-  const json = text ? (JSON.parse(text) as unknown) : undefined;
+  const json = parseJson(await response.text());
   if (!response.ok) {
     const body = (json as Partial<ApiErrorBody> | undefined)?.error;
     throw new ApiError(response.status, body ?? { code: 'http_error', message: `The server answered ${response.status}` });
   }
   return json as T;
+}
+
+/** A proxy in front of the app may answer with a page instead of JSON. */
+function parseJson(text: string): unknown {
+  try {
+    return text ? (JSON.parse(text) as unknown) : undefined;
+  } catch {
+    return undefined;
+  }
 }
 
 export function isApiError(error: unknown, status?: number): error is ApiError {
