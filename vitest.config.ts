@@ -49,6 +49,7 @@ export default defineConfig({
           name: 'e2e',
           environment: 'node',
           include: ['tests/e2e/**/*.test.ts'],
+          globalSetup: ['tests/e2e/support/global-setup.ts'],
           testTimeout: 180_000,
           hookTimeout: 180_000,
           fileParallelism: false,
