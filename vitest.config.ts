@@ -1,6 +1,6 @@
 import { defineConfig } from 'vitest/config';
 import react from '@vitejs/plugin-react';
-import { aliases } from './vite.config';
+import { aliases } from './vite.config.ts';
 
 // One project per kind of test, so each gets the environment and time it needs.
 export default defineConfig({
@@ -22,6 +22,7 @@ export default defineConfig({
           name: 'component',
           environment: 'happy-dom',
           include: ['tests/component/**/*.test.{ts,tsx}'],
+          setupFiles: ['tests/component/setup.ts'],
         },
       },
       {
@@ -48,6 +49,7 @@ export default defineConfig({
           name: 'e2e',
           environment: 'node',
           include: ['tests/e2e/**/*.test.ts'],
+          globalSetup: ['tests/e2e/support/global-setup.ts'],
           testTimeout: 180_000,
           hookTimeout: 180_000,
           fileParallelism: false,

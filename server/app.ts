@@ -1,0 +1,65 @@
+import express, { Router, type Express, type RequestHandler } from 'express';
+import helmet from 'helmet';
+import type { AppConfig, AppContext } from './config';
+import type { Db } from './db/client';
+import { devMailboxApiRoutes, devMailboxPage } from './features/dev/mailbox.router';
+import { authRoutes } from './features/auth/auth.router';
+import { robotsRoutes } from './features/robots/robots.router';
+import { invitationsRoutes } from './features/teams/invitations.router';
+import { teamsRoutes } from './features/teams/teams.router';
+import { createAuth } from './lib/auth';
+import type { Mailbox } from './lib/mail/fake-smtp';
+import type { Mailer } from './lib/mail/mailer';
+import { apiNotFound, errorHandler } from './middleware/error-handler';
+import { originCheck } from './middleware/origin-check';
+import { loadSession } from './middleware/session';
+
+export interface AppDeps {
+  db: Db;
+  mailer: Mailer;
+  config: AppConfig;
+  /** The fake receiver's mailbox; shown at /dev/mailbox outside production. */
+  mailbox?: Mailbox;
+  /** Serves the web client after the API: Vite middleware in development, the build otherwise. */
+  client?: RequestHandler[];
+}
+
+function securityHeaders(config: AppConfig): RequestHandler {
+  const https = config.appUrl.startsWith('https:');
+  return helmet({
+    // Vite's development client injects inline scripts; the built client needs none.
+    contentSecurityPolicy:
+      config.nodeEnv === 'development'
+        ? false
+        : { directives: { upgradeInsecureRequests: https ? [] : null, 'connect-src': ["'self'"] } },
+    // Only ask browsers to insist on HTTPS when the app is actually served over it.
+    strictTransportSecurity: https,
+  });
+}
+
+/** Builds the whole app; `server/index.ts` only reads the environment and listens. */
+export function createApp(deps: AppDeps): Express {
+  const { db, mailer, config } = deps;
+  const auth = createAuth(db, { secure: config.nodeEnv === 'production', sessionDays: config.sessionDays });
+  const ctx: AppContext = { db, mailer, config, auth };
+  const showMailbox = deps.mailbox && config.nodeEnv !== 'production';
+
+  const api = Router();
+  api.use(express.json({ limit: config.jsonLimitBytes }));
+  api.use(originCheck(config.appUrl));
+  api.use(loadSession(auth));
+  api.use(authRoutes(ctx));
+  api.use(teamsRoutes(ctx));
+  api.use(invitationsRoutes(ctx));
+  api.use(robotsRoutes(ctx));
+  if (showMailbox) api.use(devMailboxApiRoutes(deps.mailbox!));
+  api.use(apiNotFound);
+
+  const app = express();
+  app.use(securityHeaders(config));
+  app.use('/api', api);
+  if (showMailbox) app.use(devMailboxPage(deps.mailbox!));
+  for (const handler of deps.client ?? []) app.use(handler);
+  app.use(errorHandler);
+  return app;
+}

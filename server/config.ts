@@ -1,0 +1,56 @@
+import type { Db } from './db/client';
+import type { Env } from './env';
+import type { Auth } from './lib/auth';
+import type { Mailer } from './lib/mail/mailer';
+import { DEFAULT_PASSWORD_COST, type PasswordCost } from './lib/password';
+
+export interface RateLimitSetting {
+  windowMs: number;
+  limit: number;
+}
+
+/** Settings the app is built with; tests make their own (cheaper hashing, tighter limits). */
+export interface AppConfig {
+  nodeEnv: 'development' | 'test' | 'production';
+  /** Where people reach the app; used in e-mailed links and accepted as a request origin. */
+  appUrl: string;
+  /** Folder for files the app writes besides the database (build outputs, uploads). */
+  dataDir: string;
+  passwordCost: PasswordCost;
+  sessionDays: number;
+  invitationDays: number;
+  passwordResetMinutes: number;
+  rateLimits: {
+    /** Per address and e-mail: guesses at one account. */
+    signIn: RateLimitSetting;
+    /** Per address: reset e-mails requested. */
+    passwordReset: RateLimitSetting;
+  };
+  /** Largest JSON body accepted, in bytes. */
+  jsonLimitBytes: number;
+}
+
+export function configFromEnv(env: Env): AppConfig {
+  return {
+    nodeEnv: env.NODE_ENV,
+    appUrl: env.APP_URL,
+    dataDir: env.DATA_DIR,
+    passwordCost: DEFAULT_PASSWORD_COST,
+    sessionDays: 30,
+    invitationDays: 7,
+    passwordResetMinutes: 60,
+    rateLimits: {
+      signIn: { windowMs: 15 * 60_000, limit: 10 },
+      passwordReset: { windowMs: 60 * 60_000, limit: 5 },
+    },
+    jsonLimitBytes: 1024 * 1024,
+  };
+}
+
+/** What every service and router is handed. */
+export interface AppContext {
+  db: Db;
+  mailer: Mailer;
+  config: AppConfig;
+  auth: Auth;
+}

@@ -1,0 +1,53 @@
+import { Router } from 'express';
+import type { AppContext } from '@server/config';
+import { attemptLimit } from '@server/middleware/rate-limit';
+import { currentUser, requireUser } from '@server/middleware/session';
+import { validateBody } from '@server/middleware/validate';
+import {
+  PasswordResetInputSchema,
+  PasswordResetRequestSchema,
+  SignInInputSchema,
+  SignUpInputSchema,
+} from '@shared/schemas/auth';
+import { requestPasswordReset, resetPassword, signIn, signUp } from './auth.service';
+
+export function authRoutes(ctx: AppContext): Router {
+  const router = Router();
+  const signInLimit = attemptLimit(ctx.config.rateLimits.signIn, { perEmail: true, what: 'sign-in attempts' });
+  const resetLimit = attemptLimit(ctx.config.rateLimits.passwordReset, { perEmail: false, what: 'reset requests' });
+  const confirmLimit = attemptLimit(ctx.config.rateLimits.passwordReset, { perEmail: false, what: 'reset attempts' });
+
+  router.post('/auth/sign-up', validateBody(SignUpInputSchema), async (req, res) => {
+    const user = await signUp(ctx, req.body);
+    res.append('Set-Cookie', await ctx.auth.startSession(user.id));
+    res.status(201).json({ user });
+  });
+
+  router.post('/auth/sign-in', signInLimit, validateBody(SignInInputSchema), async (req, res) => {
+    const user = await signIn(ctx, req.body);
+    res.append('Set-Cookie', await ctx.auth.startSession(user.id));
+    res.json({ user });
+  });
+
+  router.post('/auth/sign-out', requireUser, async (req, res) => {
+    res.append('Set-Cookie', await ctx.auth.endSession(req.sessionId!));
+    res.status(204).end();
+  });
+
+  router.get('/auth/me', requireUser, (req, res) => {
+    res.json({ user: currentUser(req) });
+  });
+
+  router.post('/auth/password-reset', resetLimit, validateBody(PasswordResetRequestSchema), async (req, res) => {
+    await requestPasswordReset(ctx, req.body.email);
+    res.status(202).json({ message: 'If that e-mail has an account, a reset link is on its way' });
+  });
+
+  router.post('/auth/password-reset/confirm', confirmLimit, validateBody(PasswordResetInputSchema), async (req, res) => {
+    const user = await resetPassword(ctx, req.body);
+    res.append('Set-Cookie', await ctx.auth.startSession(user.id));
+    res.json({ user });
+  });
+
+  return router;
+}

@@ -1,0 +1,61 @@
+// Starts Mixwright: reads the environment, opens and migrates the database, seeds the demo on
+// an empty database, starts the development mail receiver, and listens on one port.
+import { mkdirSync } from 'node:fs';
+import { createServer } from 'node:http';
+import { createApp } from './app';
+import { staticClient, viteClient, type ClientHandlers } from './client';
+import { configFromEnv } from './config';
+import { openDatabase } from './db/client';
+import { runMigrations } from './db/migrate';
+import { describeSeededAccounts, isDatabaseEmpty, seedDemo } from './db/seed/seed-demo';
+import { readEnv } from './env';
+import { startFakeSmtp, type FakeSmtp } from './lib/mail/fake-smtp';
+import { createSmtpMailer } from './lib/mail/mailer';
+
+const env = readEnv();
+const config = configFromEnv(env);
+mkdirSync(env.DATA_DIR, { recursive: true });
+
+const database = openDatabase(env.DATABASE_PATH);
+runMigrations(database.db);
+if (isDatabaseEmpty(database.db)) {
+  const accounts = await seedDemo(database.db, { passwordCost: config.passwordCost });
+  console.log(`\n${describeSeededAccounts(accounts, config.appUrl)}\n`);
+}
+
+let fakeSmtp: FakeSmtp | null = null;
+if (!env.SMTP_URL) {
+  // readEnv() insists on SMTP_URL in production, so this is development or test only.
+  fakeSmtp = await startFakeSmtp();
+}
+const mailer = createSmtpMailer({ url: env.SMTP_URL, port: fakeSmtp?.port, from: env.MAIL_FROM });
+
+const httpServer = createServer();
+const client: ClientHandlers =
+  env.NODE_ENV === 'production' ? staticClient('dist/client') : await viteClient(httpServer);
+const app = createApp({ db: database.db, mailer, config, mailbox: fakeSmtp?.mailbox, client: client.handlers });
+httpServer.on('request', app);
+
+httpServer.once('error', (error: NodeJS.ErrnoException) => {
+  console.error(error.code === 'EADDRINUSE' ? `Port ${env.PORT} is in use; stop the other server or set PORT` : error);
+  process.exit(1);
+});
+httpServer.listen(env.PORT, () => {
+  console.log(`Mixwright (${env.NODE_ENV}) is at ${config.appUrl}`);
+  if (fakeSmtp) console.log(`E-mail is caught locally; read it at ${config.appUrl}/dev/mailbox`);
+});
+
+let stopping = false;
+async function stop(signal: string): Promise<void> {
+  if (stopping) return;
+  stopping = true;
+  console.log(`\n${signal}: stopping`);
+  httpServer.closeAllConnections();
+  await new Promise<void>((resolve) => httpServer.close(() => resolve()));
+  await client.close();
+  await fakeSmtp?.close();
+  database.close();
+  process.exit(0);
+}
+process.on('SIGINT', () => void stop('SIGINT'));
+process.on('SIGTERM', () => void stop('SIGTERM'));

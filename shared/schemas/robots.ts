@@ -1,0 +1,59 @@
+import { z } from 'zod';
+import { RobotConfigSchema, RobotNameSchema, type RobotConfig } from './robot-config';
+
+export const RevisionMessageSchema = z
+  .string({ error: 'Say what changed' })
+  .trim()
+  .min(1, 'Say what changed')
+  .max(500, 'At most 500 characters');
+
+export const CreateRobotInputSchema = z.object({
+  name: RobotNameSchema,
+  config: RobotConfigSchema,
+  message: RevisionMessageSchema.optional(),
+});
+export type CreateRobotInput = z.input<typeof CreateRobotInputSchema>;
+
+export const SaveRevisionInputSchema = z.object({
+  /** The revision the edit started from; saving fails with 409 when someone saved after it. */
+  baseRevision: z.number({ error: 'baseRevision must be a revision number' }).int().min(1),
+  message: RevisionMessageSchema,
+  config: RobotConfigSchema,
+});
+export type SaveRevisionInput = z.input<typeof SaveRevisionInputSchema>;
+
+export const RenameRobotInputSchema = z.object({ name: RobotNameSchema });
+export type RenameRobotInput = z.input<typeof RenameRobotInputSchema>;
+
+export interface RevisionSummary {
+  number: number;
+  message: string;
+  authorName: string | null;
+  createdAt: string;
+}
+
+export interface RevisionDetail extends RevisionSummary {
+  config: RobotConfig;
+}
+
+export interface RobotSummary {
+  id: string;
+  teamId: string;
+  name: string;
+  createdAt: string;
+  headRevision: number;
+  updatedAt: string;
+  lastFlash: { revisionNumber: number; flashedAt: string } | null;
+}
+
+export interface RobotDetail {
+  robot: RobotSummary & { teamName: string; role: 'owner' | 'editor' | 'viewer' };
+  head: RevisionDetail;
+}
+
+/** The payload of a 409 when a revision was saved on top of an older one. */
+export interface RevisionConflict {
+  code: 'revision_conflict';
+  message: string;
+  head: RevisionSummary;
+}

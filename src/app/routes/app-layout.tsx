@@ -1,0 +1,57 @@
+import { Link, NavLink, Outlet, useNavigate } from 'react-router';
+import { Button } from '@/components/ui/button';
+import { cx } from '@/components/ui/cx';
+import { Wordmark } from '@/components/ui/wordmark';
+import { useMe } from '@/features/auth/api/get-me';
+import { useSignOut } from '@/features/auth/api/sign-out';
+
+/** Signed-in pages: a quiet top bar and the page below. */
+export function AppLayout() {
+  const me = useMe();
+  const signOut = useSignOut();
+  const navigate = useNavigate();
+
+  return (
+    <div className="flex min-h-screen flex-col">
+      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:top-2 focus:left-2 focus:z-10 focus:rounded focus:bg-paper-raised focus:px-3 focus:py-2">
+        Skip to content
+      </a>
+      <header className="border-b border-rule bg-paper-raised">
+        <div className="mx-auto flex h-14 max-w-6xl items-center gap-6 px-4 sm:px-6">
+          <Link to="/teams" className="rounded-md" aria-label="Mixwright, your teams">
+            <Wordmark className="[&_span]:text-lg" />
+          </Link>
+          <nav aria-label="Main" className="flex items-center gap-1">
+            <NavLink
+              to="/teams"
+              end
+              className={({ isActive }) =>
+                cx('rounded-md px-3 py-1.5 text-[0.95rem] font-semibold', isActive ? 'bg-accent-soft text-accent-strong' : 'text-ink-soft hover:bg-paper-sunken')
+              }
+            >
+              Teams
+            </NavLink>
+          </nav>
+          <div className="ml-auto flex items-center gap-3">
+            {me.data && (
+              <span className="hidden text-sm text-ink-muted sm:inline" title={me.data.email}>
+                {me.data.name}
+              </span>
+            )}
+            <Button
+              variant="secondary"
+              size="sm"
+              busy={signOut.isPending}
+              onClick={() => signOut.mutate(undefined, { onSuccess: () => navigate('/sign-in', { replace: true }) })}
+            >
+              Sign out
+            </Button>
+          </div>
+        </div>
+      </header>
+      <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-8 sm:px-6">
+        <Outlet />
+      </main>
+    </div>
+  );
+}

@@ -1,0 +1,15 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiRequest } from '@/lib/api-client';
+import type { RobotSummary } from '@shared/schemas/robots';
+import { robotKeys } from './robot-keys';
+
+export async function getTeamRobots(teamId: string): Promise<RobotSummary[]> {
+  return (await apiRequest<{ robots: RobotSummary[] }>(`/teams/${encodeURIComponent(teamId)}/robots`)).robots;
+}
+
+export const teamRobotsQueryOptions = (teamId: string) =>
+  queryOptions({ queryKey: robotKeys.team(teamId), queryFn: () => getTeamRobots(teamId) });
+
+export function useTeamRobots(teamId: string) {
+  return useQuery(teamRobotsQueryOptions(teamId));
+}

@@ -1,0 +1,38 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { makeUser, uniqueEmail } from './support/factories';
+import { client, createTestContext, type TestContext } from './support/test-app';
+
+let ctx: TestContext;
+beforeAll(async () => {
+  ctx = await createTestContext({
+    rateLimits: { signIn: { windowMs: 60_000, limit: 3 }, passwordReset: { windowMs: 60_000, limit: 2 } },
+  });
+});
+afterAll(() => ctx.close());
+
+describe('rate limits', () => {
+  it('stops sign-in attempts on one account after the limit, even with the right password', async () => {
+    const user = await makeUser(ctx);
+    for (let i = 0; i < 3; i += 1) {
+      expect((await client(ctx).post('/api/auth/sign-in').send({ email: user.email, password: 'wrong guess' })).status).toBe(401);
+    }
+    const blocked = await client(ctx).post('/api/auth/sign-in').send({ email: user.email, password: user.password });
+    expect(blocked.status).toBe(429);
+    expect(blocked.body.error).toMatchObject({ code: 'rate_limited', message: expect.stringContaining('try again in 1 minute') });
+    expect(blocked.headers['ratelimit-policy']).toBeDefined();
+  });
+
+  it('counts attempts per account, so another person at the same address can still sign in', async () => {
+    const other = await makeUser(ctx);
+    const response = await client(ctx).post('/api/auth/sign-in').send({ email: other.email, password: other.password });
+    expect(response.status).toBe(200);
+  });
+
+  it('stops password reset requests after the limit', async () => {
+    const statuses: number[] = [];
+    for (let i = 0; i < 3; i += 1) {
+      statuses.push((await client(ctx).post('/api/auth/password-reset').send({ email: uniqueEmail() })).status);
+    }
+    expect(statuses).toEqual([202, 202, 429]);
+  });
+});

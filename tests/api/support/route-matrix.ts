@@ -1,0 +1,124 @@
+import { robotConfigInput } from '../../factories/robot-config';
+import { uniqueEmail, type TeamScenario } from './factories';
+
+export type Caller = 'anonymous' | 'outsider' | 'viewer' | 'editor' | 'owner';
+export const CALLERS: Caller[] = ['anonymous', 'outsider', 'viewer', 'editor', 'owner'];
+
+export interface RouteRequest {
+  path: string;
+  body?: unknown;
+}
+
+/**
+ * Every route that acts on one team's things (`:teamId` or `:robotId`), with the status each
+ * kind of caller must get. Non-members get 404 so ids do not leak; members below the needed
+ * role get 403. A new route needs a row here, or the coverage test fails.
+ */
+export const TEAM_ROUTES: Record<string, { request: (s: TeamScenario) => RouteRequest; expect: Record<Caller, number> }> = {
+  'GET /api/teams/:teamId': {
+    request: (s) => ({ path: `/api/teams/${s.team.id}` }),
+    expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
+  },
+  'GET /api/teams/:teamId/members': {
+    request: (s) => ({ path: `/api/teams/${s.team.id}/members` }),
+    expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
+  },
+  'PATCH /api/teams/:teamId/members/:userId': {
+    request: (s) => ({ path: `/api/teams/${s.team.id}/members/${s.spare.id}`, body: { role: 'editor' } }),
+    expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 403, owner: 200 },
+  },
+  'DELETE /api/teams/:teamId/members/:userId': {
+    request: (s) => ({ path: `/api/teams/${s.team.id}/members/${s.spare.id}` }),
+    expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 403, owner: 204 },
+  },
+  'GET /api/teams/:teamId/activity': {
+    request: (s) => ({ path: `/api/teams/${s.team.id}/activity` }),
+    expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
+  },
+  'GET /api/teams/:teamId/invitations': {
+    request: (s) => ({ path: `/api/teams/${s.team.id}/invitations` }),
+    expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 403, owner: 200 },
+  },
+  'POST /api/teams/:teamId/invitations': {
+    request: (s) => ({ path: `/api/teams/${s.team.id}/invitations`, body: { email: uniqueEmail('new'), role: 'viewer' } }),
+    expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 403, owner: 201 },
+  },
+  'DELETE /api/teams/:teamId/invitations/:invitationId': {
+    request: (s) => ({ path: `/api/teams/${s.team.id}/invitations/${s.invitation.id}` }),
+    expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 403, owner: 204 },
+  },
+  'GET /api/teams/:teamId/robots': {
+    request: (s) => ({ path: `/api/teams/${s.team.id}/robots` }),
+    expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
+  },
+  'POST /api/teams/:teamId/robots': {
+    request: (s) => ({ path: `/api/teams/${s.team.id}/robots`, body: { name: 'Matrix Bot', config: robotConfigInput() } }),
+    expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 201, owner: 201 },
+  },
+  'GET /api/robots/:robotId': {
+    request: (s) => ({ path: `/api/robots/${s.robot.id}` }),
+    expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
+  },
+  'PATCH /api/robots/:robotId': {
+    request: (s) => ({ path: `/api/robots/${s.robot.id}`, body: { name: 'Renamed Bot' } }),
+    expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 200, owner: 200 },
+  },
+  'GET /api/robots/:robotId/revisions': {
+    request: (s) => ({ path: `/api/robots/${s.robot.id}/revisions` }),
+    expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
+  },
+  'GET /api/robots/:robotId/revisions/:revision': {
+    request: (s) => ({ path: `/api/robots/${s.robot.id}/revisions/1` }),
+    expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
+  },
+  'POST /api/robots/:robotId/revisions': {
+    request: (s) => ({
+      path: `/api/robots/${s.robot.id}/revisions`,
+      body: { baseRevision: 1, message: 'Matrix change', config: robotConfigInput() },
+    }),
+    expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 201, owner: 201 },
+  },
+};
+
+/**
+ * Routes outside any team: who may call them. `anonymous` is the status without a session,
+ * `signedIn` with one (of someone in no team).
+ */
+export const OTHER_ROUTES: Record<string, { request: (s: TeamScenario) => RouteRequest; anonymous: number; signedIn: number }> = {
+  'POST /api/auth/sign-up': {
+    request: () => ({ path: '/api/auth/sign-up', body: { name: 'New Person', email: uniqueEmail('signup'), password: 'a long enough password' } }),
+    anonymous: 201,
+    signedIn: 201,
+  },
+  'POST /api/auth/sign-in': {
+    request: (s) => ({ path: '/api/auth/sign-in', body: { email: s.viewer.email, password: s.viewer.password } }),
+    anonymous: 200,
+    signedIn: 200,
+  },
+  'POST /api/auth/sign-out': { request: () => ({ path: '/api/auth/sign-out' }), anonymous: 401, signedIn: 204 },
+  'GET /api/auth/me': { request: () => ({ path: '/api/auth/me' }), anonymous: 401, signedIn: 200 },
+  'POST /api/auth/password-reset': {
+    request: (s) => ({ path: '/api/auth/password-reset', body: { email: s.viewer.email } }),
+    anonymous: 202,
+    signedIn: 202,
+  },
+  'POST /api/auth/password-reset/confirm': {
+    request: () => ({ path: '/api/auth/password-reset/confirm', body: { token: 'x'.repeat(43), password: 'a long enough password' } }),
+    anonymous: 400,
+    signedIn: 400,
+  },
+  'GET /api/teams': { request: () => ({ path: '/api/teams' }), anonymous: 401, signedIn: 200 },
+  'POST /api/teams': { request: () => ({ path: '/api/teams', body: { name: 'Another team' } }), anonymous: 401, signedIn: 201 },
+  'GET /api/invitations/:token': {
+    request: (s) => ({ path: `/api/invitations/${s.invitation.token}` }),
+    anonymous: 200,
+    signedIn: 200,
+  },
+  'POST /api/invitations/:token/accept': {
+    // The outsider is not the invited address, so a signed-in caller is refused by e-mail.
+    request: (s) => ({ path: `/api/invitations/${s.invitation.token}/accept` }),
+    anonymous: 401,
+    signedIn: 403,
+  },
+  'GET /api/dev/mailbox': { request: () => ({ path: '/api/dev/mailbox' }), anonymous: 200, signedIn: 200 },
+};

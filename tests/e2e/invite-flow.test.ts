@@ -1,0 +1,78 @@
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { openBrowser, screenshot, type Browser } from './support/browser';
+import { startApp, type RunningApp } from './support/app-server';
+
+let app: RunningApp;
+let founder: Browser;
+let guest: Browser;
+
+beforeAll(async () => {
+  app = await startApp({ client: inject('clientDir') });
+  [founder, guest] = await Promise.all([openBrowser(), openBrowser()]);
+});
+
+afterAll(async () => {
+  await Promise.all([founder?.close(), guest?.close()]);
+  await app?.close();
+});
+
+const GUEST_EMAIL = 'wren.guest@example.org';
+
+describe('inviting someone to a team', () => {
+  it('takes a new person from sign-up to a team, and a guest from the e-mailed link to viewer', async () => {
+    const page = founder.page;
+    await page.goto(`${app.url}/sign-up`);
+    await page.getByLabel('Your name').fill('Orla Founder');
+    await page.getByLabel('E-mail').fill('orla.founder@example.org');
+    await page.getByLabel('Password').fill('gears and sprockets');
+    await page.getByRole('button', { name: 'Create account' }).click();
+    await page.waitForURL(`${app.url}/teams`);
+    await page.getByText('You are not in a team yet').waitFor();
+    await screenshot(page, 'e2e-teams-empty');
+
+    await page.getByLabel('Team name').fill('Hilltop Rover Club');
+    await page.getByRole('button', { name: 'Create team' }).click();
+    await page.getByRole('heading', { name: 'Hilltop Rover Club' }).waitFor();
+    await page.getByText('No robots in this team yet').waitFor();
+    await expect(page.getByRole('complementary', { name: 'Before the wheels turn' }).isVisible()).resolves.toBe(true);
+    await screenshot(page, 'e2e-team-dashboard');
+
+    await page.getByRole('link', { name: 'People' }).click();
+    await page.getByLabel('E-mail address').fill(GUEST_EMAIL);
+    await page.getByLabel('Role', { exact: true }).selectOption('viewer');
+    await page.getByRole('button', { name: 'Send invitation' }).click();
+    await page.getByText(`Invitation sent to ${GUEST_EMAIL}`).waitFor();
+    await page.getByRole('cell', { name: GUEST_EMAIL, exact: true }).waitFor();
+    await screenshot(page, 'e2e-team-people-invited');
+
+    // The guest opens the development mailbox and follows the link in the invitation.
+    const g = guest.page;
+    await g.goto(`${app.url}/dev/mailbox`);
+    const message = g.locator('article', { hasText: GUEST_EMAIL });
+    await message.getByRole('heading', { name: 'Orla Founder invited you to Hilltop Rover Club on Mixwright' }).waitFor();
+    await message.getByRole('link', { name: /\/invitations\// }).click();
+    await g.getByRole('heading', { name: 'Join Hilltop Rover Club' }).waitFor();
+    await screenshot(g, 'e2e-invitation');
+
+    await g.getByRole('link', { name: 'Create an account to accept' }).click();
+    await expect(g.getByLabel('E-mail').inputValue()).resolves.toBe(GUEST_EMAIL);
+    await g.getByLabel('Your name').fill('Wren Guest');
+    await g.getByLabel('Password').fill('visiting the workshop');
+    await g.getByLabel('Password').press('Enter');
+    await g.getByRole('button', { name: 'Accept and open the team' }).click();
+
+    await g.getByRole('heading', { name: 'Hilltop Rover Club' }).waitFor();
+    await g.getByText(/Your role\s*viewer/).waitFor();
+    await g.getByRole('link', { name: 'People' }).click();
+    await g.getByRole('row', { name: /Wren Guest/ }).getByText('viewer', { exact: true }).waitFor();
+    await expect(g.getByRole('button', { name: 'Send invitation' }).count()).resolves.toBe(0);
+    await screenshot(g, 'e2e-guest-people');
+
+    // The founder sees the guest as a viewer too.
+    await page.reload();
+    await expect(page.getByLabel('Role of Wren Guest').inputValue()).resolves.toBe('viewer');
+
+    const unexpected = [...founder.problems, ...guest.problems].filter((p) => !p.includes('401 (Unauthorized)'));
+    expect(unexpected).toEqual([]);
+  });
+});
