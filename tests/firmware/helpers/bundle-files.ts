@@ -1,12 +1,11 @@
-import { mkdir, mkdtemp, writeFile } from 'node:fs/promises';
+import { mkdir, writeFile } from 'node:fs/promises';
 import { dirname, join } from 'node:path';
 import type { BundleFile } from '@server/features/firmware/render-bundle';
-import { DEFAULT_CACHE_ROOT } from '@server/features/firmware/toolchain/toolchain-paths';
+import { testDir } from './temp-dirs';
 
 /** Writes bundle files into a fresh folder under the git-ignored cache and returns it. */
 export async function writeBundle(files: BundleFile[], prefix = 'bundle-'): Promise<string> {
-  await mkdir(DEFAULT_CACHE_ROOT, { recursive: true });
-  const root = await mkdtemp(join(DEFAULT_CACHE_ROOT, prefix));
+  const root = await testDir(prefix);
   for (const file of files) {
     const path = join(root, file.path);
     await mkdir(dirname(path), { recursive: true });

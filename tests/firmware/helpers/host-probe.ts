@@ -1,16 +1,15 @@
-import { mkdir, mkdtemp, writeFile } from 'node:fs/promises';
+import { writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { linkPacketTemplateData } from '@server/features/firmware/link-packet';
 import { runTool } from '@server/features/firmware/toolchain/run-tool';
-import { DEFAULT_CACHE_ROOT } from '@server/features/firmware/toolchain/toolchain-paths';
+import { testDir } from './temp-dirs';
 import { renderTemplate } from '@server/features/firmware/templates';
 
 export const TEST_META = { generatorVersion: 'test', revision: 0, hash: '00000000' };
 
 /** Renders the decoder headers (which need no robot) into a fresh folder. */
 export async function renderDecoderHeaders(): Promise<string> {
-  await mkdir(DEFAULT_CACHE_ROOT, { recursive: true });
-  const dir = await mkdtemp(join(DEFAULT_CACHE_ROOT, 'host-'));
+  const dir = await testDir('host-');
   const data = { meta: TEST_META, packet: linkPacketTemplateData() };
   for (const name of ['mw_frame.h', 'mw_sbus.h', 'mw_ibus.h', 'mw_ppm.h', 'mw_rc_pulse.h', 'mw_nrf24.h', 'mw_link_packet.h']) {
     await writeFile(join(dir, name), renderTemplate(`common/${name}`, data));

@@ -1,8 +1,6 @@
-import { mkdtemp } from 'node:fs/promises';
-import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { compileAvrSketch } from '@server/features/firmware/toolchain/avr-compile';
-import { DEFAULT_CACHE_ROOT } from '@server/features/firmware/toolchain/toolchain-paths';
+import { testDir } from '../helpers/temp-dirs';
 import { cyclesPerMs, simulate, type SimResult } from './simavr';
 
 const PROBE = new URL('../fixtures/sim_probe', import.meta.url).pathname;
@@ -15,7 +13,7 @@ describe('the simavr runner', () => {
   let result: SimResult;
 
   beforeAll(async () => {
-    const outDir = await mkdtemp(join(DEFAULT_CACHE_ROOT, 'probe-'));
+    const outDir = await testDir('probe-');
     const build = await compileAvrSketch(PROBE, 'uno', { outDir });
     if (!build.ok) throw new Error(build.messages);
     result = await simulate(build.elfPath!, {
