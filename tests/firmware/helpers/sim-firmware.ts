@@ -29,7 +29,7 @@ export async function buildForSimulator(config: RobotConfig, revision: number, m
 
 /**
  * The signed duty (−255..255) the TypeScript engine gives each motor for raw channel readings:
- * shaping, mixing and desaturation, start threshold, then the output limit, on the Uno's
+ * shaping, mixing and desaturation, then the start threshold within the output limit, on the Uno's
  * 8-bit analogWrite() scale.
  */
 export function engineDuties(config: RobotConfig, raw: RawByChannel): { duties: number[]; armed: boolean } {
@@ -37,7 +37,7 @@ export function engineDuties(config: RobotConfig, raw: RawByChannel): { duties: 
   const commands = mixSticks(computeMixing(config), shaped.sticks, config.controls.desaturation);
   const limit = config.safety.outputLimitPercent / 100;
   const duties = commands.map((c, i) => {
-    const out = applyStartThreshold(c, config.motors[i].startThreshold) * limit;
+    const out = applyStartThreshold(c, config.motors[i].startThreshold, limit);
     return Math.sign(out) * Math.round(Math.abs(out) * 255);
   });
   return { duties, armed: shaped.armed };

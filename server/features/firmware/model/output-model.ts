@@ -133,7 +133,7 @@ export function buildOutputModel(config: RobotConfig, matrix: number[][], pins: 
   config.motors.forEach((motor, m) => {
     const place = placed.get(m);
     const row = (matrix[m] ?? [0, 0, 0]).map((v) => q15Signed(Math.max(-1, Math.min(1, v))));
-    const base = { index: m, mixExpression: mixExpression(m, row), nameLiteral: cString(motor.name), row, thresholdQ: q14(Math.min(motor.startThreshold, 0.99)) };
+    const base = { index: m, mixExpression: mixExpression(m, row), nameLiteral: cString(motor.name), row, thresholdQ: q14(Math.min(motor.startThreshold, 0.99, config.safety.outputLimitPercent / 100)) };
     if (!place) {
       motors.push({ ...base, driveCall: '(void)direction; (void)duty', stopCall: '(void)0' });
       return;
