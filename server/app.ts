@@ -4,6 +4,7 @@ import type { AppConfig, AppContext } from './config';
 import type { Db } from './db/client';
 import { devMailboxApiRoutes, devMailboxPage } from './features/dev/mailbox.router';
 import { authRoutes } from './features/auth/auth.router';
+import { firmwareRoutes } from './features/firmware/firmware.router';
 import { robotsRoutes } from './features/robots/robots.router';
 import { invitationsRoutes } from './features/teams/invitations.router';
 import { teamsRoutes } from './features/teams/teams.router';
@@ -52,6 +53,7 @@ export function createApp(deps: AppDeps): Express {
   api.use(teamsRoutes(ctx));
   api.use(invitationsRoutes(ctx));
   api.use(robotsRoutes(ctx));
+  api.use(firmwareRoutes(ctx));
   if (showMailbox) api.use(devMailboxApiRoutes(deps.mailbox!));
   api.use(apiNotFound);
 

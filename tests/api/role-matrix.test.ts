@@ -38,7 +38,9 @@ describe('the role matrix', () => {
       for (const caller of CALLERS) {
         it(`answers ${row.expect[caller]} to ${caller === 'outsider' ? 'a signed-in non-member' : `the ${caller}`}`, async () => {
           const scenario = await makeTeamScenario(ctx);
-          expect(await send(route, row.request(scenario), callerId(scenario, caller))).toBe(row.expect[caller]);
+          const req = row.request(scenario);
+          await req.before?.(ctx, scenario);
+          expect(await send(route, req, callerId(scenario, caller))).toBe(row.expect[caller]);
         });
       }
     });
