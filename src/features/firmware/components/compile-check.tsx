@@ -43,13 +43,13 @@ function SketchResult({ sketch, remote }: { sketch: SketchCheck; remote: boolean
 export interface CompileCheckProps {
   robotId: string;
   revision: number;
-  /** Why the revision cannot be checked (it cannot be generated); null when it can. */
-  blockedReason: string | null;
+  /** The revision cannot be generated (or rendered), so there is nothing to compile. */
+  blocked: boolean;
   remoteFolder: string | null;
 }
 
 /** Compiles the saved revision on the server and shows flash and RAM use, or the compiler's messages. */
-export function CompileCheck({ robotId, revision, blockedReason, remoteFolder }: CompileCheckProps) {
+export function CompileCheck({ robotId, revision, blocked, remoteFolder }: CompileCheckProps) {
   const verify = useVerifyRevision(robotId, revision);
   const result = verify.data;
   return (
@@ -58,18 +58,18 @@ export function CompileCheck({ robotId, revision, blockedReason, remoteFolder }:
       titleId="fw-compile-title"
       description={`Revision ${revision} as saved, built for its board on the server.`}
       actions={
-        <Button variant="secondary" size="sm" onClick={() => verify.check()} busy={verify.isFetching} disabled={blockedReason !== null}>
+        <Button variant="secondary" size="sm" onClick={() => verify.check()} busy={verify.isFetching} disabled={blocked}>
           {result ? 'Check again' : 'Check that it compiles'}
         </Button>
       }
     >
       <div aria-live="polite" className="space-y-2">
-        {blockedReason && <p className="text-sm text-ink-muted">{blockedReason}</p>}
-        {!blockedReason && verify.isFetching && <p className="text-sm text-ink-muted">Compiling… the server builds one bundle at a time; this takes a few seconds.</p>}
-        {!blockedReason && !verify.isFetching && verify.isError && (
+        {blocked && <p className="text-sm text-ink-muted">Revision {revision} cannot become firmware, so there is nothing to compile yet.</p>}
+        {!blocked && verify.isFetching && <p className="text-sm text-ink-muted">Compiling… the server builds one bundle at a time; this takes a few seconds.</p>}
+        {!blocked && !verify.isFetching && verify.isError && (
           <ErrorState message={errorMessage(verify.error)} onRetry={() => verify.check()} />
         )}
-        {!blockedReason && !verify.isFetching && !result && !verify.isError && (
+        {!blocked && !verify.isFetching && !result && !verify.isError && (
           <p className="text-sm text-ink-muted">
             AVR boards (Uno, Nano, Mega 2560) are compiled with avr-gcc against the Arduino AVR core, with warnings treated as
             errors. ESP32 and RP2040 sketches are not compiled on this server.

@@ -38,7 +38,7 @@ export function FileTree({ groups, selected, onSelect }: { groups: FileGroup[]; 
                       current ? 'bg-accent-soft font-semibold text-accent-strong' : 'text-ink hover:bg-paper-sunken',
                     )}
                   >
-                    <span className="truncate">{fileName(file.path)}</span>
+                    <span className="min-w-0 break-all">{fileName(file.path)}</span>
                     <span className="shrink-0 font-sans text-xs text-ink-faint">{formatBytes(file.size)}</span>
                   </button>
                 </li>

@@ -80,7 +80,7 @@ export function FirmwareSection({ robot, head, config, onChange, canEdit }: Sect
         <CompileCheck
           robotId={robot.id}
           revision={head.number}
-          blockedReason={blockedReason}
+          blocked={headUnavailable}
           remoteFolder={headFiles.data?.remoteFolder ?? null}
         />
         <FirmwareSettings config={config} onChange={onChange} canEdit={canEdit} derivedName={config.firmware.sketchName === null ? (shown.data?.sketchFolder ?? null) : null} />
