@@ -68,8 +68,8 @@ export function changeRemoteBoard(config: RobotConfig, board: BoardId): BoardCha
 }
 
 /** What the board chooser says after a change, in one or two sentences. */
-export function boardChangeMessage(change: BoardChange, boardName: string): string {
-  const head = `Now on the ${boardName}. Every role is kept`;
+export function boardChangeMessage(change: BoardChange, boardName: string, who: 'robot' | 'remote' = 'robot'): string {
+  const head = `${who === 'robot' ? 'The robot' : 'The remote'} is now on the ${boardName}. Every role is kept`;
   if (change.cleared.length === 0) {
     return change.kept === 0 ? `${head}; no pins were set yet.` : `${head}, and all ${change.kept} pins exist on this board too, so they stay.`;
   }

@@ -38,15 +38,15 @@ export interface SheetPinRow {
 }
 
 const NEED_NOTES: Record<PinDemand['need'], string> = {
-  pwm: 'PWM output',
-  'digital-out': 'digital output',
-  'servo-pulse': 'servo pulses (50 Hz)',
+  pwm: 'PWM',
+  'digital-out': 'digital out',
+  'servo-pulse': 'servo pulses, 50 Hz',
   interrupt: 'input, interrupt',
-  'external-interrupt': 'input, external interrupt',
+  'external-interrupt': 'input, ext. interrupt',
   'uart-rx': 'serial receive',
-  'analog-in': 'analog input',
-  'switch-in': 'input with pull-up, switch to ground',
-  led: 'digital output (LED)',
+  'analog-in': 'analog in',
+  'switch-in': 'switch to ground, pull-up',
+  led: 'LED output',
 };
 
 function noteFor(board: BoardProfile, demand: PinDemand): string {
@@ -88,14 +88,14 @@ export interface SheetDriver {
 function pwmLine(config: RobotConfig, driverIndex: number): string {
   const driver = config.wiring.drivers[driverIndex];
   const kind = DRIVER_KINDS[driver.kind];
-  if (kind.maxPwmHz === null) return 'Servo pulses at 50 Hz';
+  if (kind.maxPwmHz === null) return 'servo pulses at 50 Hz';
   const board = getBoard(config.wiring.board);
   const first = driverPinRoles(driver.kind, driver.motors.length).find((r) => r.need === 'pwm');
   const pinId = first ? assignmentOf(config, { owner: 'driver', driverIndex, roleId: first.id }).pin : null;
   const pin = pinId ? findPin(board, pinId) : undefined;
   const setting = pin ? pwmSettingForPin(board, pin, driver.pwmFrequencyHz, kind.maxPwmHz) : null;
-  const asked = driver.pwmFrequencyHz === null ? 'Board default' : `${formatHz(driver.pwmFrequencyHz)} asked`;
-  return setting ? `${asked}: runs at ${formatHz(setting.actualHz)}` : asked;
+  const asked = driver.pwmFrequencyHz === null ? 'board default' : `${formatHz(driver.pwmFrequencyHz)} set`;
+  return setting ? `${asked}, runs at ${formatHz(setting.actualHz)}` : asked;
 }
 
 function ratingsLine(config: RobotConfig, driverIndex: number): string {
@@ -103,9 +103,9 @@ function ratingsLine(config: RobotConfig, driverIndex: number): string {
   const ratings = DRIVER_KINDS[driver.kind].ratings;
   const cont = driver.continuousCurrentA ?? ratings.continuousA;
   const peak = driver.peakCurrentA ?? ratings.peakA;
-  if (cont === null && peak === null) return 'As on the module’s label';
-  const volts = ratings.motorVolts ? `, motor supply ${ratings.motorVolts.min}–${ratings.motorVolts.max} V` : '';
-  return `${cont ?? '?'} A continuous, ${peak ?? '?'} A peak per channel${volts}`;
+  if (cont === null && peak === null) return 'as on the module’s label';
+  const volts = ratings.motorVolts ? `, motors ${ratings.motorVolts.min}–${ratings.motorVolts.max} V` : '';
+  return `${cont ?? '?'} A continuous, ${peak ?? '?'} A peak${volts}`;
 }
 
 /** One entry per driver: its channels' motors and every role with its pin. */
@@ -134,7 +134,7 @@ export function sheetDrivers(config: RobotConfig): SheetDriver[] {
       kind: kind.name,
       motors: driver.motors.map((motor, i) => ({ channel: i === 0 ? 'A' : 'B', motor })),
       roles,
-      stop: `${driver.stopMode === 'brake' ? 'Brake' : 'Coast'}${stopWay ? `: ${stopWay}` : ' (not possible with this kind)'}`,
+      stop: `${driver.stopMode}${stopWay ? '' : ' (not possible with this kind)'}`,
       pwm: pwmLine(config, driverIndex),
       ratings: ratingsLine(config, driverIndex),
     };
@@ -143,6 +143,8 @@ export function sheetDrivers(config: RobotConfig): SheetDriver[] {
 
 export interface SheetInput {
   source: string;
+  /** The board these pins are on (short name). */
+  board: string;
   /** Line settings and parts, as sentences. */
   notes: string[];
   rows: { role: string; pin: PinRef }[];
@@ -163,15 +165,15 @@ export function sheetInput(config: RobotConfig, side: PinDemand['side'] = 'robot
   const notes: string[] = [];
   if (source.serial) notes.push(`${source.serial.baud} baud, ${source.serial.format}${source.serial.inverted ? ', inverted' : ''}.`);
   if (source.needsPart?.families.includes(board.family) && side === 'robot') notes.push(`Fit ${source.needsPart.part}: ${source.needsPart.reason}.`);
-  return { source: source.name, notes, rows };
+  return { source: source.name, board: board.shortName, notes, rows };
 }
 
 /** The status LED and the bench-test switch. */
 export function sheetExtras(config: RobotConfig): { role: string; pin: PinRef; note: string }[] {
   const board = getBoard(config.wiring.board);
   return [
-    { role: 'Status LED', pin: pinRef(board, config.wiring.statusLed.pin), note: 'LED with a series resistor to ground (or the built-in LED)' },
-    { role: 'Bench-test switch', pin: pinRef(board, config.wiring.benchTestPin.pin), note: 'held to ground at power-up, it starts the bench test' },
+    { role: 'Status LED', pin: pinRef(board, config.wiring.statusLed.pin), note: 'LED and series resistor to ground' },
+    { role: 'Bench-test switch', pin: pinRef(board, config.wiring.benchTestPin.pin), note: 'switch to ground, held at power-up' },
   ];
 }
 
