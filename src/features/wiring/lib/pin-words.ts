@@ -51,7 +51,7 @@ export function abilityTags(board: BoardProfile, pin: BoardPin): AbilityTag[] {
   return tags.filter((t): t is AbilityTag => t !== null);
 }
 
-/** "D9" or, when the silkscreen differs, "D9 (~9)". */
+/** "D9" or, when the silkscreen says more than the id and the code, "D9 (~9)", "GPIO36 (VP)". */
 export function pinName(pin: BoardPin): string {
-  return pin.label === pin.id ? pin.id : `${pin.id} (${pin.label})`;
+  return pin.label === pin.id || pin.label === pin.code ? pin.id : `${pin.id} (${pin.label})`;
 }
