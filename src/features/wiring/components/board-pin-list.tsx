@@ -7,6 +7,7 @@ import { isPinLit, isRoleLit, useHighlight } from '../hooks/wiring-highlight';
 import { focusProblemField } from '../lib/focus-field';
 import { abilityTags, type AbilityTone } from '../lib/pin-words';
 import { problemsForPin } from '../lib/wiring-problems';
+import { PinStrip, type PinState } from './pin-strip';
 import { SeverityIcon } from './severity-icon';
 
 type Filter = 'all' | 'used' | 'free' | 'problems';
@@ -49,11 +50,28 @@ export function BoardPinList({ board, side, demands, problems, roleLabel }: Boar
     if (filter === 'problems') return pinProblems(pin).length > 0;
     return true;
   });
+  const stateOf = (pin: BoardPin): PinState => {
+    const problems = pinProblems(pin);
+    if (pin.flash || (!pin.onHeader && !pin.builtinLed)) return 'never';
+    if (problems.some((p) => p.severity === 'error')) return 'error';
+    if (problems.length > 0) return 'warning';
+    return rolesOn(pin).length > 0 ? 'used' : 'free';
+  };
+  const choose = (pin: BoardPin) => {
+    setFilter('all');
+    // After the list shows every pin again, bring this one into view and give it focus.
+    requestAnimationFrame(() => {
+      const row = document.querySelector<HTMLElement>(`[data-pin-side="${side}"][data-pin="${pin.id}"]`);
+      row?.scrollIntoView?.({ block: 'nearest', behavior: 'smooth' });
+      row?.focus({ preventScroll: true });
+    });
+  };
   const used = board.pins.filter((p) => rolesOn(p).length > 0).length;
   const troubled = board.pins.filter((p) => pinProblems(p).length > 0).length;
   return (
     <div>
-      <div className="flex flex-wrap items-center justify-between gap-2">
+      <PinStrip pins={board.pins} side={side} stateOf={stateOf} onChoose={choose} />
+      <div className="mt-3 flex flex-wrap items-center justify-between gap-2 border-t border-rule pt-2">
         <p className="text-sm text-ink-muted" aria-live="polite">
           {used} of {board.pins.length} pins in use{troubled > 0 ? ` · ${troubled} with problems` : ''}
         </p>
@@ -95,6 +113,7 @@ function PinRow({ board, side, pin, roles, problems, roleLabel }: PinRowProps) {
     <li
       tabIndex={0}
       data-pin={pin.id}
+      data-pin-side={side}
       data-state={state}
       data-lit={lit || undefined}
       aria-label={`${pin.id}, code ${pin.code}${roles.length ? `, used for ${roles.map(roleLabel).join(', ')}` : ', free'}${problems.length ? `, ${problems.length} problem${problems.length > 1 ? 's' : ''}` : ''}`}

@@ -22,16 +22,18 @@ export function InputPinsPanel({ config, demands, ...shared }: Shared & { config
     source.usesSpi && `The transceiver also takes the SPI bus: ${board.spi.sck} (SCK), ${board.spi.mosi} (MOSI) and ${board.spi.miso} (MISO).`,
   ].filter(Boolean) as string[];
   return (
-    <Panel title={`Input: ${source.name}`} titleId={fieldDomId(['wiring', 'inputPins'])} description="The input source and its channels are chosen in Controls; here its wires meet the board.">
-      {notes.length > 0 && (
-        <ul className="mb-2 space-y-0.5 text-sm text-ink-muted">
-          {notes.map((n) => (
-            <li key={n}>{n}</li>
-          ))}
-        </ul>
-      )}
-      <RolePickers demands={inputs} labelOf={roleLabel} {...shared} />
-    </Panel>
+    <div id={fieldDomId(['wiring', 'inputPins'])} tabIndex={-1} data-flash-target className="rounded-lg data-[flash]:ring-2 data-[flash]:ring-accent">
+      <Panel title={`Input: ${source.name}`} titleId="wiring-input-title" description="The input source and its channels are chosen in Controls; here its wires meet the board.">
+        {notes.length > 0 && (
+          <ul className="mb-2 space-y-0.5 text-sm text-ink-muted">
+            {notes.map((n) => (
+              <li key={n}>{n}</li>
+            ))}
+          </ul>
+        )}
+        <RolePickers demands={inputs} labelOf={roleLabel} {...shared} />
+      </Panel>
+    </div>
   );
 }
 

@@ -41,9 +41,11 @@ export function fieldDomId(path: Path): string {
 
 /**
  * The field to focus for a problem: the element for its path, else for the longest part of the
- * path that has one (a driver's card for a driver-wide problem), else the drivers panel.
+ * path that has one (a driver's card for a driver-wide problem), else the drivers panel. A path
+ * into the controls (the input source) leads to the input's pins, shown here.
  */
 export function targetFor(path: Path, exists: (id: string) => boolean): string {
+  if (path[0] === 'controls' && path[1] !== 'link' && exists(fieldDomId(['wiring', 'inputPins']))) return fieldDomId(['wiring', 'inputPins']);
   for (let n = path.length; n > 0; n -= 1) {
     const id = fieldDomId(path.slice(0, n));
     if (exists(id)) return id;
