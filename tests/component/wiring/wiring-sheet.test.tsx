@@ -59,6 +59,16 @@ describe('the wiring sheet', () => {
     expect(screen.getByText(/Fuse in the battery’s positive lead/)).toBeTruthy();
   });
 
+  it('names every role still without a pin in one line of its open problems', () => {
+    render(
+      <MemoryRouter>
+        <WiringSheet robotName="Test robot" teamName="Quarry Lane Robotics" revision={revisionOf(unoPlan({}, { 'Driver 1/a.pwm': null, 'input/ppm': null }), 5)} />
+      </MemoryRouter>,
+    );
+    const open = screen.getByRole('region', { name: /2 open wiring problems/ });
+    expect(within(open).getAllByRole('listitem').map((li) => li.textContent)).toEqual(['Error: no pin yet for Driver 1 A PWM, PPM signal.']);
+  });
+
   it('leaves the photo slot empty without a photo and fills it with one', () => {
     const { container, unmount } = renderSheet();
     expect(container.querySelector('[data-slot="robot-photo"]')).toBeNull();

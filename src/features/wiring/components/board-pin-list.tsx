@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useState, type KeyboardEvent } from 'react';
 import type { BoardPin, BoardProfile } from '@shared/boards/board-types';
 import type { PinDemand, PlanSide } from '@shared/pins/pin-demands';
 import type { Problem } from '@shared/problems/problem';
@@ -42,6 +42,8 @@ export interface BoardPinListProps {
  */
 export function BoardPinList({ board, side, demands, problems, roleLabel }: BoardPinListProps) {
   const [filter, setFilter] = useState<Filter>('all');
+  // One tab stop for the whole list; the arrow keys move between pins (roving focus).
+  const [active, setActive] = useState<string | null>(null);
   const rolesOn = (pin: BoardPin) => demands.filter((d) => d.pin === pin.id);
   const pinProblems = (pin: BoardPin) => problemsForPin(problems, pin.id, side === 'remote');
   const shown = board.pins.filter((pin) => {
@@ -66,6 +68,15 @@ export function BoardPinList({ board, side, demands, problems, roleLabel }: Boar
       row?.focus({ preventScroll: true });
     });
   };
+  const moveFocus = (event: KeyboardEvent<HTMLUListElement>) => {
+    const rows = [...event.currentTarget.querySelectorAll<HTMLElement>(':scope > li[data-pin]')];
+    const at = rows.findIndex((r) => r === document.activeElement);
+    if (at < 0) return;
+    const to = { ArrowDown: at + 1, ArrowUp: at - 1, Home: 0, End: rows.length - 1 }[event.key];
+    if (to === undefined || !rows[to]) return;
+    event.preventDefault();
+    rows[to].focus();
+  };
   const used = board.pins.filter((p) => rolesOn(p).length > 0).length;
   const troubled = board.pins.filter((p) => pinProblems(p).length > 0).length;
   return (
@@ -83,9 +94,9 @@ export function BoardPinList({ board, side, demands, problems, roleLabel }: Boar
           ))}
         </div>
       </div>
-      <ul aria-label={`${board.name} pins`} className="mt-2 divide-y divide-rule border-y border-rule">
+      <ul aria-label={`${board.name} pins (arrow keys move between pins)`} onKeyDown={moveFocus} className="mt-2 divide-y divide-rule border-y border-rule">
         {shown.map((pin) => (
-          <PinRow key={pin.id} board={board} side={side} pin={pin} roles={rolesOn(pin)} problems={pinProblems(pin)} roleLabel={roleLabel} />
+          <PinRow key={pin.id} board={board} side={side} pin={pin} roles={rolesOn(pin)} problems={pinProblems(pin)} roleLabel={roleLabel} tabbable={pin.id === (active ?? shown[0]?.id)} onActive={() => setActive(pin.id)} />
         ))}
         {shown.length === 0 && <li className="py-3 text-sm text-ink-muted">No pin matches.</li>}
       </ul>
@@ -94,6 +105,8 @@ export function BoardPinList({ board, side, demands, problems, roleLabel }: Boar
 }
 
 interface PinRowProps {
+  tabbable: boolean;
+  onActive: () => void;
   board: BoardProfile;
   side: PlanSide;
   pin: BoardPin;
@@ -102,16 +115,20 @@ interface PinRowProps {
   roleLabel: (demand: PinDemand) => string;
 }
 
-function PinRow({ board, side, pin, roles, problems, roleLabel }: PinRowProps) {
+function PinRow({ board, side, pin, roles, problems, roleLabel, tabbable, onActive }: PinRowProps) {
   const { highlight, setHighlight } = useHighlight();
   const lit = isPinLit(highlight, side, pin.id) || roles.some((d) => isRoleLit(highlight, side, d.key, d.pin));
   const worst = problems.find((p) => p.severity === 'error') ?? problems[0];
   const enter = () => setHighlight({ side, pin: pin.id, roleKey: null });
   const leave = () => setHighlight(null);
+  const focus = () => {
+    enter();
+    onActive();
+  };
   const state = pin.flash ? 'never' : worst ? worst.severity : roles.length > 0 ? 'used' : 'free';
   return (
     <li
-      tabIndex={0}
+      tabIndex={tabbable ? 0 : -1}
       data-pin={pin.id}
       data-pin-side={side}
       data-state={state}
@@ -119,7 +136,7 @@ function PinRow({ board, side, pin, roles, problems, roleLabel }: PinRowProps) {
       aria-label={`${pin.id}, code ${pin.code}${roles.length ? `, used for ${roles.map(roleLabel).join(', ')}` : ', free'}${problems.length ? `, ${problems.length} problem${problems.length > 1 ? 's' : ''}` : ''}`}
       onMouseEnter={enter}
       onMouseLeave={leave}
-      onFocus={enter}
+      onFocus={focus}
       onBlur={leave}
       className={cx(
         'relative grid grid-cols-[6.5rem_1fr] gap-x-2 py-1.5 pr-1 pl-3 outline-offset-[-2px] transition-colors',

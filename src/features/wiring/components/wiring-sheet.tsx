@@ -1,5 +1,6 @@
 import './wiring-sheet.css';
 import { getBoard } from '@shared/boards/boards';
+import { collectDemands } from '@shared/pins/pin-demands';
 import { powerAdvice } from '@shared/power/power-advice';
 import { robotProblems } from '@shared/problems/robot-problems';
 import type { RevisionDetail } from '@shared/schemas/robots';
@@ -29,6 +30,11 @@ export function WiringSheet({ robotName, teamName, revision, photoUrl, printedAt
   const config = revision.config;
   const board = getBoard(config.wiring.board);
   const open = robotProblems(config).filter(isWiringProblem);
+  // Roles without a pin are named in one line; a fresh robot would otherwise fill the page.
+  const missing = collectDemands(config)
+    .filter((d) => d.required && d.pin === null)
+    .map((d) => d.label);
+  const others = open.filter((p) => p.code !== 'pin-missing');
   const hasRemote = config.controls.source === 'nrf24';
   const advice = powerAdvice(config);
   return (
@@ -68,7 +74,12 @@ export function WiringSheet({ robotName, teamName, revision, photoUrl, printedAt
             This revision has {open.length} open wiring problem{open.length === 1 ? '' : 's'}: check before wiring
           </h2>
           <ul className="mt-1 list-disc pl-5 text-[13px]">
-            {open.map((p, i) => (
+            {missing.length > 0 && (
+              <li>
+                <span className="font-semibold">Error:</span> no pin yet for {missing.join(', ')}.
+              </li>
+            )}
+            {others.map((p, i) => (
               <li key={`${p.code}-${i}`}>
                 <span className="font-semibold">{p.severity === 'error' ? 'Error' : 'Warning'}:</span> {p.message}
               </li>
