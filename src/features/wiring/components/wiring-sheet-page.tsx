@@ -15,13 +15,15 @@ export interface WiringSheetPageProps {
   badRevision?: string;
   /** Where "Back" leads (the robot's editor). */
   backTo: string;
+  /** The robot's photo for the sheet's photo slot; nothing is drawn without one. */
+  photoUrl?: string;
 }
 
 /**
  * The wiring sheet on screen: a toolbar to print or go back (never printed) above the sheet of
  * the asked revision, with loading and error states for both requests.
  */
-export function WiringSheetPage({ robotId, revision, badRevision, backTo }: WiringSheetPageProps) {
+export function WiringSheetPage({ robotId, revision, badRevision, backTo, photoUrl }: WiringSheetPageProps) {
   const robot = useSheetRobot(robotId);
   const wantsOther = revision !== null && robot.data !== undefined && revision !== robot.data.head.number;
   const other = useSheetRevision(robotId, wantsOther ? revision : null);
@@ -41,7 +43,7 @@ export function WiringSheetPage({ robotId, revision, badRevision, backTo }: Wiri
       return <ErrorState message={message} onRetry={isApiError(failed.error, 404) ? undefined : () => failed.refetch()} />;
     }
     if (!robot.data || !sheetRevision) return null;
-    return <WiringSheet robotName={robot.data.robot.name} teamName={robot.data.robot.teamName} revision={sheetRevision} />;
+    return <WiringSheet robotName={robot.data.robot.name} teamName={robot.data.robot.teamName} revision={sheetRevision} photoUrl={photoUrl} />;
   };
 
   return (
