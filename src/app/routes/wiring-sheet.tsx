@@ -10,7 +10,6 @@ export function WiringSheetRoute() {
   const valid = parsed === null || (Number.isInteger(parsed) && parsed >= 1);
   return (
     <WiringSheetPage
-      teamId={teamId}
       robotId={robotId}
       revision={valid ? parsed : null}
       badRevision={valid ? undefined : (raw ?? undefined)}

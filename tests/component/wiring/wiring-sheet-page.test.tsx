@@ -32,7 +32,7 @@ function renderPage(revision: number | null, badRevision?: string) {
   return render(
     <QueryClientProvider client={client}>
       <MemoryRouter>
-        <WiringSheetPage teamId="team-2" robotId="robot-7" revision={revision} badRevision={badRevision} backTo="/teams/team-2/robots/robot-7" />
+        <WiringSheetPage robotId="robot-7" revision={revision} badRevision={badRevision} backTo="/teams/team-2/robots/robot-7" />
       </MemoryRouter>
     </QueryClientProvider>,
   );

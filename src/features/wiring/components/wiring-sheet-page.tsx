@@ -7,7 +7,6 @@ import { useSheetRobot } from '../api/get-sheet-robot';
 import { WiringSheet } from './wiring-sheet';
 
 export interface WiringSheetPageProps {
-  teamId: string;
   robotId: string;
   /** The revision asked for in the address; null = the robot's head revision. */
   revision: number | null;
