@@ -44,7 +44,8 @@ export function WiringSheet({ robotName, teamName, revision, photoUrl, printedAt
           <p className="text-[11px] font-semibold tracking-[0.18em] text-ink-muted uppercase">Mixwright wiring sheet · {teamName}</p>
           <h1 className="text-2xl leading-tight font-bold">{robotName}</h1>
           <p className="text-sm text-ink-soft">
-            {board.name} ({board.mcu}, {board.logicVolts} V logic{board.fiveVoltTolerant ? '' : ', not 5 V tolerant'})
+            {board.name} ({board.name.includes(board.mcu) ? '' : `${board.mcu}, `}
+            {board.logicVolts} V logic{board.fiveVoltTolerant ? '' : ', not 5 V tolerant'})
           </p>
         </div>
         <dl className="grid shrink-0 grid-cols-[auto_auto] gap-x-3 text-right text-sm">
