@@ -22,9 +22,10 @@ export function syncMotors(config: RobotConfig, renames: Readonly<Record<string,
   const names = [...new Set(config.chassis.wheels.map((w) => w.motor))];
   const settings = new Map(config.motors.map((m) => [renames[m.name] ?? m.name, m]));
   const motors = names.map((name) => ({ ...(settings.get(name) ?? MotorSchema.parse({ name })), name }));
-  let drivers = config.wiring.drivers
-    .map((d) => ({ ...d, motors: [...new Set(d.motors.map((m) => renames[m] ?? m))].filter((m) => names.includes(m)) }))
-    .filter((d) => d.motors.length > 0);
+  // Each motor keeps the first channel it is found on; merged motors free the others.
+  const seen = new Set<string>();
+  const keep = (m: string) => names.includes(m) && !seen.has(m) && (seen.add(m), true);
+  let drivers = config.wiring.drivers.map((d) => ({ ...d, motors: d.motors.map((m) => renames[m] ?? m).filter(keep) })).filter((d) => d.motors.length > 0);
   const placed = new Set(drivers.flatMap((d) => d.motors));
   for (const name of names.filter((n) => !placed.has(n))) drivers = placeOnDriver(drivers, name, config.wiring.drivers[0]?.kind);
   return { ...config, motors, wiring: { ...config.wiring, drivers: drivers.map(fitDriverPins) } };

@@ -21,7 +21,7 @@ export function ChassisSection({ config, onChange, canEdit, validConfig, fieldEr
             <MotorTable />
           </div>
           <Panel title="Top view" titleId="top-view-title" description="To scale; forward is up. Arrows: where each wheel pushes for a positive command.">
-            <ChassisDrawing wheels={engineConfig.chassis.wheels} highlightMotor={highlightMotor} width={420} height={380} />
+            <ChassisDrawing wheels={engineConfig.chassis.wheels} highlightMotor={highlightMotor} />
           </Panel>
         </div>
         <WheelTable />

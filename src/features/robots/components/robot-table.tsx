@@ -18,7 +18,7 @@ import { Link } from 'react-router';
 import { cx } from '@/components/ui/cx';
 import { formatDate } from '@/lib/format';
 import type { RobotListItem } from '@shared/schemas/robots';
-import { boardLabel, layoutLabel, problemWords, robotFilterMatches, type RobotFilter } from '../lib/robot-list-words';
+import { boardLabel, boardName, layoutLabel, problemWords, robotFilterMatches, type RobotFilter } from '../lib/robot-list-words';
 import { RobotTableFilters } from './robot-table-filters';
 
 const features = tableFeatures({
@@ -43,7 +43,7 @@ const byStatus: FilterFn<Features, RobotListItem> = (row, _id, filter: RobotFilt
 
 const searchAll: FilterFn<Features, RobotListItem> = (row, _id, text: string) => {
   const r = row.original;
-  const haystack = `${r.name} ${layoutLabel(r.layout)} ${boardLabel(r.board)}`.toLowerCase();
+  const haystack = `${r.name} ${layoutLabel(r.layout)} ${boardLabel(r.board)} ${boardName(r.board)}`.toLowerCase();
   return haystack.includes(String(text).trim().toLowerCase());
 };
 
@@ -58,7 +58,12 @@ const columns = helper.columns([
     ),
   }),
   helper.accessor((r) => layoutLabel(r.layout), { id: 'layout', header: 'Drive layout', sortFn: 'text' }),
-  helper.accessor((r) => boardLabel(r.board), { id: 'board', header: 'Board', sortFn: 'text' }),
+  helper.accessor((r) => boardLabel(r.board), {
+    id: 'board',
+    header: 'Board',
+    sortFn: 'text',
+    cell: (info) => <span title={boardName(info.row.original.board)}>{info.getValue()}</span>,
+  }),
   helper.accessor('headRevision', {
     header: 'Head',
     sortFn: 'basic',
@@ -126,7 +131,7 @@ export function RobotTable({ robots, teamName }: { robots: RobotListItem[]; team
                       key={header.id}
                       scope="col"
                       aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : 'none'}
-                      className={cx('px-3 py-1.5 font-semibold first:pl-0 last:pr-0', header.column.id === 'headRevision' && 'text-right')}
+                      className={cx('px-3 py-1.5 font-semibold whitespace-nowrap first:pl-0 last:pr-0', header.column.id === 'headRevision' && 'text-right')}
                     >
                       <button
                         type="button"
@@ -172,7 +177,7 @@ function FlashCell({ robot }: { robot: RobotListItem }) {
   if (!robot.lastFlash) return <span className="text-ink-faint">not flashed yet</span>;
   const behind = robot.lastFlash.revisionNumber !== robot.headRevision;
   return (
-    <span>
+    <span className="whitespace-nowrap">
       <span className="font-mono">r{robot.lastFlash.revisionNumber}</span>
       <span className="text-ink-muted"> · {formatDate(robot.lastFlash.flashedAt)}</span>
       {behind && (
@@ -187,7 +192,7 @@ function ProblemCell({ robot }: { robot: RobotListItem }) {
   if (!p) return <span className="text-ink-faint">{problemWords(p)}</span>;
   if (p.errors === 0 && p.warnings === 0) return <span className="text-accent-strong">{problemWords(p)}</span>;
   return (
-    <span className="flex flex-wrap gap-1.5">
+    <span className="flex gap-1.5 whitespace-nowrap">
       {p.errors > 0 && (
         <span className="rounded border border-error/30 bg-error-soft px-1.5 py-0.5 text-xs font-semibold text-error-strong">
           {p.errors} {p.errors === 1 ? 'error' : 'errors'}

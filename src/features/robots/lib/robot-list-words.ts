@@ -9,6 +9,10 @@ export function layoutLabel(layout: ChassisLayout | null): string {
 }
 
 export function boardLabel(board: BoardId | null): string {
+  return board === null ? 'unknown' : BOARDS[board].shortName;
+}
+
+export function boardName(board: BoardId | null): string {
   return board === null ? 'unknown' : BOARDS[board].name;
 }
 

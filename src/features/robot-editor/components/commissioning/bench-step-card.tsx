@@ -27,8 +27,8 @@ export function BenchStepCard({ config, step, total, finding, onAnswer, disabled
       <figure>
         <ChassisDrawing
           wheels={config.chassis.wheels}
-          title={`Bench test, motor ${step.index + 1} of ${total}: the wheels of ${watched} turning forward`}
-          motorCommands={turned === null ? {} : { [watched]: 1 }}
+          title={`Bench test, motor ${step.index + 1} of ${total}: the wheels of ${watched} turning forward at ${Math.round(step.duty * 100)} %`}
+          motorCommands={turned === null ? {} : { [watched]: step.duty }}
           highlightMotor={turned === null ? step.motor : watched}
           width={420}
           height={380}

@@ -27,23 +27,21 @@ export function AxisMap() {
               <h3 id={`axis-${axis}`} className="font-semibold">
                 {AXIS_WORDS[axis].title} <span className="text-sm font-normal text-ink-muted">({AXIS_WORDS[axis].plus})</span>
               </h3>
-              <div className="mt-2 grid grid-cols-[minmax(0,1fr)_7.5rem] gap-x-3">
+              <div className="mt-2 flex flex-wrap items-start gap-x-3">
+                <DraftSelectField path={[...base, 'channel']} label="Channel" options={options} width="w-44" />
+                <DraftCheckbox path={[...base, 'reverse']} label="Reverse" hint="For a stick that reads backwards" className="pt-6" />
+              </div>
+              <div className="grid grid-cols-[6.5rem_minmax(0,1fr)] gap-x-3">
                 <div>
-                  <DraftSelectField path={[...base, 'channel']} label="Channel" options={options} width="w-full" />
-                  <div className="grid grid-cols-3 gap-x-2">
-                    <DraftNumberField path={[...base, 'deadband']} label="Deadband" unit="%" scale={100} width="w-14" />
-                    <DraftNumberField path={[...base, 'expo']} label="Expo" unit="%" scale={100} width="w-14" />
-                    <DraftNumberField path={[...base, 'rate']} label="Rate" unit="%" scale={100} width="w-14" />
-                  </div>
-                  <DraftCheckbox path={[...base, 'reverse']} label="Reverse" hint="For a stick that reads backwards." />
+                  <DraftNumberField path={[...base, 'deadband']} label="Deadband" unit="%" scale={100} width="w-14" />
+                  <DraftNumberField path={[...base, 'expo']} label="Expo" unit="%" scale={100} width="w-14" />
+                  <DraftNumberField path={[...base, 'rate']} label="Rate" unit="%" scale={100} width="w-14" />
                 </div>
-                <div className="pt-6">
-                  {plottable ? (
-                    <AxisCurvePlot axis={settings} label={AXIS_WORDS[axis].title} size={120} />
-                  ) : (
-                    <p className="text-xs text-ink-muted">The curve returns when the values are valid.</p>
-                  )}
-                </div>
+                {plottable ? (
+                  <AxisCurvePlot axis={settings} label={AXIS_WORDS[axis].title} size={168} className="max-w-56" />
+                ) : (
+                  <p className="pt-6 text-xs text-ink-muted">The curve returns when the values are valid.</p>
+                )}
               </div>
             </section>
           );

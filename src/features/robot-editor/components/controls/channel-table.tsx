@@ -48,7 +48,7 @@ export function ChannelTable() {
         </p>
       </div>
       <div className="overflow-x-auto" data-field="controls.channels">
-        <table className="w-full border-collapse text-left text-sm">
+        <table className="border-collapse text-left text-sm">
           <caption className="sr-only">Channels</caption>
           <thead className="border-b border-rule-strong text-xs text-ink-muted">
             <tr>

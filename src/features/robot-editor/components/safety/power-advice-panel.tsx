@@ -11,7 +11,7 @@ export function PowerAdvicePanel({ config }: { config: RobotConfig }) {
   const advice = useMemo(() => powerAdvice(config), [config]);
   return (
     <Panel title="Power and protection advice" titleId="power-advice-title" description="Worked out from the motors’ stall currents, the drivers’ ratings and the battery.">
-      <dl className="grid gap-3 sm:grid-cols-3">
+      <dl className="grid gap-3 sm:grid-cols-2 2xl:grid-cols-4">
         <Figure term="All motors stalled" value={amps(advice.stallTotalA)} />
         <Figure term="Running current (estimate)" value={amps(advice.runningA)} />
         <Figure term="Fuse in the battery lead" value={advice.fuseA ? `${advice.fuseA} A blade fuse` : 'above the largest blade fuse: use a circuit breaker'} />
