@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useMemo } from 'react';
-import { useForm, useWatch } from 'react-hook-form';
+import { useController, useForm, useWatch, type Control } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { SelectField } from '@/components/ui/select-field';
@@ -44,10 +44,10 @@ export function NewRobotForm({ teamId, onCreated, onCancel }: { teamId: string; 
       <FormError message={errors.root?.server?.message} />
       <TextField label="Robot name" autoComplete="off" autoFocus error={errors.name?.message} {...form.register('name')} />
       <div className="grid gap-3 sm:grid-cols-2">
-        <SelectField label="Starter layout" options={layoutOptions} {...form.register('layout')} />
-        <SelectField label="Board" options={boardOptions} {...form.register('board')} />
-        <SelectField label="Input source" options={inputOptions} {...form.register('input')} />
-        <SelectField label="Motor driver" options={driverOptions} {...form.register('driver')} />
+        <ChoiceField control={form.control} name="layout" label="Starter layout" options={layoutOptions} />
+        <ChoiceField control={form.control} name="board" label="Board" options={boardOptions} />
+        <ChoiceField control={form.control} name="input" label="Input source" options={inputOptions} />
+        <ChoiceField control={form.control} name="driver" label="Motor driver" options={driverOptions} />
       </div>
       <div role="status" className="min-h-12 rounded-md border border-rule bg-paper px-3 py-2 text-sm">
         <p className="font-semibold text-ink-soft">
@@ -72,4 +72,10 @@ export function NewRobotForm({ teamId, onCreated, onCancel }: { teamId: string; 
       </div>
     </form>
   );
+}
+
+/** A controlled select: the form state, not the DOM, holds the choice. */
+function ChoiceField({ control, name, label, options }: { control: Control<Values>; name: Exclude<keyof Values, 'name'>; label: string; options: { value: string; label: string }[] }) {
+  const { field, fieldState } = useController({ control, name });
+  return <SelectField label={label} options={options} error={fieldState.error?.message} name={field.name} value={field.value} onChange={field.onChange} onBlur={field.onBlur} ref={field.ref} />;
 }
