@@ -57,7 +57,9 @@ function ParamField({ layout, field }: { layout: DriveLayoutId; field: PresetPar
   const { config, update, errors, disabled } = useDraftFields();
   const id = useId();
   const key = `chassis.params.${field.key}`;
-  const error = errors[key];
+  // The schema's messages start with the parameter's name, which is already the label.
+  const raw = errors[key];
+  const error = raw?.startsWith(`${field.label} `) ? `${raw.charAt(field.label.length + 1).toUpperCase()}${raw.slice(field.label.length + 2)}` : raw;
   const value = config.chassis.params[field.key];
   // The typed value goes into the draft; the wheels are rebuilt only from parameters that pass.
   const commit = (next: number | string | null) =>
