@@ -46,6 +46,7 @@ describe('building a robot in the editor', () => {
     await page.waitForURL(/\/robots\/[^/]+\/chassis$/);
     await page.getByText('Head r1').waitFor();
     await page.getByText('No unsaved changes').waitFor();
+    await page.getByRole('heading', { name: 'What if a motor were reversed?' }).waitFor();
     await screenshot(page, 'editor-chassis');
 
     // Chassis: a bigger wheel, from the layout's parameters.

@@ -42,6 +42,7 @@ export function TeamRobotsRoute() {
         open={creating}
         onClose={() => setCreating(false)}
         title="New robot"
+        size="max-w-2xl"
         description="Pick a starter layout and the parts; everything can be changed later in the editor."
       >
         <Suspense fallback={<LoadingState label="Loading the starter layouts…" />}>
