@@ -1,8 +1,10 @@
 import { render, screen, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
 import { MemoryRouter, Route, Routes } from 'react-router';
 import { describe, expect, it } from 'vitest';
 import { SectionNav } from '@/features/robot-editor/components/shell/section-nav';
 import { ProblemList, problemHref } from '@/features/robot-editor/components/shell/problem-list';
+import { SectionProblems } from '@/features/robot-editor/components/shell/section-problems';
 import { countBySection, fieldErrorProblems, sectionOfPath, type EditorProblem } from '@/features/robot-editor/lib/editor-sections';
 import type { Problem } from '@shared/problems/problem';
 
@@ -84,5 +86,29 @@ describe('links from a problem to its field', () => {
     expect(within(item).getByText('Failsafe too slow')).toBeTruthy();
     expect(within(item).getByText('Do something about it')).toBeTruthy();
     expect(within(item).getByRole('link', { name: 'Show field' }).getAttribute('href')).toBe('/teams/t/robots/r/safety?field=safety.failsafeTimeoutMs');
+  });
+});
+
+describe('the problem line above a section', () => {
+  it('sums the section’s problems in one line and opens the list over the content on request', async () => {
+    const user = userEvent.setup();
+    render(
+      <MemoryRouter>
+        <SectionProblems label="Safety" available={['safety']} problems={[problem('error', ['safety', 'rampPerSecond'], 'Ramp too steep'), problem('warning', ['power', 'cells'])]} />
+      </MemoryRouter>,
+    );
+    expect(screen.getByRole('status').textContent).toBe('Safety: 1 error, 1 warning');
+    expect(screen.queryByText('Ramp too steep')).toBeNull();
+    await user.click(screen.getByRole('button', { name: 'Show the list' }));
+    expect(screen.getByRole('region', { name: 'Problems in Safety' })).toBeTruthy();
+    expect(screen.getByText('Ramp too steep')).toBeTruthy();
+    await user.keyboard('{Escape}');
+    expect(screen.queryByText('Ramp too steep')).toBeNull();
+  });
+
+  it('says so when the section has no problems', () => {
+    render(<SectionProblems label="Controls" available={['controls']} problems={[]} />);
+    expect(screen.getByRole('status').textContent).toBe('Controls: no errors or warnings');
+    expect(screen.queryByRole('button')).toBeNull();
   });
 });
