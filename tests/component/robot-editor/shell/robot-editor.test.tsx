@@ -111,3 +111,19 @@ describe('the robot editor', () => {
     expect(localStorage.getItem('mixwright:draft:robot-1')).toContain('"rampPerSecond":6');
   });
 });
+
+describe('discarding the draft', () => {
+  it('asks first, then goes back to the head revision', async () => {
+    const user = userEvent.setup();
+    renderEditor(robotDetail());
+    const ramp = screen.getByLabelText('Ramp limit');
+    await user.clear(ramp);
+    await user.type(ramp, '6');
+    await user.click(screen.getByRole('button', { name: 'Discard draft' }));
+    const dialog = await screen.findByRole('dialog', { name: 'Discard the draft?' });
+    await user.click(within(dialog).getByRole('button', { name: 'Discard the draft' }));
+    expect((screen.getByLabelText('Ramp limit') as HTMLInputElement).value).toBe('4');
+    expect(screen.getByText('No unsaved changes')).toBeTruthy();
+    expect(localStorage.getItem('mixwright:draft:robot-1')).toBeNull();
+  });
+});

@@ -53,7 +53,7 @@ export function MotorTable() {
                   <td className="px-1.5 py-1"><NumberCell path={['motors', i, 'startThreshold']} label={`${motor.name}: start threshold in percent`} scale={100} width="w-16" /></td>
                   <td className="px-1.5 py-1"><NumberCell path={['motors', i, 'stallCurrentA']} label={`${motor.name}: stall current in amperes`} width="w-16" /></td>
                   <td className="px-1.5 py-1"><NumberCell path={['motors', i, 'ratedVoltage']} label={`${motor.name}: rated voltage`} width="w-16" /></td>
-                  <td className={cx('px-1.5 py-1', wheels.length === 0 ? 'font-semibold text-error' : 'text-ink-soft')}>{wheels.length ? wheels.join(', ') : 'no wheel'}</td>
+                  <td className={cx('px-1.5 py-1 whitespace-nowrap', wheels.length === 0 ? 'font-semibold text-error' : 'text-ink-soft')}>{wheels.length ? wheels.join(', ') : 'no wheel'}</td>
                   <td className="py-1 pl-1.5 text-right">
                     {wheels.length === 0 && !disabled && (
                       <Button size="sm" variant="quiet" aria-label={`Remove ${motor.name}`} title={`Remove ${motor.name}`} onClick={() => update((c) => syncMotors(c))}>

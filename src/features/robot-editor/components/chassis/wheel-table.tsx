@@ -58,7 +58,7 @@ export function WheelTable() {
           <thead className="border-b border-rule-strong text-xs text-ink-muted">
             <tr>
               {COLUMNS.map((c) => (
-                <th key={c.title} scope="col" className="px-1.5 py-1 align-bottom font-semibold first:pl-0" title={c.hint}>
+                <th key={c.title} scope="col" className="px-1 py-1 align-bottom font-semibold first:pl-0" title={c.hint}>
                   <span className="tracking-wide uppercase">{c.title}</span>
                   {c.unit && <span className="font-normal normal-case"> ({c.unit})</span>}
                 </th>
@@ -90,28 +90,28 @@ function WheelRow({ wheel, index, custom, motorOptions, canRemove, onRemove }: {
   ];
   return (
     <tr className="h-10">
-      <td className="px-1.5 py-1 first:pl-0">
-        <TextCell path={p('name')} label={`Name of ${who}`} width="w-32" />
+      <td className="px-1 py-1 first:pl-0">
+        <TextCell path={p('name')} label={`Name of ${who}`} width="w-28" />
       </td>
-      <td className="px-1.5 py-1">
-        {custom ? <SelectCell path={p('kind')} label={`Kind of ${who}`} options={KIND_OPTIONS} width="w-32" /> : <span>{WHEEL_KIND_WORDS[wheel.kind]}</span>}
+      <td className="px-1 py-1">
+        {custom ? <SelectCell path={p('kind')} label={`Kind of ${who}`} options={KIND_OPTIONS} width="w-32" /> : <span className="whitespace-nowrap">{WHEEL_KIND_WORDS[wheel.kind]}</span>}
       </td>
       {geometry.map(([key, label]) => (
-        <td key={key} className="px-1.5 py-1 tabular-nums">
-          {custom ? <NumberCell path={p(key)} label={`${wheel.name}: ${label}`} width="w-20" /> : <span className="inline-block w-20 pr-2 text-right">{fixed(wheel[key] as number)}</span>}
+        <td key={key} className="px-1 py-1 tabular-nums">
+          {custom ? <NumberCell path={p(key)} label={`${wheel.name}: ${label}`} width="w-[4.25rem]" /> : <span className="inline-block w-[4.25rem] pr-2 text-right">{fixed(wheel[key] as number)}</span>}
         </td>
       ))}
-      <td className="px-1.5 py-1">
-        <SelectCell path={p('motor')} label={`Motor of ${wheel.name}`} options={motorOptions.some((o) => o.value === wheel.motor) ? motorOptions : [...motorOptions, { value: wheel.motor, label: `${wheel.motor} (missing)` }]} width="w-32" />
+      <td className="px-1 py-1">
+        <SelectCell path={p('motor')} label={`Motor of ${wheel.name}`} options={motorOptions.some((o) => o.value === wheel.motor) ? motorOptions : [...motorOptions, { value: wheel.motor, label: `${wheel.motor} (missing)` }]} width="w-28" />
       </td>
-      <td className="px-1.5 py-1 text-center">
+      <td className="px-1 py-1 text-center">
         <CheckboxCell path={p('reversed')} label={`${wheel.name} reversed`} />
       </td>
-      <td className="px-1.5 py-1 tabular-nums">
-        {custom ? <NumberCell path={p('maxRpm')} label={`${wheel.name}: top speed in rpm`} width="w-20" /> : <span className="inline-block w-20 pr-2 text-right">{fixed(wheel.maxRpm)}</span>}
+      <td className="px-1 py-1 tabular-nums">
+        {custom ? <NumberCell path={p('maxRpm')} label={`${wheel.name}: top speed in rpm`} width="w-[4.25rem]" /> : <span className="inline-block w-[4.25rem] pr-2 text-right">{fixed(wheel.maxRpm)}</span>}
       </td>
       {custom && (
-        <td className="px-1.5 py-1 text-right last:pr-0">
+        <td className="px-1 py-1 text-right last:pr-0">
           {canRemove && (
             <Button size="sm" variant="quiet" onClick={onRemove} aria-label={`Remove ${wheel.name}`} title={`Remove ${wheel.name}`}>
               ✕

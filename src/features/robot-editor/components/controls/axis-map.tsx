@@ -16,7 +16,11 @@ export function AxisMap() {
   const { config, errors } = useDraftFields();
   const options = channelOptions(config);
   return (
-    <Panel title="Stick map" titleId="axis-map-title" description="Deadband is the share of half travel that still reads as centre; expo softens the middle; rate is the output at full stick.">
+    <Panel
+      title="Stick map"
+      titleId="axis-map-title"
+      description="Deadband is the share of half travel that still reads as centre; expo softens the middle; rate is the output at full stick; reverse is for a stick that reads backwards."
+    >
       <div className="grid gap-4 lg:grid-cols-3">
         {STICK_AXES.map((axis) => {
           const settings = config.controls.axes[axis];
@@ -27,9 +31,9 @@ export function AxisMap() {
               <h3 id={`axis-${axis}`} className="font-semibold">
                 {AXIS_WORDS[axis].title} <span className="text-sm font-normal text-ink-muted">({AXIS_WORDS[axis].plus})</span>
               </h3>
-              <div className="mt-2 flex flex-wrap items-start gap-x-3">
-                <DraftSelectField path={[...base, 'channel']} label="Channel" options={options} width="w-44" />
-                <DraftCheckbox path={[...base, 'reverse']} label="Reverse" hint="For a stick that reads backwards" className="pt-6" />
+              <div className="mt-2 flex items-start gap-x-4">
+                <DraftSelectField path={[...base, 'channel']} label="Channel" options={options} width="w-40" />
+                <DraftCheckbox path={[...base, 'reverse']} label="Reverse" className="pt-8" />
               </div>
               <div className="grid grid-cols-[6.5rem_minmax(0,1fr)] gap-x-3">
                 <div>

@@ -24,6 +24,7 @@ import {
 import type { SectionProps } from '../../sections/section-props';
 import { AllProblems } from './all-problems';
 import { ConflictDialog, type RevisionQuery } from './conflict-dialog';
+import { DiscardDialog } from './discard-dialog';
 import { EditorHeader } from './editor-header';
 import { LeaveGuard } from './leave-guard';
 import { SaveDialog } from './save-dialog';
@@ -73,6 +74,7 @@ export function RobotEditor({ detail, section, sections, basePath, save, revisio
   const [saveState, setSaveState] = useState<SaveState>(CLOSED);
   const [conflict, setConflict] = useState<RevisionSummary | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
+  const [confirmDiscard, setConfirmDiscard] = useState(false);
 
   const openSave = useCallback((message = '') => {
     setNotice(null);
@@ -127,7 +129,7 @@ export function RobotEditor({ detail, section, sections, basePath, save, revisio
         canEdit={canEdit}
         saving={saveState.saving}
         onSave={() => openSave(saveState.message)}
-        onDiscard={draft.discard}
+        onDiscard={() => setConfirmDiscard(true)}
       />
       <div className="mb-3 space-y-2 empty:hidden">
         <FormNotice message={notice ?? undefined} />
@@ -183,6 +185,16 @@ export function RobotEditor({ detail, section, sections, basePath, save, revisio
           draft.rebase(theirs, next);
           setConflict(null);
           openSave(saveState.message);
+        }}
+      />
+      <DiscardDialog
+        open={confirmDiscard}
+        baseRevision={draft.baseRevision}
+        onClose={() => setConfirmDiscard(false)}
+        onDiscard={() => {
+          draft.discard();
+          setConfirmDiscard(false);
+          setNotice(`Draft discarded: showing r${head.number}.`);
         }}
       />
       <LeaveGuard dirty={draft.dirty && canEdit} basePath={basePath} onDiscard={draft.discard} />
