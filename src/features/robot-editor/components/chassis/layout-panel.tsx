@@ -97,7 +97,7 @@ function ParamField({ layout, field }: { layout: DriveLayoutId; field: PresetPar
         )}
       </div>
       <p id={`${id}-note`} className={cx('min-h-5 text-xs leading-5', error ? 'font-semibold text-error' : 'text-ink-muted')}>
-        {error ? `✕ ${error}` : field.kind === 'number' && field.min !== undefined && field.max !== undefined ? `${field.min} to ${field.max}` : ''}
+        {error ? `✕ ${error}` : field.kind === 'number' && field.min && field.max !== undefined ? `${field.min} to ${field.max}` : ''}
       </p>
     </div>
   );
