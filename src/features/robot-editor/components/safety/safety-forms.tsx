@@ -54,7 +54,7 @@ export function PowerForm() {
     <Panel title="Battery and logic supply" titleId="power-title">
       <div className="grid grid-cols-[repeat(auto-fill,minmax(12rem,1fr))] gap-x-5">
         <DraftSelectField path={['power', 'chemistry']} label="Chemistry" options={CHEMISTRY} width="w-full" />
-        <DraftNumberField path={['power', 'cells']} label="Cells in series" hint="2S = 2" width="w-16" />
+        <DraftNumberField path={['power', 'cells']} label="Cells in series" hint="A 2S pack has 2" width="w-16" />
         <DraftNumberField path={['power', 'capacityMah']} label="Capacity" unit="mAh" />
         <DraftNumberField path={['power', 'dischargeC']} label="Discharge rating" unit="C" width="w-16" />
         <DraftSelectField path={['power', 'logicSupply']} label="The board is fed from" options={LOGIC_SUPPLY} width="w-full" className="col-span-2" />
