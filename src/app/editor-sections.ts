@@ -9,6 +9,7 @@ import type { SectionRegistry } from '@/features/robot-editor/lib/editor-section
 export const EDITOR_SECTIONS: SectionRegistry = {
   chassis: lazy(async () => ({ default: (await import('@/features/robot-editor/sections/chassis-section')).ChassisSection })),
   controls: lazy(async () => ({ default: (await import('@/features/robot-editor/sections/controls-section')).ControlsSection })),
+  wiring: lazy(async () => ({ default: (await import('@/features/robot-editor/sections/wiring-section')).WiringSection })),
   safety: lazy(async () => ({ default: (await import('@/features/robot-editor/sections/safety-section')).SafetySection })),
   commissioning: lazy(async () => ({ default: (await import('@/features/robot-editor/sections/commissioning-section')).CommissioningSection })),
 };
