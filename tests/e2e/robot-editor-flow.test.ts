@@ -78,6 +78,10 @@ describe('building a robot in the editor', () => {
     await page.getByText('bench motor 1/4 "Front left" forward').waitFor();
     await screenshot(page, 'editor-commissioning');
 
+    await page.getByRole('navigation', { name: 'Robot sections' }).getByRole('link', { name: /Wiring/ }).click();
+    await page.getByRole('button', { name: 'Assign free pins' }).waitFor();
+    await screenshot(page, 'editor-wiring');
+
     await page.getByRole('navigation', { name: 'Robot sections' }).getByRole('link', { name: /All problems/ }).click();
     await page.getByRole('heading', { name: 'All problems' }).waitFor();
     await screenshot(page, 'editor-problems');
