@@ -17,10 +17,28 @@ export function draftKey(robotId: string): string {
   return `${PREFIX}${robotId}`;
 }
 
+/**
+ * A draft may hold invalid values (it is what was typed), but its shape must be a configuration's,
+ * or the editor could not even show it: a draft from another format is dropped.
+ */
+function hasConfigShape(config: unknown): boolean {
+  const c = config as { chassis?: { wheels?: unknown }; motors?: unknown; controls?: { channels?: unknown; axes?: unknown }; wiring?: { drivers?: unknown }; safety?: unknown; power?: unknown; firmware?: unknown } | null;
+  return (
+    typeof c === 'object' &&
+    c !== null &&
+    Array.isArray(c.chassis?.wheels) &&
+    Array.isArray(c.motors) &&
+    Array.isArray(c.controls?.channels) &&
+    typeof c.controls?.axes === 'object' &&
+    Array.isArray(c.wiring?.drivers) &&
+    [c.safety, c.power, c.firmware].every((part) => typeof part === 'object' && part !== null)
+  );
+}
+
 function isStoredDraft(value: unknown, robotId: string): value is StoredDraft {
   if (typeof value !== 'object' || value === null) return false;
   const v = value as Partial<StoredDraft>;
-  return v.version === 1 && v.robotId === robotId && Number.isInteger(v.baseRevision) && typeof v.config === 'object' && v.config !== null;
+  return v.version === 1 && v.robotId === robotId && Number.isInteger(v.baseRevision) && hasConfigShape(v.config);
 }
 
 /** The stored draft of a robot, or null when there is none or it cannot be read. */

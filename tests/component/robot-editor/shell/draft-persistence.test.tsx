@@ -84,7 +84,12 @@ describe('the robot draft', () => {
   it('ignores a stored draft that belongs to another robot or cannot be read', () => {
     storage.setItem(draftKey(ROBOT), '{not json');
     expect(readDraft(storage, ROBOT)).toBeNull();
-    storage.setItem(draftKey(ROBOT), JSON.stringify({ version: 1, robotId: 'other', baseRevision: 1, config: {} }));
+    storage.setItem(draftKey(ROBOT), JSON.stringify({ version: 1, robotId: 'other', baseRevision: 1, config: robotConfig() }));
+    expect(readDraft(storage, ROBOT)).toBeNull();
+  });
+
+  it('drops a stored draft that is not shaped like a configuration', () => {
+    storage.setItem(draftKey(ROBOT), JSON.stringify({ version: 1, robotId: ROBOT, baseRevision: 1, config: { chassis: {} } }));
     expect(readDraft(storage, ROBOT)).toBeNull();
   });
 });
