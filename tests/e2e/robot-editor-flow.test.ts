@@ -77,6 +77,16 @@ describe('building a robot in the editor', () => {
     await page.getByRole('navigation', { name: 'Robot sections' }).getByRole('link', { name: /Commissioning/ }).click();
     await page.getByText('bench motor 1/4 "Front left" forward').waitFor();
     await screenshot(page, 'editor-commissioning');
+    // The wheels-up check: the second motor turned the wrong way; the rest were right.
+    for (const [i, way] of ['Yes, as shown', 'No, the other way', 'Yes, as shown', 'Yes, as shown'].entries()) {
+      if (i > 0) await page.getByRole('button', { name: 'Next motor' }).click();
+      await page.getByRole('radio', { name: /The highlighted wheel/ }).check();
+      await page.getByRole('radio', { name: way }).check();
+    }
+    await page.getByText('Flipped Front right').waitFor();
+    await screenshot(page, 'editor-commissioning-fix');
+    await page.getByRole('button', { name: 'Apply to the draft only' }).click();
+    await page.getByText('Put into the draft: flipped Front right.').waitFor();
 
     await page.getByRole('navigation', { name: 'Robot sections' }).getByRole('link', { name: /Wiring/ }).click();
     await page.getByRole('button', { name: 'Assign free pins' }).waitFor();
@@ -96,6 +106,7 @@ describe('building a robot in the editor', () => {
     await page.getByRole('button', { name: 'Save…' }).click();
     const save = page.getByRole('dialog', { name: 'Save a new revision' });
     await save.getByText('Chassis › layout parameters › wheel radius').waitFor();
+    await save.getByText('Chassis › wheel “Front right” › reversed').waitFor();
     await save.getByLabel('What changed, and why?').fill('Bigger wheels, softer forward stick, horn channel');
     await screenshot(page, 'editor-save-dialog');
     await save.getByRole('button', { name: 'Save revision' }).click();
