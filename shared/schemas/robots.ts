@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import type { BoardId, ChassisLayout } from './ids';
 import { RobotConfigSchema, RobotNameSchema, type RobotConfig } from './robot-config';
 
 export const RevisionMessageSchema = z
@@ -44,6 +45,15 @@ export interface RobotSummary {
   headRevision: number;
   updatedAt: string;
   lastFlash: { revisionNumber: number; flashedAt: string } | null;
+}
+
+/** A robot as the team dashboard lists it: the summary plus facts of its head revision. */
+export interface RobotListItem extends RobotSummary {
+  /** Null when the head revision could not be read (a file from an unknown format). */
+  layout: ChassisLayout | null;
+  board: BoardId | null;
+  /** Open problems of the head revision (the same list the editor shows). */
+  problems: { errors: number; warnings: number } | null;
 }
 
 export interface RobotDetail {

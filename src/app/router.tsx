@@ -55,6 +55,15 @@ export function createAppRouter(queryClient: QueryClient) {
                 { path: 'activity', lazy: async () => ({ Component: (await import('./routes/team-activity')).TeamActivityRoute }) },
               ],
             },
+            {
+              path: 'teams/:teamId/robots/:robotId',
+              loader: ({ params }) => redirect(`/teams/${params.teamId}/robots/${params.robotId}/chassis`),
+            },
+            {
+              path: 'teams/:teamId/robots/:robotId/:section',
+              handle: { wide: true },
+              lazy: async () => ({ Component: (await import('./routes/robot-editor')).RobotEditorRoute }),
+            },
             { path: '*', lazy: async () => ({ Component: (await import('./routes/not-found')).NotFoundRoute }) },
           ],
         },

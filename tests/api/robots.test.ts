@@ -1,6 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { listTeamEvents } from '@server/features/audit/audit.repository';
-import { robotConfigInput } from '../factories/robot-config';
+import { assignPins } from '@shared/pins/assign-pins';
+import { robotProblems } from '@shared/problems/robot-problems';
+import { buildStarterConfig } from '@shared/starter';
+import { robotConfig, robotConfigInput } from '../factories/robot-config';
 import { makeRobot, makeTeamScenario } from './support/factories';
 import { clientAs, createTestContext, type TestContext } from './support/test-app';
 
@@ -116,5 +119,45 @@ describe('robots', () => {
     const response = await (await clientAs(ctx, other.owner.id)).get(`/api/robots/${s.robot.id}`);
     expect(response.status).toBe(404);
     expect(response.body.error.message).toBe('Robot not found');
+  });
+});
+
+describe('the team robot list', () => {
+  it('gives each robot its head revision’s layout, board and open problems', async () => {
+    const s = await makeTeamScenario(ctx);
+    const response = await (await clientAs(ctx, s.viewer.id)).get(`/api/teams/${s.team.id}/robots`);
+    const problems = robotProblems(robotConfig());
+    const errors = problems.filter((p) => p.severity === 'error').length;
+    expect(response.body.robots[0]).toMatchObject({
+      id: s.robot.id,
+      layout: 'differential',
+      board: 'uno',
+      problems: { errors, warnings: problems.length - errors },
+    });
+    expect(errors).toBeGreaterThan(0);
+  });
+
+  it('follows the head revision when a new one is saved', async () => {
+    const s = await makeTeamScenario(ctx);
+    const editor = await clientAs(ctx, s.editor.id);
+    const starter = buildStarterConfig({ layout: 'trio-omni', board: 'nano', input: 'ppm', driver: 'pwm-in1-in2-stby' });
+    const placed = assignPins(starter);
+    if (!placed.ok) throw new Error(placed.reason);
+    await editor.post(`/api/robots/${s.robot.id}/revisions`).send({ baseRevision: 1, message: 'Trio on a Nano', config: placed.config });
+    const response = await editor.get(`/api/teams/${s.team.id}/robots`);
+    const expected = robotProblems(placed.config);
+    expect(response.body.robots[0]).toMatchObject({
+      headRevision: 2,
+      layout: 'trio-omni',
+      board: 'nano',
+      problems: { errors: 0, warnings: expected.length },
+    });
+  });
+
+  it('lists a robot whose head cannot be read without layout, board or counts', async () => {
+    const s = await makeTeamScenario(ctx);
+    ctx.database.sqlite.prepare('update revisions set config = ? where robot_id = ?').run('{"schemaVersion":99}', s.robot.id);
+    const response = await (await clientAs(ctx, s.owner.id)).get(`/api/teams/${s.team.id}/robots`);
+    expect(response.body.robots[0]).toMatchObject({ id: s.robot.id, layout: null, board: null, problems: null });
   });
 });

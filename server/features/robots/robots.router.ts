@@ -5,7 +5,8 @@ import { currentUser, requireUser } from '@server/middleware/session';
 import { grantedAccess, requireRobotRole, requireTeamRole } from '@server/middleware/team-access';
 import { validateBody } from '@server/middleware/validate';
 import { CreateRobotInputSchema, RenameRobotInputSchema, SaveRevisionInputSchema } from '@shared/schemas/robots';
-import { listRevisions, listTeamRobots, robotSummary } from './robots.repository';
+import { listRobotsForTeam } from './robot-list.service';
+import { listRevisions, robotSummary } from './robots.repository';
 import { createRobot, getRevision, renameRobotFor, robotDetail, saveRevision } from './robots.service';
 
 const RevisionParamsSchema = z.object({
@@ -16,7 +17,7 @@ export function robotsRoutes(ctx: AppContext): Router {
   const router = Router();
 
   router.get('/teams/:teamId/robots', requireUser, requireTeamRole(ctx, 'viewer'), (req, res) => {
-    res.json({ robots: listTeamRobots(ctx.db, grantedAccess(req).teamId) });
+    res.json({ robots: listRobotsForTeam(ctx, grantedAccess(req).teamId) });
   });
 
   router.post(

@@ -1,4 +1,4 @@
-import { Link, NavLink, Outlet, useNavigate } from 'react-router';
+import { Link, NavLink, Outlet, useMatches, useNavigate } from 'react-router';
 import { Button } from '@/components/ui/button';
 import { cx } from '@/components/ui/cx';
 import { Wordmark } from '@/components/ui/wordmark';
@@ -10,6 +10,9 @@ export function AppLayout() {
   const me = useMe();
   const signOut = useSignOut();
   const navigate = useNavigate();
+  // Working screens (the robot editor) use the whole width; reading pages keep a measure.
+  const wide = useMatches().some((m) => (m.handle as { wide?: boolean } | undefined)?.wide);
+  const width = wide ? 'max-w-[100rem]' : 'max-w-6xl';
 
   return (
     <div className="flex min-h-screen flex-col">
@@ -17,7 +20,7 @@ export function AppLayout() {
         Skip to content
       </a>
       <header className="border-b border-rule bg-paper-raised">
-        <div className="mx-auto flex h-14 max-w-6xl items-center gap-6 px-4 sm:px-6">
+        <div className={cx('mx-auto flex h-14 items-center gap-6 px-4 sm:px-6', width)}>
           <Link to="/teams" className="rounded-md" aria-label="Mixwright, your teams">
             <Wordmark className="[&_span]:text-lg" />
           </Link>
@@ -49,7 +52,7 @@ export function AppLayout() {
           </div>
         </div>
       </header>
-      <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-8 sm:px-6">
+      <main id="main" className={cx('mx-auto w-full flex-1 px-4 sm:px-6', width, wide ? 'py-5' : 'py-8')}>
         <Outlet />
       </main>
     </div>

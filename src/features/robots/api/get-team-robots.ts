@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
-import type { RobotSummary } from '@shared/schemas/robots';
+import type { RobotListItem } from '@shared/schemas/robots';
 import { robotKeys } from './robot-keys';
 
-export async function getTeamRobots(teamId: string): Promise<RobotSummary[]> {
-  return (await apiRequest<{ robots: RobotSummary[] }>(`/teams/${encodeURIComponent(teamId)}/robots`)).robots;
+export async function getTeamRobots(teamId: string): Promise<RobotListItem[]> {
+  return (await apiRequest<{ robots: RobotListItem[] }>(`/teams/${encodeURIComponent(teamId)}/robots`)).robots;
 }
 
 export const teamRobotsQueryOptions = (teamId: string) =>

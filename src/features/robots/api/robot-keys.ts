@@ -2,4 +2,6 @@ export const robotKeys = {
   all: ['robots'] as const,
   team: (teamId: string) => [...robotKeys.all, 'team', teamId] as const,
   detail: (robotId: string) => [...robotKeys.all, 'detail', robotId] as const,
+  revisions: (robotId: string) => [...robotKeys.all, 'detail', robotId, 'revisions'] as const,
+  revision: (robotId: string, number: number) => [...robotKeys.all, 'detail', robotId, 'revisions', number] as const,
 };

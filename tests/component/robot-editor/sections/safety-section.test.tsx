@@ -1,0 +1,45 @@
+import { screen, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { describe, expect, it } from 'vitest';
+import { SafetySection } from '@/features/robot-editor/sections/safety-section';
+import { SAFETY_CAUTIONS } from '@shared/safety/cautions';
+import { buildStarterConfig } from '@shared/starter';
+import { renderSection } from './section-harness';
+
+const starter = () => buildStarterConfig({ layout: 'differential', driver: 'pwm-in1-in2-stby' });
+
+describe('the safety section', () => {
+  it('always shows the cautions', () => {
+    renderSection(SafetySection, starter());
+    const cautions = screen.getByRole('complementary', { name: 'Before the wheels turn' });
+    for (const caution of SAFETY_CAUTIONS) expect(within(cautions).getByText(caution)).toBeTruthy();
+  });
+
+  it('says how long the ramp takes from standstill to full', async () => {
+    const user = userEvent.setup();
+    renderSection(SafetySection, starter());
+    const ramp = screen.getByLabelText('Ramp limit');
+    await user.clear(ramp);
+    await user.type(ramp, '2');
+    expect(screen.getByText('Standstill to full in 0.50 s')).toBeTruthy();
+  });
+
+  it('names the fuse and the rule of thumb it comes from', () => {
+    renderSection(SafetySection, starter());
+    expect(screen.getByText(/the 125 % continuous-load rule/)).toBeTruthy();
+    // Two motors stalling at 2 A run at about 2 A together; 1.25 × 2 A = 2.5 A, so the next blade fuse is 3 A.
+    expect(screen.getByText('3 A blade fuse')).toBeTruthy();
+  });
+
+  it('warns when a motor stalls above the driver’s peak rating', async () => {
+    const user = userEvent.setup();
+    renderSection(SafetySection, {
+      ...starter(),
+      motors: starter().motors.map((m) => ({ ...m, stallCurrentA: 5 })),
+    });
+    expect(screen.getByText(/stalls at 5 A, above Driver 1’s 3\.2 A peak/)).toBeTruthy();
+    await user.clear(screen.getByLabelText('Cells in series'));
+    await user.type(screen.getByLabelText('Cells in series'), '3');
+    expect(screen.getByText(/Pack voltage 9 V empty, 11.1 V nominal, 12.6 V full/)).toBeTruthy();
+  });
+});
