@@ -40,9 +40,11 @@ function BundleFiles({ bundle, updating }: { bundle: FirmwareFiles; updating: bo
  * when there are unsaved changes), the download and compile check of the saved revision, the
  * boot line, the sketch and serial settings, and what stops generation, linked to its fields.
  */
-export function FirmwareSection({ robot, head, config, onChange, canEdit }: SectionProps) {
+export function FirmwareSection({ robot, head, config, validConfig, fieldErrors, onChange, canEdit }: SectionProps) {
   const unsaved = useMemo(() => JSON.stringify(config) !== JSON.stringify(head.config), [config, head.config]);
-  const settledDraft = useDebouncedValue(config, 400);
+  // The newest draft the schema accepts; while a field is being corrected the preview stays on it.
+  const settledDraft = useDebouncedValue(validConfig ?? config, 400);
+  const invalidFields = Object.entries(fieldErrors ?? {}).map(([key, message]) => ({ path: key.split('.'), message }));
   const headFiles = useRevisionFiles(robot.id, head.number);
   const draftFiles = useDraftFiles(robot.id, settledDraft, unsaved);
   const shown = unsaved ? draftFiles : headFiles;
@@ -67,6 +69,9 @@ export function FirmwareSection({ robot, head, config, onChange, canEdit }: Sect
         blockedReason={blockedReason}
         bootLine={shown.data?.bootLine ?? null}
       />
+      {unsaved && invalidFields.length > 0 && (
+        <BlockerList title="Correct these fields; until then the files follow your last valid change" blockers={invalidFields} />
+      )}
       {shown.isPending && <LoadingState label="Rendering the firmware…" />}
       {shown.isError && shownBlockers && (
         <BlockerList

@@ -204,3 +204,18 @@ describe("the Firmware section's settings", () => {
     expect(screen.getByRole('link', { name: 'Download revision 3 (.zip)' })).toBeTruthy();
   });
 });
+
+describe('the Firmware section while a field is being corrected', () => {
+  it("previews the last valid draft and lists the fields to correct, linked", async () => {
+    const props = sectionProps();
+    const valid = changed(props.config, (c) => (c.safety.failsafeTimeoutMs = 150));
+    const typing = changed(valid, (c) => (c.chassis.wheels[0].radiusMm = Number.NaN));
+    const { calls } = routeFetch({ [FILES]: { body: firmwareFiles({ revision: 3 }) }, [PREVIEW]: { body: firmwareFiles({ revision: 4, draft: true }) } });
+    renderInEditor(<FirmwareSection {...props} config={typing} validConfig={valid} fieldErrors={{ 'chassis.wheels.0.radiusMm': 'Enter a number' }} />);
+    const list = await screen.findByRole('alert');
+    expect(within(list).getByText('Enter a number')).toBeTruthy();
+    expect(within(list).getByRole('link').getAttribute('href')).toBe('/teams/t1/robots/r1/chassis?field=chassis.wheels.0.radiusMm');
+    await waitFor(() => expect(calls.some((c) => c.method === 'POST')).toBe(true), { timeout: 2000 });
+    expect((calls.find((c) => c.method === 'POST')?.body as { config: unknown }).config).toEqual(valid);
+  });
+});
