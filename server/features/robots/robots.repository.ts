@@ -2,6 +2,7 @@ import { and, asc, desc, eq, isNull, sql } from 'drizzle-orm';
 import type { Db } from '@server/db/client';
 import { flashes, revisions, robots, teams, users } from '@server/db/schema';
 import { newId } from '@server/lib/ids';
+import { parseAnyVersion } from '@shared/schemas/migrate-config';
 import type { RobotConfig } from '@shared/schemas/robot-config';
 import type { RevisionSummary, RobotSummary } from '@shared/schemas/robots';
 
@@ -112,7 +113,7 @@ export function findRevision(db: Db, robotId: string, number: number) {
     .where(and(eq(revisions.robotId, robotId), eq(revisions.number, number)))
     .get();
   return row
-    ? { ...row, createdAt: row.createdAt.toISOString(), config: JSON.parse(row.config) as RobotConfig }
+    ? { ...row, createdAt: row.createdAt.toISOString(), config: parseAnyVersion(JSON.parse(row.config)) }
     : undefined;
 }
 
