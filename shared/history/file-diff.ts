@@ -103,18 +103,51 @@ export function fileDiff(path: string, oldText: string | null, newText: string |
   return { path, status, added: count('right'), removed: count('left'), rows: withContext(rows, context) };
 }
 
-/** The files that differ between two sets (a firmware bundle before and after), in path order. */
-export function filesDiff(before: TextFile[], after: TextFile[], context = 3): { changed: FileDiff[]; unchanged: string[] } {
+/** Which revision a generated file was made for: every file carries it in its first lines. */
+export interface RevisionStamp {
+  revision: number;
+  hash: string;
+}
+
+/**
+ * The old file's text as it would read had it been generated for the new revision: its
+ * configuration hash and revision number swapped for the new ones. Files that then match
+ * differ only in that stamp.
+ */
+export function restamp(text: string, from: RevisionStamp, to: RevisionStamp): string {
+  return text
+    .split(from.hash)
+    .join(to.hash)
+    .replace(/(revision[\s=":]*)(\d+)/gi, (whole, lead: string, n: string) => (Number(n) === from.revision ? `${lead}${to.revision}` : whole));
+}
+
+export interface FilesDiff {
+  changed: FileDiff[];
+  /** Files whose only difference is the revision stamp. */
+  stampOnly: string[];
+  unchanged: string[];
+}
+
+/**
+ * The files that differ between two sets (a firmware bundle before and after), in path order.
+ * With `stamps`, files that differ only in the revision stamp are listed apart.
+ */
+export function filesDiff(
+  before: TextFile[],
+  after: TextFile[],
+  options: { context?: number; stamps?: { from: RevisionStamp; to: RevisionStamp } } = {},
+): FilesDiff {
   const old = new Map(before.map((f) => [f.path, f.content]));
   const now = new Map(after.map((f) => [f.path, f.content]));
   const paths = [...new Set([...old.keys(), ...now.keys()])].sort();
-  const changed: FileDiff[] = [];
-  const unchanged: string[] = [];
+  const result: FilesDiff = { changed: [], stampOnly: [], unchanged: [] };
+  const { stamps } = options;
   for (const path of paths) {
     const a = old.get(path) ?? null;
     const b = now.get(path) ?? null;
-    if (a === b) unchanged.push(path);
-    else changed.push(fileDiff(path, a, b, context));
+    if (a === b) result.unchanged.push(path);
+    else if (a !== null && b !== null && stamps && restamp(a, stamps.from, stamps.to) === b) result.stampOnly.push(path);
+    else result.changed.push(fileDiff(path, a, b, options.context));
   }
-  return { changed, unchanged };
+  return result;
 }

@@ -20,6 +20,8 @@ const updatedAt = sql<number>`(select max(v.created_at) from revisions v where v
 const lastFlash = sql<string | null>`(select json_object('revisionNumber', f.revision_number, 'flashedAt', f.flashed_at)
   from flashes f where f.robot_id = robots.id order by f.flashed_at desc, f.id desc limit 1)`;
 
+const photoAt = sql<number | null>`(select p.created_at from robot_photos p where p.robot_id = robots.id)`;
+
 const summaryColumns = {
   id: robots.id,
   teamId: robots.teamId,
@@ -28,17 +30,20 @@ const summaryColumns = {
   headRevision: robots.headRevision,
   updatedAt,
   lastFlash,
+  photoAt,
 };
 
-type SummaryRow = { createdAt: Date; updatedAt: number | null; lastFlash: string | null } & Omit<
+type SummaryRow = { createdAt: Date; updatedAt: number | null; lastFlash: string | null; photoAt: number | null } & Omit<
   RobotSummary,
-  'createdAt' | 'updatedAt' | 'lastFlash'
+  'createdAt' | 'updatedAt' | 'lastFlash' | 'photoUrl'
 >;
 
-function toSummary(row: SummaryRow): RobotSummary {
+function toSummary({ photoAt, ...row }: SummaryRow): RobotSummary {
   const flash = row.lastFlash ? (JSON.parse(row.lastFlash) as { revisionNumber: number; flashedAt: number }) : null;
   return {
     ...row,
+    // The upload time in the address makes browsers fetch a replaced photo afresh.
+    photoUrl: photoAt === null ? null : `/api/robots/${row.id}/photo?v=${photoAt}`,
     createdAt: row.createdAt.toISOString(),
     updatedAt: new Date(row.updatedAt ?? row.createdAt.getTime()).toISOString(),
     lastFlash: flash ? { revisionNumber: flash.revisionNumber, flashedAt: new Date(flash.flashedAt).toISOString() } : null,

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { fileDiff, filesDiff } from '@shared/history/file-diff';
+import { fileDiff, filesDiff, restamp } from '@shared/history/file-diff';
 
 const numbered = (n: number, change: Record<number, string> = {}) =>
   `${Array.from({ length: n }, (_, i) => change[i + 1] ?? `line ${i + 1}`).join('\n')}\n`;
@@ -60,5 +60,22 @@ describe('the difference between two sets of files', () => {
       ['robot/mw_sbus.h', 'removed'],
     ]);
     expect(unchanged).toEqual(['robot/robot.ino']);
+  });
+
+  it('sets apart files that differ only in the revision stamp', () => {
+    const stamp = (revision: number, hash: string) =>
+      `// Generated for revision ${revision} (configuration hash ${hash}).\n#define MW_REVISION ${revision}UL\n#define MW_CONFIG_HASH "${hash}"\nint pins = 13;\n`;
+    const before = [{ path: 'a.h', content: stamp(3, '0badc0de') }, { path: 'b.h', content: `${stamp(3, '0badc0de')}x\n` }];
+    const after = [{ path: 'a.h', content: stamp(4, 'cafef00d') }, { path: 'b.h', content: `${stamp(4, 'cafef00d')}y\n` }];
+    const stamps = { from: { revision: 3, hash: '0badc0de' }, to: { revision: 4, hash: 'cafef00d' } };
+    const result = filesDiff(before, after, { stamps });
+    expect(result.stampOnly).toEqual(['a.h']);
+    expect(result.changed.map((f) => f.path)).toEqual(['b.h']);
+  });
+
+  it('restamps only the revision number it was asked to', () => {
+    expect(restamp('revision=3 pins=3 "revision": 3 Revision 33', { revision: 3, hash: 'aa' }, { revision: 7, hash: 'bb' })).toBe(
+      'revision=7 pins=3 "revision": 7 Revision 33',
+    );
   });
 });
