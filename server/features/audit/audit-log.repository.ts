@@ -28,7 +28,9 @@ export function listAuditLog(db: Db, teamId: string, options: { kind: AuditKind;
   const memberSignIn = and(
     sql`${auditEvents.teamId} is null`,
     eq(auditEvents.action, SIGN_IN),
-    sql`exists (select 1 from memberships m where m.team_id = ${teamId} and m.user_id = ${auditEvents.actorId} and m.created_at <= ${auditEvents.createdAt})`,
+    // Plain table names: drizzle may leave columns unqualified, and inside this subquery an
+    // unqualified created_at would be the membership's own.
+    sql`exists (select 1 from memberships m where m.team_id = ${teamId} and m.user_id = audit_events.actor_id and m.created_at <= audit_events.created_at)`,
   );
   const conditions = [or(eq(auditEvents.teamId, teamId), memberSignIn), kindFilter(options.kind)];
   if (options.before !== undefined) conditions.push(lt(auditEvents.id, options.before));
