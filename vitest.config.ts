@@ -1,6 +1,6 @@
 import { defineConfig } from 'vitest/config';
 import react from '@vitejs/plugin-react';
-import { aliases } from './vite.config';
+import { aliases } from './vite.config.ts';
 
 // One project per kind of test, so each gets the environment and time it needs.
 export default defineConfig({

@@ -69,7 +69,7 @@ export function driveStep(config: DriveStepInput, sticks: Sticks, options: Drive
   const limit = safety.outputLimitPercent / 100;
   const limited = ramped.map((c) => c * limit);
   const thresholds = mixing.motors.map((name) => config.motors.find((m) => m.name === name)?.startThreshold ?? 0);
-  const outputs = limited.map((c, i) => applyStartThreshold(c, thresholds[i]));
+  const outputs = ramped.map((c, i) => applyStartThreshold(c, thresholds[i], limit));
   const can: Record<StickAxis, boolean> = { forward: mixing.canDrive, strafe: mixing.canStrafe, yaw: mixing.canTurn };
   const ignoredAxes = STICK_AXES.filter((axis) => !mapped(axis) || !can[axis]);
   return { shapedSticks, targets, ramped, limited, outputs, motion: forwardKinematics(mixing, limited), ignoredAxes };

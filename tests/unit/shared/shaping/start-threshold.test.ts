@@ -17,6 +17,17 @@ describe('the start threshold', () => {
     expect(applyStartThreshold(-0.01, 0.25)).toBeCloseTo(-(0.25 + 0.75 * 0.01), 12);
   });
 
+  it('gives exactly the output limit at full command and keeps small moves past the threshold', () => {
+    expect(applyStartThreshold(1, 0.2, 0.7)).toBeCloseTo(0.7, 12);
+    expect(applyStartThreshold(-1, 0.2, 0.7)).toBeCloseTo(-0.7, 12);
+    expect(applyStartThreshold(0.01, 0.2, 0.7)).toBeCloseTo(0.2 + 0.5 * 0.01, 12);
+  });
+
+  it('runs a motor whose threshold is above the limit at the limit or not at all', () => {
+    expect(applyStartThreshold(0.3, 0.5, 0.4)).toBeCloseTo(0.4, 12);
+    expect(applyStartThreshold(0, 0.5, 0.4)).toBe(0);
+  });
+
   it('is monotonic, within −1..1, and never between 0 and the threshold', () => {
     fc.assert(
       fc.property(command, command, threshold, (a, b, t) => {
