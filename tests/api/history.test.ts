@@ -6,6 +6,7 @@ import { saveRevision } from '@server/features/robots/robots.service';
 import type { TextFile } from '@shared/history/file-diff';
 import type { RobotConfig } from '@shared/schemas/robot-config';
 import { robotConfig, robotConfigInput } from '../factories/robot-config';
+import { sampleConfigInput } from '../firmware/helpers/sample-config';
 import { makeTeamScenario, type TeamScenario } from './support/factories';
 import { rowCounts } from './support/row-counts';
 import { clientAs, createTestContext, type TestContext } from './support/test-app';
@@ -116,10 +117,10 @@ describe('the diff between two revisions', () => {
     expect(diff.body.settings[0].text).toBe('Left wheel: reversed on → off');
   });
 
-  it('says why generated files are not compared when there is no generator', async () => {
-    const s = await makeTeamScenario(ctx);
-    const diff = await (await clientAs(ctx, s.viewer.id)).get(`/api/robots/${s.robot.id}/diff?from=1&to=1`);
-    expect(diff.body.files).toEqual({ available: false, reason: expect.stringMatching(/firmware generator/) });
+  it('says why generated files are not compared when there is no generator', () => {
+    return makeTeamScenario(ctx).then((s) => {
+      expect(revisionDiff(ctx.appContext, s.robot.id, 1, 1, null).files).toEqual({ available: false, reason: expect.stringMatching(/firmware generator/) });
+    });
   });
 
   it('compares generated files side by side when a generator is given', async () => {
@@ -138,6 +139,29 @@ describe('the diff between two revisions', () => {
       ['// revision 1', '// revision 2'],
       ['#define MW_FAILSAFE_MS 250', '#define MW_FAILSAFE_MS 200'],
     ]);
+  });
+
+  it('compares the firmware the generator makes for each revision', async () => {
+    const s = await makeTeamScenario(ctx);
+    const owner = await clientAs(ctx, s.owner.id);
+    const created = await owner.post(`/api/teams/${s.team.id}/robots`).send({ name: 'Garden Hauler', config: sampleConfigInput() });
+    const robotId = created.body.robot.id;
+    const quicker = { ...sampleConfigInput(), safety: { failsafeTimeoutMs: 150 } };
+    await owner.post(`/api/robots/${robotId}/revisions`).send({ baseRevision: 1, message: 'Quicker failsafe', config: quicker });
+    const diff = await owner.get(`/api/robots/${robotId}/diff?from=1&to=2`);
+    expect(diff.body.files.available).toBe(true);
+    const paths = diff.body.files.changed.map((f: { path: string }) => f.path);
+    expect(paths).toEqual(expect.arrayContaining(['config.json', 'garden_hauler/mw_config.h']));
+    expect(diff.body.files.stampOnly).toContain('garden_hauler/mw_mixer.h');
+    const header = diff.body.files.changed.find((f: { path: string }) => f.path === 'garden_hauler/mw_config.h');
+    const changed = header.rows.filter((r: { kind: string }) => r.kind === 'changed').map((r: { right: { text: string } }) => r.right.text);
+    expect(changed.some((line: string) => /150/.test(line))).toBe(true);
+  });
+
+  it('says which field keeps a revision from being generated', async () => {
+    const s = await makeTeamScenario(ctx);
+    const diff = await (await clientAs(ctx, s.viewer.id)).get(`/api/robots/${s.robot.id}/diff?from=1&to=1`);
+    expect(diff.body.files).toEqual({ available: false, reason: expect.stringMatching(/^Revision 1 cannot be generated: [a-zA-Z.0-9]+: /) });
   });
 
   it('names a revision that does not exist', async () => {

@@ -40,13 +40,22 @@ function storedOrNotFound(ctx: AppContext, robotId: string, number: number): Sto
   return revision;
 }
 
+/** The first reason the generator gave (it lists every field it could not turn into firmware). */
+function generationProblem(error: unknown): string {
+  const issues = (error as { issues?: { path: (string | number)[]; message: string }[] }).issues;
+  if (!Array.isArray(issues) || issues.length === 0) return (error as Error).message;
+  const [first] = issues;
+  const more = issues.length > 1 ? ` (and ${issues.length - 1} more)` : '';
+  return `${first.path.join('.')}: ${first.message}${more}.`;
+}
+
 function generatedFiles(render: BundleRenderer | null, from: StoredRevision, to: StoredRevision): RevisionDiff['files'] {
-  if (!render) return { available: false, reason: 'The firmware generator is not part of this server yet, so only settings are compared.' };
+  if (!render) return { available: false, reason: 'No firmware generator is available here, so only settings are compared.' };
   const rendered = [from, to].map((revision) => {
     try {
       return render(revisionFacts(revision).config, { revision: revision.number });
     } catch (error) {
-      return `Revision ${revision.number} cannot be generated: ${(error as Error).message}`;
+      return `Revision ${revision.number} cannot be generated: ${generationProblem(error)}`;
     }
   });
   const [before, after] = rendered;
