@@ -17,7 +17,12 @@ export function RobotTable({ robots, teamName }: { robots: RobotSummary[]; teamN
       <TBody>
         {robots.map((robot) => (
           <Tr key={robot.id}>
-            <Td className="font-semibold">{robot.name}</Td>
+            <Td className="font-semibold">
+              <span className="inline-flex items-center gap-2">
+                {robot.photoUrl && <img src={robot.photoUrl} alt="" width={32} height={32} loading="lazy" className="size-8 rounded border border-rule object-cover" />}
+                {robot.name}
+              </span>
+            </Td>
             <Td className="text-ink-muted">{formatDate(robot.createdAt)}</Td>
             <Td className="text-right font-mono">r{robot.headRevision}</Td>
             <Td className="text-ink-muted">{formatDate(robot.updatedAt)}</Td>
