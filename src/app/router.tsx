@@ -36,6 +36,12 @@ export function createAppRouter(queryClient: QueryClient) {
           ],
         },
         {
+          // The printable wiring sheet: its own page, without the app's bar, so it prints clean.
+          path: 'teams/:teamId/robots/:robotId/wiring-sheet',
+          loader: requireSignedIn(queryClient),
+          lazy: async () => ({ Component: (await import('./routes/wiring-sheet')).WiringSheetRoute }),
+        },
+        {
           element: <AppLayout />,
           loader: requireSignedIn(queryClient),
           children: [

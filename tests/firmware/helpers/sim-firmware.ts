@@ -42,3 +42,28 @@ export function engineDuties(config: RobotConfig, raw: RawByChannel): { duties: 
   });
   return { duties, armed: shaped.armed };
 }
+
+/**
+ * The range of duties the engine gives when every pulse channel in `raw` may be off by up to
+ * `errorUs` either way (3 points per channel: −e, 0, +e; the engine is smooth, so the extremes
+ * over this small box sit on its grid to within a step). Pulse inputs are timed by software,
+ * so the firmware may see a width a few µs from the one sent; it must then drive like the
+ * engine does for some width within that error.
+ */
+export function engineDutyRange(config: RobotConfig, raw: RawByChannel, errorUs: number): { low: number[]; high: number[] } {
+  const channels = Object.keys(raw).map(Number);
+  let low: number[] | null = null;
+  let high: number[] | null = null;
+  const total = 3 ** channels.length;
+  for (let k = 0; k < total; k += 1) {
+    const moved: RawByChannel = { ...raw };
+    channels.forEach((ch, i) => {
+      const step = Math.floor(k / 3 ** i) % 3;
+      moved[ch] = (raw[ch] ?? 0) + (step - 1) * errorUs;
+    });
+    const { duties } = engineDuties(config, moved);
+    low = low ? low.map((v, i) => Math.min(v, duties[i])) : duties;
+    high = high ? high.map((v, i) => Math.max(v, duties[i])) : duties;
+  }
+  return { low: low!, high: high! };
+}
