@@ -26,7 +26,7 @@ function FlashForm({ robotId, revisions, headRevision }: { robotId: string; revi
     record.mutate({ revision, flashedAt: new Date(when).toISOString(), note }, { onSuccess: () => setNote('') });
   };
   return (
-    <form onSubmit={submit} className="grid gap-3 sm:grid-cols-[auto_auto_1fr_auto] sm:items-end" aria-label="Record a flash">
+    <form onSubmit={submit} className="flex flex-wrap items-end gap-3" aria-label="Record a flash">
       <label className="flex flex-col gap-1 text-sm font-semibold text-ink-soft" htmlFor={ids.revision}>
         Revision
         <select id={ids.revision} value={revision} onChange={(e) => setRevision(Number(e.target.value))} className="rounded-md border border-rule-strong bg-paper-raised px-2 py-1.5 font-mono font-normal text-ink">
@@ -42,14 +42,14 @@ function FlashForm({ robotId, revisions, headRevision }: { robotId: string; revi
         Flashed at
         <input id={ids.when} type="datetime-local" value={when} onChange={(e) => setWhen(e.target.value)} aria-invalid={fieldError('flashedAt') ? true : undefined} className="rounded-md border border-rule-strong bg-paper-raised px-2 py-1.5 font-normal text-ink" />
       </label>
-      <label className="flex flex-col gap-1 text-sm font-semibold text-ink-soft" htmlFor={ids.note}>
+      <label className="flex min-w-48 flex-1 flex-col gap-1 text-sm font-semibold text-ink-soft" htmlFor={ids.note}>
         Note
         <input id={ids.note} value={note} maxLength={500} onChange={(e) => setNote(e.target.value)} placeholder="Which board, what was tested" className="rounded-md border border-rule-strong bg-paper-raised px-2 py-1.5 font-normal text-ink" />
       </label>
       <Button type="submit" busy={record.isPending}>
         Record flash
       </Button>
-      <FormError className="sm:col-span-4" message={record.isError ? errorMessage(record.error) : undefined} />
+      <FormError className="basis-full" message={record.isError ? errorMessage(record.error) : undefined} />
     </form>
   );
 }

@@ -13,7 +13,7 @@ interface ImportRobotDialogProps {
   onImported?: (robot: RobotSummary) => void;
 }
 
-function ImportForm({ teamId, onDone }: { teamId: string; onDone: (answer: ImportRobotAnswer) => void }) {
+function ImportForm({ teamId, onDone, onCancel }: { teamId: string; onDone: (answer: ImportRobotAnswer) => void; onCancel: () => void }) {
   const [file, setFile] = useState<File | null>(null);
   const [name, setName] = useState('');
   const importing = useImportRobot(teamId);
@@ -37,9 +37,14 @@ function ImportForm({ teamId, onDone }: { teamId: string; onDone: (answer: Impor
       <input id={ids.name} value={name} maxLength={60} onChange={(e) => setName(e.target.value)} aria-invalid={nameError ? true : undefined} className="block w-full rounded-md border border-rule-strong bg-paper-raised px-3 py-1.5" />
       {nameError && <p className="text-sm font-semibold text-error">{nameError}</p>}
       <FormError message={importing.isError && !nameError ? errorMessage(importing.error) : undefined} />
-      <Button type="submit" busy={importing.isPending} disabled={!file}>
-        Import robot
-      </Button>
+      <div className="flex gap-2">
+        <Button type="submit" busy={importing.isPending} disabled={!file}>
+          Import robot
+        </Button>
+        <Button variant="quiet" onClick={onCancel}>
+          Cancel
+        </Button>
+      </div>
     </form>
   );
 }
@@ -84,12 +89,7 @@ export function ImportRobotDialog({ teamId, onImported }: ImportRobotDialogProps
                 </div>
               </div>
             ) : (
-              <>
-                <ImportForm teamId={teamId} onDone={setDone} />
-                <Button variant="quiet" onClick={close}>
-                  Cancel
-                </Button>
-              </>
+              <ImportForm teamId={teamId} onDone={setDone} onCancel={close} />
             )}
           </div>
         </div>
