@@ -1,6 +1,7 @@
 import { INPUT_SOURCES } from '@shared/inputs/input-sources';
 import type { InputSourceId } from '@shared/schemas/ids';
 import {
+  CURRENT_SCHEMA_VERSION,
   RobotConfigSchema,
   type RobotConfig,
   type RobotConfigInput,
@@ -44,7 +45,7 @@ function greenhouseCart(): RobotConfigInput {
   const at = (deg: number, drive: number) => ({ x: d * Math.cos((deg * Math.PI) / 180), y: d * Math.sin((deg * Math.PI) / 180), drive });
   const spec = { radiusMm: 29, maxRpm: 180 };
   return {
-    schemaVersion: 1,
+    schemaVersion: CURRENT_SCHEMA_VERSION,
     name: 'Greenhouse Cart',
     chassis: {
       layout: 'trio-omni',
@@ -60,7 +61,7 @@ function greenhouseCart(): RobotConfigInput {
       source: 'ppm',
       channels: channels('ppm', ['Right stick across', 'Right stick up', 'Left stick up', 'Left stick across', 'Arm switch', 'Rate switch']),
       axes: { forward: { channel: 2 }, strafe: { channel: 1 }, yaw: { channel: 4 } },
-      rateSwitch: { channel: 6, positions: 2, rates: [0.5, 1] },
+      rateSwitch: { channel: 6, rates: [0.5, 1] },
       armingSwitch: { channel: 5, armedWhen: 'high' },
     },
     wiring: {
@@ -81,7 +82,7 @@ function aisleScout(): RobotConfigInput {
   const w = 110;
   const spec = { kind: 'mecanum' as const, radiusMm: 40, maxRpm: 250 };
   return {
-    schemaVersion: 1,
+    schemaVersion: CURRENT_SCHEMA_VERSION,
     name: 'Aisle Scout',
     chassis: {
       layout: 'quad-mecanum',
@@ -98,7 +99,7 @@ function aisleScout(): RobotConfigInput {
       source: 'sbus',
       channels: channels('sbus', ['Roll stick', 'Pitch stick', 'Throttle stick', 'Yaw stick', 'Arm switch', 'Rate switch', 'Aux 1', 'Aux 2']),
       axes: { forward: { channel: 2 }, strafe: { channel: 1 }, yaw: { channel: 4, expo: 0.4 } },
-      rateSwitch: { channel: 6, positions: 3, rates: [0.35, 0.65, 1] },
+      rateSwitch: { channel: 6, rates: [0.35, 0.65, 1] },
       armingSwitch: { channel: 5, armedWhen: 'high' },
     },
     wiring: {
@@ -117,7 +118,7 @@ function aisleScout(): RobotConfigInput {
 function gardenHauler(): RobotConfigInput {
   const spec = { kind: 'track' as const, radiusMm: 35, maxRpm: 120 };
   return {
-    schemaVersion: 1,
+    schemaVersion: CURRENT_SCHEMA_VERSION,
     name: 'Garden Hauler',
     chassis: {
       layout: 'differential',
@@ -151,7 +152,7 @@ function benchKiwi(): RobotConfigInput {
   const a = 80;
   const spec = { radiusMm: 24, maxRpm: 300 };
   return {
-    schemaVersion: 1,
+    schemaVersion: CURRENT_SCHEMA_VERSION,
     name: 'Bench Kiwi',
     chassis: {
       layout: 'quad-omni-x',
