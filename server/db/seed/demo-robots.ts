@@ -1,4 +1,5 @@
 import { INPUT_SOURCES } from '@shared/inputs/input-sources';
+import { assignPins } from '@shared/pins/assign-pins';
 import type { InputSourceId } from '@shared/schemas/ids';
 import {
   CURRENT_SCHEMA_VERSION,
@@ -9,7 +10,7 @@ import {
 
 // The first revision of each demo robot of the Larkspur Makers Club. Invented builds: the
 // dimensions are plausible for small school robots, not measurements of anything real.
-// Pins are left unassigned; the wiring screen fills them.
+// Pins come from automatic assignment, as a builder pressing the wiring screen's button would get.
 
 type WheelInput = RobotConfigInput['chassis']['wheels'][number];
 
@@ -179,12 +180,17 @@ function benchKiwi(): RobotConfigInput {
         { name: 'Right driver', kind: 'two-input', motors: ['Motor FR', 'Motor RR'] },
       ],
     },
-    safety: { failsafeTimeoutMs: 200, armingRequired: true },
+    safety: { failsafeTimeoutMs: 200, armingRequired: true, outputLimitPercent: 70 },
     power: { chemistry: 'li-ion', cells: 2, capacityMah: 2600, dischargeC: 5, logicSupply: 'separate-regulator' },
   };
 }
 
-/** The demo robots' first revisions, parsed (every default filled in). */
+/** The demo robots' first revisions, parsed (every default filled in), with their pins assigned. */
 export function demoRobotConfigs(): RobotConfig[] {
-  return [greenhouseCart(), aisleScout(), gardenHauler(), benchKiwi()].map((c) => RobotConfigSchema.parse(c));
+  return [greenhouseCart(), aisleScout(), gardenHauler(), benchKiwi()].map((input) => {
+    const config = RobotConfigSchema.parse(input);
+    const assigned = assignPins(config);
+    if (!assigned.ok) throw new Error(`Demo robot ${config.name}: ${assigned.reason}`);
+    return assigned.config;
+  });
 }
