@@ -3,8 +3,14 @@ import helmet from 'helmet';
 import type { AppConfig, AppContext } from './config';
 import type { Db } from './db/client';
 import { devMailboxApiRoutes, devMailboxPage } from './features/dev/mailbox.router';
+import { auditRoutes } from './features/audit/audit.router';
 import { authRoutes } from './features/auth/auth.router';
 import { firmwareRoutes } from './features/firmware/firmware.router';
+import { flashesRoutes } from './features/flashes/flashes.router';
+import { historyRoutes } from './features/history/history.router';
+import { importsRoutes } from './features/imports/imports.router';
+import { photosRoutes } from './features/photos/photos.router';
+import { robotBinRoutes } from './features/robot-bin/robot-bin.router';
 import { robotsRoutes } from './features/robots/robots.router';
 import { invitationsRoutes } from './features/teams/invitations.router';
 import { teamsRoutes } from './features/teams/teams.router';
@@ -54,6 +60,12 @@ export function createApp(deps: AppDeps): Express {
   api.use(invitationsRoutes(ctx));
   api.use(robotsRoutes(ctx));
   api.use(firmwareRoutes(ctx));
+  api.use(historyRoutes(ctx));
+  api.use(flashesRoutes(ctx));
+  api.use(importsRoutes(ctx));
+  api.use(photosRoutes(ctx));
+  api.use(robotBinRoutes(ctx));
+  api.use(auditRoutes(ctx));
   if (showMailbox) api.use(devMailboxApiRoutes(deps.mailbox!));
   api.use(apiNotFound);
 

@@ -80,7 +80,7 @@ function starterControls(input: InputSourceId, canStrafe: boolean) {
       strafe: { channel: strafe },
       yaw: { channel: STARTER_CHANNELS.yaw },
     },
-    rateSwitch: { channel: rateChannel, positions: 2 as const, rates: [0.5, 1] },
+    rateSwitch: { channel: rateChannel, rates: [0.5, 1] },
     armingSwitch: { channel: armingChannel, armedWhen: 'high' as const },
     desaturation: 'scale' as const,
   };

@@ -1,6 +1,7 @@
 import { readFile } from 'node:fs/promises';
 import { z } from 'zod';
-import { RobotConfigSchema, type RobotConfig } from '@shared/schemas/robot-config';
+import { AnyVersionConfigSchema } from '@shared/schemas/migrate-config';
+import type { RobotConfig } from '@shared/schemas/robot-config';
 
 /** A failure the command line reports as a message and a non-zero exit code. */
 export class CliError extends Error {
@@ -30,8 +31,9 @@ export async function readConfigFile(path: string | undefined): Promise<RobotCon
   return parseConfig(json, path);
 }
 
+/** Validates a configuration of any schema version this app reads, older ones migrated forward. */
 export function parseConfig(json: unknown, source = 'configuration'): RobotConfig {
-  const result = RobotConfigSchema.safeParse(json);
+  const result = AnyVersionConfigSchema.safeParse(json);
   if (!result.success) throw new CliError(`${source} is not a valid configuration:\n${formatIssues(result.error)}`);
   return result.data;
 }

@@ -116,6 +116,8 @@ export const robots = sqliteTable(
     createdAt: createdAt(),
     /** Set when a robot is moved to the bin; such robots are hidden everywhere. */
     deletedAt: integer('deleted_at', { mode: 'timestamp_ms' }),
+    /** Who moved it to the bin. */
+    deletedBy: text('deleted_by').references(() => users.id, { onDelete: 'set null' }),
     /** Number of the newest revision (revisions are numbered 1, 2, 3… per robot). */
     headRevision: integer('head_revision').notNull().default(0),
   },
@@ -154,6 +156,20 @@ export const flashes = sqliteTable(
   },
   (t) => [index('flashes_robot_idx').on(t.robotId, t.flashedAt)],
 );
+
+/** A robot's photo: the file lives under DATA_DIR/photos with a random name; one per robot. */
+export const robotPhotos = sqliteTable('robot_photos', {
+  robotId: text('robot_id')
+    .primaryKey()
+    .references(() => robots.id, { onDelete: 'cascade' }),
+  /** Random file name (hex + extension) inside the photos folder; never taken from the upload. */
+  fileName: text('file_name').notNull(),
+  /** Read from the file's content, not from what the browser claimed. */
+  mimeType: text('mime_type', { enum: ['image/jpeg', 'image/png', 'image/webp'] }).notNull(),
+  bytes: integer('bytes').notNull(),
+  uploadedBy: text('uploaded_by').references(() => users.id, { onDelete: 'set null' }),
+  createdAt: createdAt(),
+});
 
 export type UserRow = typeof users.$inferSelect;
 export type TeamRow = typeof teams.$inferSelect;

@@ -9,8 +9,8 @@ import {
 
 /**
  * The whole robot, as saved in a revision, exported as config.json and read by the
- * command line. Bump CURRENT_SCHEMA_VERSION and add a migration step whenever a saved
- * file would no longer parse.
+ * command line. Bump CURRENT_SCHEMA_VERSION and add a migration step (in
+ * shared/schemas/migrate-config.ts) whenever a saved file would no longer parse.
  *
  * Frames and signs (the same everywhere in Mixwright):
  * - Body frame: x forward, y to the left, z up; angles counter-clockwise seen from above,
@@ -18,7 +18,7 @@ import {
  * - Stick commands are in the driver's view: forward +1 = ahead, strafe +1 = to the right,
  *   yaw +1 = turn right (clockwise seen from above). All in −1..1.
  */
-export const CURRENT_SCHEMA_VERSION = 1;
+export const CURRENT_SCHEMA_VERSION = 2;
 
 const finite = (label: string) =>
   z.number({ error: `${label} must be a number` }).refine(Number.isFinite, `${label} must be a finite number`);
@@ -93,17 +93,19 @@ export const AxisMapSchema = z.object({
 });
 export type AxisMap = z.infer<typeof AxisMapSchema>;
 
-export const RateSwitchSchema = z
-  .object({
-    channel: z.number().int().min(1).max(18).nullable().default(null),
-    positions: z.union([z.literal(2), z.literal(3)]).default(2),
-    /** Scale applied to every axis in each switch position, from low to high. */
-    rates: z.array(finite('Rate').pipe(z.number().min(0.05).max(1))).min(2).max(3).default([0.5, 1]),
-  })
-  .refine((s) => s.rates.length === s.positions, {
-    message: 'Give one rate per switch position',
-    path: ['rates'],
-  });
+/**
+ * A two- or three-position switch that scales every axis. Since schema version 2 the number
+ * of positions is the number of rates (version 1 stored both, and they could disagree).
+ */
+export const RateSwitchSchema = z.object({
+  channel: z.number().int().min(1).max(18).nullable().default(null),
+  /** Scale applied to every axis in each switch position, from low to high; one per position. */
+  rates: z
+    .array(finite('Rate').pipe(z.number().min(0.05).max(1)))
+    .min(2, 'A rate switch has 2 or 3 positions: give 2 or 3 rates')
+    .max(3, 'A rate switch has 2 or 3 positions: give 2 or 3 rates')
+    .default([0.5, 1]),
+});
 
 export const ArmingSwitchSchema = z.object({
   channel: z.number().int().min(1).max(18).nullable().default(null),

@@ -45,6 +45,8 @@ export interface RobotSummary {
   headRevision: number;
   updatedAt: string;
   lastFlash: { revisionNumber: number; flashedAt: string } | null;
+  /** Where the robot's photo is served (team members only), or null without one. */
+  photoUrl: string | null;
 }
 
 /** A robot as the team dashboard lists it: the summary plus facts of its head revision. */
@@ -61,9 +63,13 @@ export interface RobotDetail {
   head: RevisionDetail;
 }
 
-/** The payload of a 409 when a revision was saved on top of an older one. */
+/**
+ * The payload of a 409 when a revision was saved on top of an older one: the newer head in
+ * full, and the draft that was not saved (given back so it is never lost).
+ */
 export interface RevisionConflict {
   code: 'revision_conflict';
   message: string;
-  head: RevisionSummary;
+  head: RevisionDetail;
+  draft: { baseRevision: number; message: string; config: RobotConfig };
 }

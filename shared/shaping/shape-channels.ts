@@ -2,7 +2,7 @@ import { STICK_AXES, type StickAxis } from '../schemas/ids';
 import type { Channel, RobotConfig } from '../schemas/robot-config';
 import type { Sticks } from '../kinematics/mixing';
 import { calibrate, shapeAxis } from './input-curves';
-import { isArmed, rateSwitchScale, switchPosition } from './switches';
+import { isArmed, rateSwitchPositions, rateSwitchScale, switchPosition } from './switches';
 
 export type ShapingInput = Pick<RobotConfig, 'controls'> & { safety: Pick<RobotConfig['safety'], 'armingRequired'> };
 
@@ -32,7 +32,7 @@ function readChannel(config: ShapingInput, number: number | null, raw: RawByChan
 export function sticksFromChannels(config: ShapingInput, raw: RawByChannel): ShapedControls {
   const { controls } = config;
   const rateValue = readChannel(config, controls.rateSwitch.channel, raw);
-  const ratePosition = controls.rateSwitch.channel === null ? null : switchPosition(rateValue ?? -1, controls.rateSwitch.positions);
+  const ratePosition = controls.rateSwitch.channel === null ? null : switchPosition(rateValue ?? -1, rateSwitchPositions(controls.rateSwitch));
   const rateScale = rateSwitchScale(controls.rateSwitch, ratePosition);
   const sticks = Object.fromEntries(
     STICK_AXES.map((axis) => {
@@ -70,7 +70,7 @@ export function shapeChannel(config: ShapingInput, channelNumber: number, raw: n
   if (axis) return { value: shapeAxis(raw, channel, controls.axes[axis]), role: axis };
   const calibrated = calibrate(raw, channel);
   if (controls.rateSwitch.channel === channelNumber) {
-    return { value: switchPosition(calibrated, controls.rateSwitch.positions), role: 'rate-switch' };
+    return { value: switchPosition(calibrated, rateSwitchPositions(controls.rateSwitch)), role: 'rate-switch' };
   }
   if (controls.armingSwitch.channel === channelNumber) {
     return { value: isArmed(controls.armingSwitch, config.safety.armingRequired, calibrated) ? 1 : 0, role: 'arming-switch' };

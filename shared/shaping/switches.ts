@@ -1,11 +1,16 @@
 import type { Controls } from '../schemas/robot-config';
 
+/** How many positions the rate switch has: one per rate (2 or 3). */
+export function rateSwitchPositions(rateSwitch: Pick<Controls['rateSwitch'], 'rates'>): number {
+  return rateSwitch.rates.length;
+}
+
 /**
  * Switch position from a calibrated value in −1..1, by thresholds half-way between the
  * positions: two positions split at 0; three positions at ±0.5 (low, middle, high).
  * Position 0 is the low end.
  */
-export function switchPosition(value: number, positions: 2 | 3): number {
+export function switchPosition(value: number, positions: number): number {
   if (positions === 2) return value >= 0 ? 1 : 0;
   if (value < -0.5) return 0;
   return value > 0.5 ? 2 : 1;

@@ -26,10 +26,13 @@ interface RequestOptions {
 
 /** Calls `/api/...`; returns the parsed JSON, or throws ApiError (or a network error). */
 export async function apiRequest<T>(path: string, options: RequestOptions = {}): Promise<T> {
+  // A FormData body (a file upload) goes as multipart; the browser sets its own Content-Type.
+  const form = options.body instanceof FormData;
+  const sendsJson = options.body !== undefined && !form;
   const response = await fetch(`/api${path}`, {
     method: options.method ?? 'GET',
-    headers: options.body === undefined ? { Accept: 'application/json' } : { Accept: 'application/json', 'Content-Type': 'application/json' },
-    body: options.body === undefined ? undefined : JSON.stringify(options.body),
+    headers: sendsJson ? { Accept: 'application/json', 'Content-Type': 'application/json' } : { Accept: 'application/json' },
+    body: form ? (options.body as FormData) : sendsJson ? JSON.stringify(options.body) : undefined,
     credentials: 'same-origin',
     signal: options.signal,
   });

@@ -11,8 +11,14 @@ beforeAll(async () => {
 afterAll(() => ctx.close());
 
 async function send(route: string, req: RouteRequest, userId: string | null): Promise<number> {
-  const method = route.split(' ')[0].toLowerCase() as 'get' | 'post' | 'patch' | 'delete';
+  const method = route.split(' ')[0].toLowerCase() as 'get' | 'post' | 'put' | 'patch' | 'delete';
   const agent = userId ? await clientAs(ctx, userId) : client(ctx);
+  if (req.upload) {
+    const { field, data, fileName, fields = {} } = req.upload;
+    let upload = agent[method](req.path);
+    for (const [name, value] of Object.entries(fields)) upload = upload.field(name, value);
+    return (await upload.attach(field, data, fileName)).status;
+  }
   const response = await (req.body === undefined ? agent[method](req.path) : agent[method](req.path).send(req.body as object));
   return response.status;
 }

@@ -113,6 +113,13 @@ describe('the engine commands', { timeout: 60_000 }, () => {
     expect(out.stderr).toMatch(/chassis\.wheels\.1\.radiusMm: Radius must be more than 0 mm/);
   });
 
+  it('reads a file saved at schema version 1, three-position rate switch included', async () => {
+    const path = join(process.cwd(), 'tests/fixtures/configs/v1/aisle-scout.json');
+    const out = await cli('shape', path, '--channel', '6', '--raw', '1811');
+    expect(out.code).toBe(0);
+    expect(JSON.parse(out.stdout)).toEqual({ value: 2 });
+  });
+
   it('rejects a file that is not JSON', async () => {
     const out = await cli('mix', await file('broken.json', '{ "schemaVersion": '));
     expect(out.code).not.toBe(0);

@@ -1,6 +1,8 @@
 import { INPUT_SOURCES } from '@shared/inputs/input-sources';
+import { assignPins } from '@shared/pins/assign-pins';
 import type { InputSourceId } from '@shared/schemas/ids';
 import {
+  CURRENT_SCHEMA_VERSION,
   RobotConfigSchema,
   type RobotConfig,
   type RobotConfigInput,
@@ -8,7 +10,7 @@ import {
 
 // The first revision of each demo robot of the Larkspur Makers Club. Invented builds: the
 // dimensions are plausible for small school robots, not measurements of anything real.
-// Pins are left unassigned; the wiring screen fills them.
+// Pins come from automatic assignment, as a builder pressing the wiring screen's button would get.
 
 type WheelInput = RobotConfigInput['chassis']['wheels'][number];
 
@@ -44,7 +46,7 @@ function greenhouseCart(): RobotConfigInput {
   const at = (deg: number, drive: number) => ({ x: d * Math.cos((deg * Math.PI) / 180), y: d * Math.sin((deg * Math.PI) / 180), drive });
   const spec = { radiusMm: 29, maxRpm: 180 };
   return {
-    schemaVersion: 1,
+    schemaVersion: CURRENT_SCHEMA_VERSION,
     name: 'Greenhouse Cart',
     chassis: {
       layout: 'trio-omni',
@@ -60,7 +62,7 @@ function greenhouseCart(): RobotConfigInput {
       source: 'ppm',
       channels: channels('ppm', ['Right stick across', 'Right stick up', 'Left stick up', 'Left stick across', 'Arm switch', 'Rate switch']),
       axes: { forward: { channel: 2 }, strafe: { channel: 1 }, yaw: { channel: 4 } },
-      rateSwitch: { channel: 6, positions: 2, rates: [0.5, 1] },
+      rateSwitch: { channel: 6, rates: [0.5, 1] },
       armingSwitch: { channel: 5, armedWhen: 'high' },
     },
     wiring: {
@@ -81,7 +83,7 @@ function aisleScout(): RobotConfigInput {
   const w = 110;
   const spec = { kind: 'mecanum' as const, radiusMm: 40, maxRpm: 250 };
   return {
-    schemaVersion: 1,
+    schemaVersion: CURRENT_SCHEMA_VERSION,
     name: 'Aisle Scout',
     chassis: {
       layout: 'quad-mecanum',
@@ -98,7 +100,7 @@ function aisleScout(): RobotConfigInput {
       source: 'sbus',
       channels: channels('sbus', ['Roll stick', 'Pitch stick', 'Throttle stick', 'Yaw stick', 'Arm switch', 'Rate switch', 'Aux 1', 'Aux 2']),
       axes: { forward: { channel: 2 }, strafe: { channel: 1 }, yaw: { channel: 4, expo: 0.4 } },
-      rateSwitch: { channel: 6, positions: 3, rates: [0.35, 0.65, 1] },
+      rateSwitch: { channel: 6, rates: [0.35, 0.65, 1] },
       armingSwitch: { channel: 5, armedWhen: 'high' },
     },
     wiring: {
@@ -117,7 +119,7 @@ function aisleScout(): RobotConfigInput {
 function gardenHauler(): RobotConfigInput {
   const spec = { kind: 'track' as const, radiusMm: 35, maxRpm: 120 };
   return {
-    schemaVersion: 1,
+    schemaVersion: CURRENT_SCHEMA_VERSION,
     name: 'Garden Hauler',
     chassis: {
       layout: 'differential',
@@ -151,7 +153,7 @@ function benchKiwi(): RobotConfigInput {
   const a = 80;
   const spec = { radiusMm: 24, maxRpm: 300 };
   return {
-    schemaVersion: 1,
+    schemaVersion: CURRENT_SCHEMA_VERSION,
     name: 'Bench Kiwi',
     chassis: {
       layout: 'quad-omni-x',
@@ -178,12 +180,17 @@ function benchKiwi(): RobotConfigInput {
         { name: 'Right driver', kind: 'two-input', motors: ['Motor FR', 'Motor RR'] },
       ],
     },
-    safety: { failsafeTimeoutMs: 200, armingRequired: true },
+    safety: { failsafeTimeoutMs: 200, armingRequired: true, outputLimitPercent: 70 },
     power: { chemistry: 'li-ion', cells: 2, capacityMah: 2600, dischargeC: 5, logicSupply: 'separate-regulator' },
   };
 }
 
-/** The demo robots' first revisions, parsed (every default filled in). */
+/** The demo robots' first revisions, parsed (every default filled in), with their pins assigned. */
 export function demoRobotConfigs(): RobotConfig[] {
-  return [greenhouseCart(), aisleScout(), gardenHauler(), benchKiwi()].map((c) => RobotConfigSchema.parse(c));
+  return [greenhouseCart(), aisleScout(), gardenHauler(), benchKiwi()].map((input) => {
+    const config = RobotConfigSchema.parse(input);
+    const assigned = assignPins(config);
+    if (!assigned.ok) throw new Error(`Demo robot ${config.name}: ${assigned.reason}`);
+    return assigned.config;
+  });
 }

@@ -2,6 +2,7 @@ import { and, asc, desc, eq, isNull, sql } from 'drizzle-orm';
 import type { Db } from '@server/db/client';
 import { flashes, revisions, robots, teams, users } from '@server/db/schema';
 import { newId } from '@server/lib/ids';
+import { parseAnyVersion } from '@shared/schemas/migrate-config';
 import type { RobotConfig } from '@shared/schemas/robot-config';
 import type { RevisionSummary, RobotSummary } from '@shared/schemas/robots';
 
@@ -19,6 +20,8 @@ const updatedAt = sql<number>`(select max(v.created_at) from revisions v where v
 const lastFlash = sql<string | null>`(select json_object('revisionNumber', f.revision_number, 'flashedAt', f.flashed_at)
   from flashes f where f.robot_id = robots.id order by f.flashed_at desc, f.id desc limit 1)`;
 
+const photoAt = sql<number | null>`(select p.created_at from robot_photos p where p.robot_id = robots.id)`;
+
 const summaryColumns = {
   id: robots.id,
   teamId: robots.teamId,
@@ -27,17 +30,20 @@ const summaryColumns = {
   headRevision: robots.headRevision,
   updatedAt,
   lastFlash,
+  photoAt,
 };
 
-type SummaryRow = { createdAt: Date; updatedAt: number | null; lastFlash: string | null } & Omit<
+type SummaryRow = { createdAt: Date; updatedAt: number | null; lastFlash: string | null; photoAt: number | null } & Omit<
   RobotSummary,
-  'createdAt' | 'updatedAt' | 'lastFlash'
+  'createdAt' | 'updatedAt' | 'lastFlash' | 'photoUrl'
 >;
 
-function toSummary(row: SummaryRow): RobotSummary {
+function toSummary({ photoAt, ...row }: SummaryRow): RobotSummary {
   const flash = row.lastFlash ? (JSON.parse(row.lastFlash) as { revisionNumber: number; flashedAt: number }) : null;
   return {
     ...row,
+    // The upload time in the address makes browsers fetch a replaced photo afresh.
+    photoUrl: photoAt === null ? null : `/api/robots/${row.id}/photo?v=${photoAt}`,
     createdAt: row.createdAt.toISOString(),
     updatedAt: new Date(row.updatedAt ?? row.createdAt.getTime()).toISOString(),
     lastFlash: flash ? { revisionNumber: flash.revisionNumber, flashedAt: new Date(flash.flashedAt).toISOString() } : null,
@@ -112,7 +118,7 @@ export function findRevision(db: Db, robotId: string, number: number) {
     .where(and(eq(revisions.robotId, robotId), eq(revisions.number, number)))
     .get();
   return row
-    ? { ...row, createdAt: row.createdAt.toISOString(), config: JSON.parse(row.config) as RobotConfig }
+    ? { ...row, createdAt: row.createdAt.toISOString(), config: parseAnyVersion(JSON.parse(row.config)) }
     : undefined;
 }
 

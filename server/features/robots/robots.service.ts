@@ -44,8 +44,27 @@ export function robotDetail(ctx: AppContext, robotId: string, role: Role): Robot
 }
 
 /**
+ * The 409 answer when an edit started from an older revision than the head: it carries the
+ * head in full (configuration included) and gives back the draft that was not saved, so the
+ * person can compare both and nothing they typed is lost.
+ */
+export function revisionConflict(
+  db: AppContext['db'],
+  robot: { id: string; headRevision: number },
+  baseRevision: number,
+  draft: { message: string; config: RobotConfig },
+): HttpError {
+  const head = findRevision(db, robot.id, robot.headRevision)!;
+  return new HttpError(
+    409,
+    `Revision ${head.number} was saved by ${head.authorName ?? 'someone'} after revision ${baseRevision}; review it before saving`,
+    { code: 'revision_conflict', details: { head, draft: { baseRevision, ...draft } } },
+  );
+}
+
+/**
  * Saves a new revision on top of `baseRevision`. If someone saved after that revision, nothing
- * is written and the answer is 409 with the newer head, so the client can show what changed.
+ * is written and the answer is 409 with the newer head and the unsaved draft.
  */
 export function saveRevision(
   ctx: AppContext,
@@ -57,15 +76,7 @@ export function saveRevision(
     const robot = findLiveRobot(tx, robotId);
     if (!robot) throw new HttpError(404, 'Robot not found');
     if (input.baseRevision !== robot.headRevision) {
-      const head = findRevision(tx, robotId, robot.headRevision)!;
-      throw new HttpError(
-        409,
-        `Revision ${head.number} was saved by ${head.authorName ?? 'someone'} after revision ${input.baseRevision}; review it before saving`,
-        {
-          code: 'revision_conflict',
-          details: { head: { number: head.number, message: head.message, authorName: head.authorName, createdAt: head.createdAt } },
-        },
-      );
+      throw revisionConflict(tx, robot, input.baseRevision, { message: input.message, config: input.config });
     }
     const next = robot.headRevision + 1;
     insertRevision(tx, { robotId, number: next, config: input.config, message: input.message, authorId: user.id });

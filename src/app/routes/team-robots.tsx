@@ -5,6 +5,8 @@ import { Cautions } from '@/components/ui/cautions';
 import { Dialog } from '@/components/ui/dialog';
 import { Panel } from '@/components/ui/panel';
 import { EmptyState, ErrorState, LoadingState } from '@/components/ui/states';
+import { DeletedRobotsPanel } from '@/features/history/components/robot-bin-panel';
+import { ImportRobotDialog } from '@/features/history/components/import-robot-dialog';
 import { useTeamRobots } from '@/features/robots/api/get-team-robots';
 import { RobotTable } from '@/features/robots/components/robot-table';
 import { errorMessage } from '@/lib/api-client';
@@ -22,21 +24,31 @@ export function TeamRobotsRoute() {
   const canEdit = team.role !== 'viewer';
   return (
     <div className="grid items-start gap-6 xl:grid-cols-[1fr_18rem]">
-      <Panel
-        title="Robots"
-        titleId="robots-title"
-        description="Each robot keeps numbered revisions of its configuration."
-        actions={canEdit && <Button onClick={() => setCreating(true)}>New robot</Button>}
-      >
-        {robots.isPending && <LoadingState label="Loading robots…" />}
-        {robots.isError && <ErrorState message={errorMessage(robots.error)} onRetry={() => robots.refetch()} />}
-        {robots.data && robots.data.length === 0 && (
-          <EmptyState title="No robots in this team yet">
-            {canEdit ? 'Start one from a starter layout with “New robot”.' : 'Editors and owners add robots.'}
-          </EmptyState>
-        )}
-        {robots.data && robots.data.length > 0 && <RobotTable robots={robots.data} teamName={team.name} />}
-      </Panel>
+      <div className="grid gap-6">
+        <Panel
+          title="Robots"
+          titleId="robots-title"
+          description="Each robot keeps numbered revisions of its configuration."
+          actions={
+            canEdit && (
+              <div className="flex flex-wrap gap-2">
+                <ImportRobotDialog teamId={team.id} />
+                <Button onClick={() => setCreating(true)}>New robot</Button>
+              </div>
+            )
+          }
+        >
+          {robots.isPending && <LoadingState label="Loading robots…" />}
+          {robots.isError && <ErrorState message={errorMessage(robots.error)} onRetry={() => robots.refetch()} />}
+          {robots.data && robots.data.length === 0 && (
+            <EmptyState title="No robots in this team yet">
+              {canEdit ? 'Start one from a starter layout with “New robot”, or import a saved file.' : 'Editors and owners add robots.'}
+            </EmptyState>
+          )}
+          {robots.data && robots.data.length > 0 && <RobotTable robots={robots.data} teamName={team.name} />}
+        </Panel>
+        {team.role === 'owner' && <DeletedRobotsPanel teamId={team.id} />}
+      </div>
       <Cautions />
       <Dialog
         open={creating}

@@ -1,3 +1,6 @@
+import { deleteRobot } from '@server/features/robot-bin/robot-bin.service';
+import { uploadPhoto } from '@server/features/photos/photos.service';
+import { pngImage } from '../../factories/images';
 import { robotConfigInput } from '../../factories/robot-config';
 import { wiredConfig } from '../../factories/wired-config';
 import { uniqueEmail, type TeamScenario } from './factories';
@@ -10,9 +13,13 @@ export const CALLERS: Caller[] = ['anonymous', 'outsider', 'viewer', 'editor', '
 export interface RouteRequest {
   path: string;
   body?: unknown;
+  /** A multipart upload instead of a JSON body: the file and any text fields. */
+  upload?: { field: string; data: Buffer; fileName: string; fields?: Record<string, string> };
   /** Puts the scenario in the state the route needs (a photo to fetch, a robot in the bin). */
   before?: (ctx: TestContext, s: TeamScenario) => unknown;
 }
+
+const exportedConfig = () => Buffer.from(JSON.stringify(robotConfigInput()));
 
 /**
  * Every route that acts on one team's things (`:teamId` or `:robotId`), with the status each
@@ -103,6 +110,82 @@ export const TEAM_ROUTES: Record<string, { request: (s: TeamScenario) => RouteRe
   'POST /api/robots/:robotId/preview-files': {
     request: (s) => ({ path: `/api/robots/${s.robot.id}/preview-files`, body: { config: wiredConfig() } }),
     expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
+  },
+  'GET /api/robots/:robotId/history': {
+    request: (s) => ({ path: `/api/robots/${s.robot.id}/history` }),
+    expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
+  },
+  'GET /api/robots/:robotId/diff': {
+    request: (s) => ({ path: `/api/robots/${s.robot.id}/diff?from=1&to=1` }),
+    expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
+  },
+  'POST /api/robots/:robotId/revisions/:revision/restore': {
+    request: (s) => ({ path: `/api/robots/${s.robot.id}/revisions/1/restore`, body: { baseRevision: 1 } }),
+    expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 201, owner: 201 },
+  },
+  'GET /api/robots/:robotId/flashes': {
+    request: (s) => ({ path: `/api/robots/${s.robot.id}/flashes` }),
+    expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
+  },
+  'POST /api/robots/:robotId/flashes': {
+    request: (s) => ({ path: `/api/robots/${s.robot.id}/flashes`, body: { revision: 1, note: 'Matrix flash' } }),
+    expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 201, owner: 201 },
+  },
+  'POST /api/robots/:robotId/boot-line': {
+    request: (s) => ({ path: `/api/robots/${s.robot.id}/boot-line`, body: { line: 'boot robot="Matrix" revision=1 hash=00000000' } }),
+    expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
+  },
+  'GET /api/robots/:robotId/revisions/:revision/export': {
+    request: (s) => ({ path: `/api/robots/${s.robot.id}/revisions/1/export` }),
+    expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
+  },
+  'POST /api/teams/:teamId/robots/import': {
+    request: (s) => ({ path: `/api/teams/${s.team.id}/robots/import`, upload: { field: 'file', data: exportedConfig(), fileName: 'matrix.json' } }),
+    expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 201, owner: 201 },
+  },
+  'POST /api/robots/:robotId/revisions/import': {
+    request: (s) => ({
+      path: `/api/robots/${s.robot.id}/revisions/import`,
+      upload: { field: 'file', data: exportedConfig(), fileName: 'matrix.json', fields: { baseRevision: '1' } },
+    }),
+    expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 201, owner: 201 },
+  },
+  'GET /api/robots/:robotId/photo': {
+    request: (s) => ({
+      path: `/api/robots/${s.robot.id}/photo`,
+      before: (ctx) => uploadPhoto(ctx.appContext, s.owner, s.robot.id, pngImage()),
+    }),
+    expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
+  },
+  'PUT /api/robots/:robotId/photo': {
+    request: (s) => ({ path: `/api/robots/${s.robot.id}/photo`, upload: { field: 'photo', data: pngImage(), fileName: 'robot.png' } }),
+    expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 200, owner: 200 },
+  },
+  'DELETE /api/robots/:robotId/photo': {
+    request: (s) => ({
+      path: `/api/robots/${s.robot.id}/photo`,
+      before: (ctx) => uploadPhoto(ctx.appContext, s.owner, s.robot.id, pngImage()),
+    }),
+    expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 204, owner: 204 },
+  },
+  'DELETE /api/robots/:robotId': {
+    request: (s) => ({ path: `/api/robots/${s.robot.id}` }),
+    expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 403, owner: 204 },
+  },
+  'GET /api/teams/:teamId/robot-bin': {
+    request: (s) => ({ path: `/api/teams/${s.team.id}/robot-bin` }),
+    expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 403, owner: 200 },
+  },
+  'POST /api/teams/:teamId/robot-bin/:robotId/restore': {
+    request: (s) => ({
+      path: `/api/teams/${s.team.id}/robot-bin/${s.robot.id}/restore`,
+      before: (ctx) => deleteRobot(ctx.appContext, s.owner, s.robot.id),
+    }),
+    expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 403, owner: 200 },
+  },
+  'GET /api/teams/:teamId/audit': {
+    request: (s) => ({ path: `/api/teams/${s.team.id}/audit` }),
+    expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 403, owner: 200 },
   },
 };
 

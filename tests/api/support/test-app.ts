@@ -53,7 +53,8 @@ export async function createTestContext(overrides: Partial<AppConfig> = {}): Pro
   runMigrations(database.db);
   const smtp = await startFakeSmtp();
   const mailer = createSmtpMailer({ port: smtp.port, from: 'Mixwright <no-reply@mixwright.invalid>' });
-  const config = testConfig(overrides);
+  // Files the app writes (photos) go in this context's own folder, removed on close.
+  const config = testConfig({ dataDir: dir, ...overrides });
   const app = createApp({ db: database.db, mailer, config, mailbox: smtp.mailbox });
   const auth = createAuth(database.db, { secure: false, sessionDays: config.sessionDays });
   return {

@@ -12,7 +12,7 @@ const bars = () => screen.getAllByRole('meter').map((m) => Number(m.getAttribute
 /** What the engine's own step gives, in percent, for the preview's default (highest) rate switch position. */
 function expectedPercent(layout: DriveLayoutId, sticks: Sticks, change?: Parameters<typeof makeConfig>[1]): number[] {
   const config = makeConfig(layout, change);
-  const step = driveStep(config, sticks, { ratePosition: config.controls.rateSwitch.positions - 1 });
+  const step = driveStep(config, sticks, { ratePosition: config.controls.rateSwitch.rates.length - 1 });
   return step.outputs.map((v) => Math.round(v * 100) + 0);
 }
 

@@ -12,7 +12,7 @@ export function revisionOf(config: RobotConfig, number = 3): RevisionDetail {
 }
 
 export function robotOf(config: RobotConfig): RobotDetail['robot'] {
-  return { id: 'robot-7', teamId: 'team-2', name: config.name, createdAt: '2026-01-05T10:00:00.000Z', headRevision: 3, updatedAt: '2026-02-10T09:30:00.000Z', lastFlash: null, teamName: 'Quarry Lane Robotics', role: 'editor' };
+  return { id: 'robot-7', teamId: 'team-2', name: config.name, createdAt: '2026-01-05T10:00:00.000Z', headRevision: 3, updatedAt: '2026-02-10T09:30:00.000Z', lastFlash: null, photoUrl: null, teamName: 'Quarry Lane Robotics', role: 'editor' };
 }
 
 /**

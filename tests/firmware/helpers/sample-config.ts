@@ -1,10 +1,10 @@
-import { RobotConfigSchema, type RobotConfig, type RobotConfigInput } from '@shared/schemas/robot-config';
+import { CURRENT_SCHEMA_VERSION, RobotConfigSchema, type RobotConfig, type RobotConfigInput } from '@shared/schemas/robot-config';
 
 /** A small differential robot on an Uno with an iBUS receiver and a TB6612-class driver. */
 export function sampleConfigInput(overrides: Partial<RobotConfigInput> = {}): RobotConfigInput {
   const pin = (id: string) => ({ pin: id });
   return {
-    schemaVersion: 1,
+    schemaVersion: CURRENT_SCHEMA_VERSION,
     name: 'Garden Hauler',
     chassis: {
       layout: 'differential',

@@ -39,7 +39,7 @@ function startConfig(): RobotConfig {
 
 const initial = startConfig();
 const head: RevisionDetail = { number: 4, message: 'Moved the receiver to its own pins', authorName: 'Maple Okafor', createdAt: '2026-03-14T16:20:00.000Z', config: initial };
-const robot: RobotDetail['robot'] = { id: 'robot-1', teamId: 'team-1', name: initial.name, createdAt: head.createdAt, headRevision: 4, updatedAt: head.createdAt, lastFlash: null, teamName: 'Larkspur Makers Club', role: 'editor' };
+const robot: RobotDetail['robot'] = { id: 'robot-1', teamId: 'team-1', name: initial.name, createdAt: head.createdAt, headRevision: 4, updatedAt: head.createdAt, lastFlash: null, photoUrl: null, teamName: 'Larkspur Makers Club', role: 'editor' };
 
 export function Harness() {
   const [config, setConfig] = useState(initial);

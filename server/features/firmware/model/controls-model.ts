@@ -1,5 +1,6 @@
 import { STICK_AXES } from '@shared/schemas/ids';
 import type { RobotConfig } from '@shared/schemas/robot-config';
+import { rateSwitchPositions } from '@shared/shaping/switches';
 import type { IssueList } from './firmware-config-error';
 import { calibrationSide, q14, q15Unsigned } from './fixed-point';
 import { usedChannelNumbers, type InputModel } from './input-model';
@@ -112,7 +113,7 @@ export function buildControlsModel(config: RobotConfig, input: InputModel, issue
   return {
     slots,
     axes,
-    rateSwitch: { slot: slotOf(rateSwitch.channel), positions: rateSwitch.positions, ...switchThresholds(slots, rateSwitch.channel) },
+    rateSwitch: { slot: slotOf(rateSwitch.channel), positions: rateSwitchPositions(rateSwitch), ...switchThresholds(slots, rateSwitch.channel) },
     arming: { slot: slotOf(controls.armingSwitch.channel), whenHigh: controls.armingSwitch.armedWhen === 'high', required: safety.armingRequired },
   };
 }

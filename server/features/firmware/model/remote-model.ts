@@ -1,4 +1,5 @@
 import type { RobotConfig } from '@shared/schemas/robot-config';
+import { rateSwitchPositions } from '@shared/shaping/switches';
 import { LINK_CHANNEL_COUNT } from '../link-packet';
 import { findPin, getBoard } from '@shared/boards/boards';
 import { IssueList } from './firmware-config-error';
@@ -18,7 +19,7 @@ function twoPositionSwitches(config: RobotConfig): Set<number> {
   const { rateSwitch, armingSwitch } = config.controls;
   const result = new Set<number>();
   if (armingSwitch.channel !== null) result.add(armingSwitch.channel);
-  if (rateSwitch.channel !== null && rateSwitch.positions === 2) result.add(rateSwitch.channel);
+  if (rateSwitch.channel !== null && rateSwitchPositions(rateSwitch) === 2) result.add(rateSwitch.channel);
   return result;
 }
 

@@ -39,7 +39,7 @@ export function DrivePreview({ config, defaultRamp = true, className }: DrivePre
   const [keys, setKeys] = useState<Sticks>(AT_REST);
   const [rampOn, setRampOn] = useState(defaultRamp);
   // The preview starts with the rate switch high, so full stick shows the whole range.
-  const [ratePosition, setRatePosition] = useState<number>(rateSwitch.positions - 1);
+  const [ratePosition, setRatePosition] = useState<number>(rateSwitch.rates.length - 1);
   const inputs = useRef<Sticks>(AT_REST);
   inputs.current = combineSticks({ forward: right.y, strafe: right.x, yaw: left.x }, keys);
   const { frame, trail, padName, reset } = useDriveLoop(config, mixing, inputs, { ramp: rampOn, ratePosition });

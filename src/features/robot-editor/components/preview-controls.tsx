@@ -4,13 +4,14 @@ export interface PreviewControlsProps {
   rampOn: boolean;
   onRampChange: (on: boolean) => void;
   rampPerSecond: number;
-  rateSwitch: Pick<RobotConfig['controls']['rateSwitch'], 'channel' | 'positions' | 'rates'>;
+  rateSwitch: Pick<RobotConfig['controls']['rateSwitch'], 'channel' | 'rates'>;
   ratePosition: number;
   onRatePositionChange: (position: number) => void;
   onReset: () => void;
 }
 
-const POSITION_NAMES = { 2: ['low', 'high'], 3: ['low', 'middle', 'high'] } as const;
+// One name per position; the number of positions is the number of rates.
+const POSITION_NAMES: Record<number, readonly string[]> = { 2: ['low', 'high'], 3: ['low', 'middle', 'high'] };
 
 /** The preview's own settings: ramp on or off, the rate switch position, and a reset. */
 export function PreviewControls(props: PreviewControlsProps) {
@@ -31,7 +32,7 @@ export function PreviewControls(props: PreviewControlsProps) {
           >
             {rateSwitch.rates.map((rate, i) => (
               <option key={i} value={i}>
-                {`${POSITION_NAMES[rateSwitch.positions][i]} (${Math.round(rate * 100)} %)`}
+                {`${POSITION_NAMES[rateSwitch.rates.length]?.[i] ?? `position ${i + 1}`} (${Math.round(rate * 100)} %)`}
               </option>
             ))}
           </select>

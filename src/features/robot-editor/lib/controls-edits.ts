@@ -80,10 +80,10 @@ function renumberRefs(config: RobotConfig, from: number, to: number | null): Rob
 /** The rate switch with 2 or 3 positions: the rates list follows, keeping the top rate. */
 export function setRatePositions(config: RobotConfig, positions: 2 | 3): RobotConfig {
   const old = config.controls.rateSwitch;
-  if (old.positions === positions) return config;
+  if (old.rates.length === positions) return config;
   const top = old.rates[old.rates.length - 1] ?? 1;
   const rates = positions === 2 ? [old.rates[0] ?? 0.5, top] : [old.rates[0] ?? 0.4, Math.round(((old.rates[0] ?? 0.4) + top) * 50) / 100, top];
-  return { ...config, controls: { ...config.controls, rateSwitch: { ...old, positions, rates } } };
+  return { ...config, controls: { ...config.controls, rateSwitch: { ...old, rates } } };
 }
 
 /** Five random bytes as 10 hexadecimal digits: a pipe address unlikely to match another robot's. */

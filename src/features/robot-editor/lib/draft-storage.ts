@@ -1,3 +1,5 @@
+import { migrateConfig } from '@shared/schemas/migrate-config';
+
 /**
  * Drafts live in the browser's localStorage, one per robot, so an edit survives a reload or a
  * closed tab. Each remembers the revision it started from, so saving can detect a newer one.
@@ -41,13 +43,17 @@ function isStoredDraft(value: unknown, robotId: string): value is StoredDraft {
   return v.version === 1 && v.robotId === robotId && Number.isInteger(v.baseRevision) && hasConfigShape(v.config);
 }
 
-/** The stored draft of a robot, or null when there is none or it cannot be read. */
+/**
+ * The stored draft of a robot, or null when there is none or it cannot be read. A draft kept
+ * by an earlier version of the app is brought forward to the current schema version first.
+ */
 export function readDraft(storage: Storage, robotId: string): StoredDraft | null {
   try {
     const raw = storage.getItem(draftKey(robotId));
     if (!raw) return null;
-    const parsed: unknown = JSON.parse(raw);
-    return isStoredDraft(parsed, robotId) ? parsed : null;
+    const parsed = JSON.parse(raw) as Partial<StoredDraft> | null;
+    const draft = parsed && typeof parsed === 'object' ? { ...parsed, config: migrateConfig(parsed.config) } : parsed;
+    return isStoredDraft(draft, robotId) ? draft : null;
   } catch {
     return null;
   }

@@ -52,9 +52,14 @@ const columns = helper.columns([
     header: 'Robot',
     sortFn: 'text',
     cell: (info) => (
-      <Link to={`robots/${info.row.original.id}`} className="font-semibold text-accent-strong underline-offset-2 hover:underline">
-        {info.getValue()}
-      </Link>
+      <span className="inline-flex items-center gap-2">
+        {info.row.original.photoUrl && (
+          <img src={info.row.original.photoUrl} alt="" width={32} height={32} loading="lazy" className="size-8 rounded border border-rule object-cover" />
+        )}
+        <Link to={`robots/${info.row.original.id}`} className="font-semibold text-accent-strong underline-offset-2 hover:underline">
+          {info.getValue()}
+        </Link>
+      </span>
     ),
   }),
   helper.accessor((r) => layoutLabel(r.layout), { id: 'layout', header: 'Drive layout', sortFn: 'text' }),

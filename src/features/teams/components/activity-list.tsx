@@ -29,6 +29,24 @@ export function describeActivity(event: TeamActivity): string {
       return `renamed ${text(d.from)} to ${text(d.to)}`;
     case 'revision.saved':
       return `saved revision ${text(d.number)} of ${text(d.name) || 'a robot'}: “${text(d.message)}”`;
+    case 'revision.restored':
+      return `restored revision ${text(d.from)} of ${text(d.name) || 'a robot'} as revision ${text(d.number)}${text(d.note) ? `: “${text(d.note)}”` : ''}`;
+    case 'revision.imported':
+      return `imported ${text(d.file)} as revision ${text(d.number)} of ${text(d.name) || 'a robot'}`;
+    case 'robot.imported':
+      return `imported the robot ${text(d.name)} from ${text(d.file)}`;
+    case 'robot.deleted':
+      return `moved the robot ${text(d.name)} to the bin`;
+    case 'robot.restored':
+      return `restored the robot ${text(d.name)} from the bin`;
+    case 'flash.recorded':
+      return `flashed revision ${text(d.number)} onto ${text(d.name) || 'a robot'}${text(d.note) ? `: “${text(d.note)}”` : ''}`;
+    case 'photo.uploaded':
+      return `uploaded a photo of ${text(d.name)}`;
+    case 'photo.removed':
+      return `removed the photo of ${text(d.name)}`;
+    case 'user.signed_in':
+      return 'signed in';
     default:
       return event.action.replace(/[._]/g, ' ');
   }

@@ -42,7 +42,7 @@ export function WiringSheetPage({ robotId, revision, badRevision, backTo, photoU
       return <ErrorState message={message} onRetry={isApiError(failed.error, 404) ? undefined : () => failed.refetch()} />;
     }
     if (!robot.data || !sheetRevision) return null;
-    return <WiringSheet robotName={robot.data.robot.name} teamName={robot.data.robot.teamName} revision={sheetRevision} photoUrl={photoUrl} />;
+    return <WiringSheet robotName={robot.data.robot.name} teamName={robot.data.robot.teamName} revision={sheetRevision} photoUrl={photoUrl ?? robot.data.robot.photoUrl ?? undefined} />;
   };
 
   return (

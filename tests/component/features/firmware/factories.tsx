@@ -63,6 +63,7 @@ export function sectionProps(overrides: Partial<SectionProps> = {}): SectionProp
       headRevision: 3,
       updatedAt: '2026-12-01T10:00:00.000Z',
       lastFlash: null,
+      photoUrl: null,
       teamName: 'Larkspur Makers Club',
       role: 'editor',
     },

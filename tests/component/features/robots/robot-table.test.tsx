@@ -12,6 +12,7 @@ function robot(overrides: Partial<RobotListItem> & Pick<RobotListItem, 'id' | 'n
     updatedAt: '2026-03-01T10:00:00.000Z',
     headRevision: 1,
     lastFlash: null,
+    photoUrl: null,
     layout: 'differential',
     board: 'uno',
     problems: { errors: 0, warnings: 0 },

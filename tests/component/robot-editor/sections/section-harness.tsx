@@ -21,7 +21,7 @@ export function renderSection(Section: ComponentType<SectionProps>, initial: Rob
     const validConfig = valid ?? initial;
     return (
       <Section
-        robot={{ id: 'r1', teamId: 't1', teamName: 'Team', name: config.name, createdAt: '', headRevision: 1, updatedAt: '', lastFlash: null, role: 'editor' }}
+        robot={{ id: 'r1', teamId: 't1', teamName: 'Team', name: config.name, createdAt: '', headRevision: 1, updatedAt: '', lastFlash: null, photoUrl: null, role: 'editor' }}
         head={{ number: 1, message: 'First', authorName: null, createdAt: '', config: initial }}
         config={config}
         onChange={(next) => {

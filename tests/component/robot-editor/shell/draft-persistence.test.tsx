@@ -4,6 +4,7 @@ import { useRobotDraft } from '@/features/robot-editor/hooks/use-robot-draft';
 import { draftKey, readDraft, writeDraft } from '@/features/robot-editor/lib/draft-storage';
 import type { RevisionDetail } from '@shared/schemas/robots';
 import { robotConfig } from '../../../factories/robot-config';
+import greenhouseCartV1 from '../../../fixtures/configs/v1/greenhouse-cart.json';
 
 const ROBOT = 'robot-1';
 
@@ -54,6 +55,16 @@ describe('the robot draft', () => {
     act(() => result.current.setConfig(withFailsafe(head.config, 250)));
     expect(result.current.dirty).toBe(false);
     expect(storage.getItem(draftKey(ROBOT))).toBeNull();
+  });
+
+  it('brings a draft kept in an older schema version forward when it is read', () => {
+    localStorage.setItem(
+      draftKey(ROBOT),
+      JSON.stringify({ version: 1, robotId: ROBOT, baseRevision: 2, config: greenhouseCartV1, updatedAt: '2026-03-01T10:00:00.000Z' }),
+    );
+    const draft = readDraft(storage, ROBOT);
+    expect(draft).toMatchObject({ baseRevision: 2, config: { schemaVersion: 2 } });
+    expect((draft!.config as { controls: { rateSwitch: object } }).controls.rateSwitch).not.toHaveProperty('positions');
   });
 
   it('says when the draft started from an older revision than the head', () => {

@@ -24,6 +24,7 @@ export function robotDetail(overrides: { role?: RobotDetail['robot']['role']; he
       headRevision: head.number,
       updatedAt: head.createdAt,
       lastFlash: null,
+      photoUrl: null,
       role: overrides.role ?? 'editor',
     },
     head,

@@ -42,6 +42,14 @@ describe('sticks from channels', () => {
     expect(shaped.armed).toBe(true);
   });
 
+  it('has as many rate switch positions as rates', () => {
+    const config = linear();
+    config.controls.rateSwitch.rates = [0.25, 0.5, 1];
+    const at = (raw: number) => sticksFromChannels(config, { 5: raw, 6: 2000 });
+    expect([1000, 1500, 2000].map((raw) => at(raw).ratePosition)).toEqual([0, 1, 2]);
+    expect(at(1500).rateScale).toBe(0.5);
+  });
+
   it('treats missing readings as sticks at rest, low rate and disarmed', () => {
     const shaped = sticksFromChannels(linear(), {});
     expect(shaped.sticks).toEqual({ forward: 0, strafe: 0, yaw: 0 });

@@ -2,6 +2,7 @@ import { useId } from 'react';
 import { Link } from 'react-router';
 import { cx } from '@/components/ui/cx';
 import { Panel } from '@/components/ui/panel';
+import { rateSwitchPositions } from '@shared/shaping/switches';
 import { setRatePositions } from '../../lib/controls-edits';
 import { DraftNumberField, DraftSelectField } from '../fields/draft-fields';
 import { useDraftFields } from '../fields/draft-fields-context';
@@ -15,7 +16,8 @@ export function SwitchesPanel() {
   const id = useId();
   const options = channelOptions(config);
   const rate = config.controls.rateSwitch;
-  const positionNames = rate.positions === 2 ? ['Low', 'High'] : POSITION_WORDS;
+  const positions = rateSwitchPositions(rate);
+  const positionNames = positions === 2 ? ['Low', 'High'] : POSITION_WORDS;
   return (
     <Panel title="Switches and limits" titleId={`${id}-title`}>
       <div className="grid gap-x-6 gap-y-2 lg:grid-cols-2">
@@ -27,8 +29,8 @@ export function SwitchesPanel() {
               <label htmlFor={`${id}-positions`} className="text-sm font-semibold text-ink-soft">Positions</label>
               <select
                 id={`${id}-positions`}
-                data-field="controls.rateSwitch.positions"
-                value={rate.positions}
+                data-field="controls.rateSwitch.rates"
+                value={positions}
                 disabled={disabled}
                 onChange={(e) => update((c) => setRatePositions(c, Number(e.target.value) as 2 | 3))}
                 className="w-24 rounded border border-rule-strong bg-paper-raised px-2 py-1.5"
@@ -40,7 +42,7 @@ export function SwitchesPanel() {
           </div>
           <div className="flex flex-wrap gap-x-3">
             {positionNames.map((name, i) => (
-              <DraftNumberField key={`${rate.positions}-${i}`} path={['controls', 'rateSwitch', 'rates', i]} label={`${name} rate`} unit="%" scale={100} width="w-16" />
+              <DraftNumberField key={`${positions}-${i}`} path={['controls', 'rateSwitch', 'rates', i]} label={`${name} rate`} unit="%" scale={100} width="w-16" />
             ))}
           </div>
         </fieldset>

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { demoRobotConfigs } from '@server/db/seed/demo-robots';
 import { computeMixing } from '@shared/kinematics/mixing';
+import { robotProblems } from '@shared/problems/robot-problems';
 import { RobotConfigSchema, type RobotConfig } from '@shared/schemas/robot-config';
 
 const byName = (name: string): RobotConfig => demoRobotConfigs().find((c) => c.name === name)!;
@@ -82,5 +83,14 @@ describe('the demo robots', () => {
     const mixing = computeMixing(byName(name as string));
     expect(mixing.rank).toBe(rank);
     expect(mixing.canDrive && mixing.canTurn).toBe(true);
+  });
+});
+
+describe('the demo robots as delivered', () => {
+  it('have every pin placed, with no error from the engine, the pin plan or the power advice', () => {
+    for (const config of demoRobotConfigs()) {
+      const errors = robotProblems(config).filter((p) => p.severity === 'error');
+      expect(errors, config.name).toEqual([]);
+    }
   });
 });

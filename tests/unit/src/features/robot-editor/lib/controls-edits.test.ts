@@ -40,7 +40,7 @@ describe('controls edits', () => {
 
   it('gives a three-position rate switch a middle rate between low and high', () => {
     const next = setRatePositions(rc(), 3);
-    expect(next.controls.rateSwitch).toMatchObject({ positions: 3, rates: [0.5, 0.75, 1] });
+    expect(next.controls.rateSwitch).toMatchObject({ rates: [0.5, 0.75, 1] });
     expect(RobotConfigSchema.safeParse(next).success).toBe(true);
   });
 

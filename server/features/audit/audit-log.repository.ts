@@ -1,0 +1,53 @@
+import { and, desc, eq, like, lt, or, sql, type SQL } from 'drizzle-orm';
+import type { Db } from '@server/db/client';
+import { auditEvents, users } from '@server/db/schema';
+import type { AuditKind } from '@shared/schemas/history';
+import type { TeamActivity } from '@shared/schemas/teams';
+
+const SIGN_IN = 'user.signed_in';
+
+// Which actions each filter shows, by their dotted prefix.
+const KIND_PREFIXES: Record<Exclude<AuditKind, 'all' | 'sign-ins'>, string[]> = {
+  people: ['team.', 'invitation.', 'member.'],
+  robots: ['robot.', 'photo.'],
+  revisions: ['revision.'],
+  flashes: ['flash.'],
+};
+
+function kindFilter(kind: AuditKind): SQL | undefined {
+  if (kind === 'all') return undefined;
+  if (kind === 'sign-ins') return eq(auditEvents.action, SIGN_IN);
+  return or(...KIND_PREFIXES[kind].map((prefix) => like(auditEvents.action, `${prefix}%`)));
+}
+
+/**
+ * The team's audit log, newest first: everything done in the team, and the sign-ins of its
+ * members since they joined (sign-ins belong to no team, so they are matched by membership).
+ */
+export function listAuditLog(db: Db, teamId: string, options: { kind: AuditKind; before?: number; limit: number }): TeamActivity[] {
+  const memberSignIn = and(
+    sql`${auditEvents.teamId} is null`,
+    eq(auditEvents.action, SIGN_IN),
+    // Plain table names: drizzle may leave columns unqualified, and inside this subquery an
+    // unqualified created_at would be the membership's own.
+    sql`exists (select 1 from memberships m where m.team_id = ${teamId} and m.user_id = audit_events.actor_id and m.created_at <= audit_events.created_at)`,
+  );
+  const conditions = [or(eq(auditEvents.teamId, teamId), memberSignIn), kindFilter(options.kind)];
+  if (options.before !== undefined) conditions.push(lt(auditEvents.id, options.before));
+  return db
+    .select({
+      id: auditEvents.id,
+      action: auditEvents.action,
+      actorName: users.name,
+      target: auditEvents.target,
+      detail: auditEvents.detail,
+      createdAt: auditEvents.createdAt,
+    })
+    .from(auditEvents)
+    .leftJoin(users, eq(users.id, auditEvents.actorId))
+    .where(and(...conditions))
+    .orderBy(desc(auditEvents.id))
+    .limit(options.limit)
+    .all()
+    .map((row) => ({ ...row, detail: JSON.parse(row.detail) as Record<string, unknown>, createdAt: row.createdAt.toISOString() }));
+}

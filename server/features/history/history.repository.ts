@@ -1,0 +1,63 @@
+import { and, desc, eq } from 'drizzle-orm';
+import type { Db } from '@server/db/client';
+import { flashes, revisions, users } from '@server/db/schema';
+import type { FlashEntry } from '@shared/schemas/history';
+
+/** A stored revision as it is in the table: the configuration still as JSON text. */
+export interface StoredRevision {
+  id: number;
+  number: number;
+  message: string;
+  authorName: string | null;
+  createdAt: string;
+  configText: string;
+}
+
+const storedColumns = {
+  id: revisions.id,
+  number: revisions.number,
+  message: revisions.message,
+  authorName: users.name,
+  createdAt: revisions.createdAt,
+  configText: revisions.config,
+};
+
+export function listStoredRevisions(db: Db, robotId: string): StoredRevision[] {
+  return db
+    .select(storedColumns)
+    .from(revisions)
+    .leftJoin(users, eq(users.id, revisions.authorId))
+    .where(eq(revisions.robotId, robotId))
+    .orderBy(desc(revisions.number))
+    .all()
+    .map((row) => ({ ...row, createdAt: row.createdAt.toISOString() }));
+}
+
+export function findStoredRevision(db: Db, robotId: string, number: number): StoredRevision | undefined {
+  const row = db
+    .select(storedColumns)
+    .from(revisions)
+    .leftJoin(users, eq(users.id, revisions.authorId))
+    .where(and(eq(revisions.robotId, robotId), eq(revisions.number, number)))
+    .get();
+  return row ? { ...row, createdAt: row.createdAt.toISOString() } : undefined;
+}
+
+/** The robot's flash log, newest first. */
+export function listFlashes(db: Db, robotId: string): FlashEntry[] {
+  return db
+    .select({
+      id: flashes.id,
+      revisionNumber: flashes.revisionNumber,
+      flashedAt: flashes.flashedAt,
+      flashedByName: users.name,
+      note: flashes.note,
+      createdAt: flashes.createdAt,
+    })
+    .from(flashes)
+    .leftJoin(users, eq(users.id, flashes.flashedBy))
+    .where(eq(flashes.robotId, robotId))
+    .orderBy(desc(flashes.flashedAt), desc(flashes.id))
+    .all()
+    .map((row) => ({ ...row, flashedAt: row.flashedAt.toISOString(), createdAt: row.createdAt.toISOString() }));
+}

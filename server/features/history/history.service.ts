@@ -1,0 +1,117 @@
+import type { AppContext } from '@server/config';
+import { recordEvent } from '@server/features/audit/audit.repository';
+import { findLiveRobot, insertRevision } from '@server/features/robots/robots.repository';
+import { getRevision, revisionConflict } from '@server/features/robots/robots.service';
+import { HttpError } from '@server/lib/http-error';
+import { filesDiff } from '@shared/history/file-diff';
+import { settingChanges } from '@shared/history/setting-changes';
+import type { CurrentUser } from '@shared/schemas/auth';
+import type { RevisionDiff, RobotHistory } from '@shared/schemas/history';
+import type { RevisionDetail, RevisionSummary } from '@shared/schemas/robots';
+import type { BundleRenderer } from './bundle-renderer';
+import { findStoredRevision, listFlashes, listStoredRevisions, type StoredRevision } from './history.repository';
+import { revisionFacts } from './revision-facts';
+
+function liveRobot(ctx: AppContext, robotId: string) {
+  const robot = findLiveRobot(ctx.db, robotId);
+  if (!robot) throw new HttpError(404, 'Robot not found');
+  return robot;
+}
+
+const summary = ({ number, message, authorName, createdAt }: StoredRevision): RevisionSummary => ({ number, message, authorName, createdAt });
+
+/** Every revision, newest first, with its problem count and the times it was flashed. */
+export function robotHistory(ctx: AppContext, robotId: string): RobotHistory {
+  const robot = liveRobot(ctx, robotId);
+  const flashLog = listFlashes(ctx.db, robotId);
+  const revisions = listStoredRevisions(ctx.db, robotId).map((revision) => ({
+    ...summary(revision),
+    problems: revisionFacts(revision).problems,
+    flashes: flashLog
+      .filter((f) => f.revisionNumber === revision.number)
+      .map(({ flashedAt, flashedByName }) => ({ flashedAt, flashedByName })),
+  }));
+  return { headRevision: robot.headRevision, revisions, lastFlash: flashLog[0] ?? null };
+}
+
+function storedOrNotFound(ctx: AppContext, robotId: string, number: number): StoredRevision {
+  const revision = findStoredRevision(ctx.db, robotId, number);
+  if (!revision) throw new HttpError(404, `Revision ${number} not found`);
+  return revision;
+}
+
+/** The first reason the generator gave (it lists every field it could not turn into firmware). */
+function generationProblem(error: unknown): string {
+  const issues = (error as { issues?: { path: (string | number)[]; message: string }[] }).issues;
+  if (!Array.isArray(issues) || issues.length === 0) return (error as Error).message;
+  const [first] = issues;
+  const more = issues.length > 1 ? ` (and ${issues.length - 1} more)` : '';
+  return `${first.path.join('.')}: ${first.message}${more}.`;
+}
+
+function generatedFiles(render: BundleRenderer | null, from: StoredRevision, to: StoredRevision): RevisionDiff['files'] {
+  if (!render) return { available: false, reason: 'No firmware generator is available here, so only settings are compared.' };
+  const rendered = [from, to].map((revision) => {
+    try {
+      return render(revisionFacts(revision).config, { revision: revision.number });
+    } catch (error) {
+      return `Revision ${revision.number} cannot be generated: ${generationProblem(error)}`;
+    }
+  });
+  const [before, after] = rendered;
+  if (typeof before === 'string' || typeof after === 'string') {
+    return { available: false, reason: [before, after].filter((r) => typeof r === 'string').join(' ') };
+  }
+  const stamp = (revision: StoredRevision) => ({ revision: revision.number, hash: revisionFacts(revision).hashes[0] });
+  return { available: true, ...filesDiff(before, after, { stamps: { from: stamp(from), to: stamp(to) } }) };
+}
+
+/** What changed from one revision to another: settings in words and, when possible, the generated files. */
+export function revisionDiff(ctx: AppContext, robotId: string, from: number, to: number, render: BundleRenderer | null): RevisionDiff {
+  liveRobot(ctx, robotId);
+  const before = storedOrNotFound(ctx, robotId, from);
+  const after = storedOrNotFound(ctx, robotId, to);
+  return {
+    from: summary(before),
+    to: summary(after),
+    settings: settingChanges(revisionFacts(before).config, revisionFacts(after).config),
+    files: generatedFiles(render, before, after),
+  };
+}
+
+export function restoreMessage(number: number, note?: string): string {
+  return note ? `Restored revision ${number}: ${note}` : `Restored revision ${number}`;
+}
+
+/**
+ * A new revision that copies an old one. Like a save, it must start from the head the person
+ * saw; otherwise 409, and nothing is written.
+ */
+export function restoreRevision(
+  ctx: AppContext,
+  user: CurrentUser,
+  robotId: string,
+  number: number,
+  input: { baseRevision: number; note?: string },
+): RevisionDetail {
+  const next = ctx.db.transaction((tx) => {
+    const robot = findLiveRobot(tx, robotId);
+    if (!robot) throw new HttpError(404, 'Robot not found');
+    const source = findStoredRevision(tx, robotId, number);
+    if (!source) throw new HttpError(404, `Revision ${number} not found`);
+    const message = restoreMessage(number, input.note);
+    const { config } = revisionFacts(source);
+    if (input.baseRevision !== robot.headRevision) throw revisionConflict(tx, robot, input.baseRevision, { message, config });
+    const created = robot.headRevision + 1;
+    insertRevision(tx, { robotId, number: created, config, message, authorId: user.id });
+    recordEvent(tx, {
+      teamId: robot.teamId,
+      actorId: user.id,
+      action: 'revision.restored',
+      target: `robot:${robotId}`,
+      detail: { name: robot.name, number: created, from: number, note: input.note ?? '' },
+    });
+    return created;
+  });
+  return getRevision(ctx, robotId, next);
+}

@@ -1,0 +1,42 @@
+import { screen, waitFor } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { describe, expect, it } from 'vitest';
+import { AuditLog } from '@/features/history/components/audit-log';
+import { ActivityList } from '@/features/teams/components/activity-list';
+import type { TeamActivity } from '@shared/schemas/teams';
+import { renderScreen, routeFetch } from './support';
+
+const event = (id: number, action: string, detail: Record<string, unknown> = {}): TeamActivity => ({
+  id,
+  action,
+  actorName: 'Mentor',
+  target: null,
+  detail,
+  createdAt: '2026-03-01T10:00:00.000Z',
+});
+
+describe('the audit log', () => {
+  it('describes each action in words and pages back to older events', async () => {
+    const { calls } = routeFetch({
+      'GET /api/teams/team-1/audit': (call) =>
+        call.url.includes('before=')
+          ? [200, { events: [event(3, 'user.signed_in')], nextBefore: null }]
+          : [200, { events: [event(9, 'flash.recorded', { number: 4, name: 'Aisle Scout', note: 'club night' }), event(8, 'robot.deleted', { name: 'Old Kiwi' })], nextBefore: 8 }],
+    });
+    renderScreen(<AuditLog teamId="team-1" renderEvents={(events) => <ActivityList events={events} />} />);
+    expect(await screen.findByText('flashed revision 4 onto Aisle Scout: “club night”', { exact: false })).toBeTruthy();
+    expect(screen.getByText('moved the robot Old Kiwi to the bin', { exact: false })).toBeTruthy();
+    await userEvent.setup().click(screen.getByRole('button', { name: 'Show older' }));
+    expect(await screen.findByText('signed in', { exact: false })).toBeTruthy();
+    expect(calls[1].url).toBe('/api/teams/team-1/audit?kind=all&limit=50&before=8');
+    expect(screen.queryByRole('button', { name: 'Show older' })).toBeNull();
+  });
+
+  it('asks again for the chosen kind of action', async () => {
+    const { calls } = routeFetch({ 'GET /api/teams/team-1/audit': [200, { events: [], nextBefore: null }] });
+    renderScreen(<AuditLog teamId="team-1" renderEvents={(events) => <ActivityList events={events} />} />);
+    await userEvent.setup().selectOptions(await screen.findByLabelText('Show'), 'Sign-ins');
+    await waitFor(() => expect(calls.at(-1)?.url).toBe('/api/teams/team-1/audit?kind=sign-ins&limit=50'));
+    expect(await screen.findByText('Nothing of this kind yet')).toBeTruthy();
+  });
+});
