@@ -118,6 +118,14 @@ describe('from sign-up to a downloaded firmware bundle', () => {
     expect(header).toContain('#define MW_REVISION 2UL');
     expect(header).toContain('#define MW_ROBOT_NAME "Greenhouse Cart"');
 
+    // The boot line the Firmware section shows is the one History recognises as this revision.
+    const bootLine = (await page.getByText(/^boot robot="Greenhouse Cart" revision=2 /).textContent())!;
+    await section(page, 'History');
+    await page.getByLabel('Boot line from the serial monitor').fill(bootLine);
+    await page.getByRole('button', { name: 'Which revision is this?' }).click();
+    await page.getByRole('status').filter({ hasText: 'r2' }).getByText('head', { exact: true }).waitFor();
+    await screenshot(page, 'flow-09-history');
+
     expect(builder.problems.filter((p) => !p.includes('401 (Unauthorized)'))).toEqual([]);
   });
 });
