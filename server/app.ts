@@ -5,6 +5,7 @@ import type { Db } from './db/client';
 import { devMailboxApiRoutes, devMailboxPage } from './features/dev/mailbox.router';
 import { auditRoutes } from './features/audit/audit.router';
 import { authRoutes } from './features/auth/auth.router';
+import { firmwareRoutes } from './features/firmware/firmware.router';
 import { flashesRoutes } from './features/flashes/flashes.router';
 import { historyRoutes } from './features/history/history.router';
 import { importsRoutes } from './features/imports/imports.router';
@@ -58,6 +59,7 @@ export function createApp(deps: AppDeps): Express {
   api.use(teamsRoutes(ctx));
   api.use(invitationsRoutes(ctx));
   api.use(robotsRoutes(ctx));
+  api.use(firmwareRoutes(ctx));
   api.use(historyRoutes(ctx));
   api.use(flashesRoutes(ctx));
   api.use(importsRoutes(ctx));

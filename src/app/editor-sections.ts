@@ -12,5 +12,6 @@ export const EDITOR_SECTIONS: SectionRegistry = {
   wiring: lazy(async () => ({ default: (await import('@/features/robot-editor/sections/wiring-section')).WiringSection })),
   safety: lazy(async () => ({ default: (await import('@/features/robot-editor/sections/safety-section')).SafetySection })),
   commissioning: lazy(async () => ({ default: (await import('@/features/robot-editor/sections/commissioning-section')).CommissioningSection })),
+  firmware: lazy(async () => ({ default: (await import('@/features/firmware/components/firmware-section')).FirmwareSection })),
   history: lazy(async () => ({ default: (await import('@/features/history/components/history-section')).HistorySection })),
 };

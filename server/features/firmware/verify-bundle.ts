@@ -3,29 +3,14 @@ import { mkdir, mkdtemp, rm, writeFile } from 'node:fs/promises';
 import { dirname, join } from 'node:path';
 import { RobotConfigSchema } from '@shared/schemas/robot-config';
 import type { BoardId } from '@shared/schemas/ids';
+import type { SketchCheck, VerifyResult } from '@shared/schemas/firmware';
 import { getBoard } from '@shared/boards/boards';
 import type { BundleFile } from './render-bundle';
 import { AVR_TARGETS } from './toolchain/avr-boards';
 import { compileAvrSketch } from './toolchain/avr-compile';
 import { toolchainPaths, type ToolchainOptions } from './toolchain/toolchain-paths';
 
-export interface SketchCheck {
-  folder: string;
-  board: BoardId;
-  /** null when this server has no compiler for the board. */
-  ok: boolean | null;
-  flashBytes?: number;
-  flashMax?: number;
-  ramBytes?: number;
-  ramMax?: number;
-  /** Compiler messages when it failed, or why it could not be checked. */
-  messages?: string;
-}
-
-export interface VerifyResult {
-  hash: string;
-  sketches: SketchCheck[];
-}
+export type { SketchCheck, VerifyResult };
 
 export interface VerifyOptions extends ToolchainOptions {
   /** Per compiler, linker or size step. */
@@ -35,7 +20,8 @@ export interface VerifyOptions extends ToolchainOptions {
 const cache = new Map<string, Promise<VerifyResult>>();
 const CACHE_LIMIT = 64;
 
-function bundleHash(files: BundleFile[]): string {
+/** SHA-256 over every file's path and content, in path order: equal bundles, equal hash. */
+export function bundleHash(files: BundleFile[]): string {
   const hash = createHash('sha256');
   for (const f of [...files].sort((a, b) => (a.path < b.path ? -1 : 1))) hash.update(`${f.path}\0${f.content}\0`);
   return hash.digest('hex');
@@ -72,12 +58,17 @@ async function checkSketch(files: BundleFile[], folder: string, board: BoardId, 
       await writeFile(path, file.content);
     }
     const result = await compileAvrSketch(join(root, folder), board, options);
-    if (!result.ok) return { folder, board, ok: false, messages: result.messages };
+    if (!result.ok) return { folder, board, ok: false, messages: result.messages, ...(result.stage === 'timeout' ? { timedOut: true } : {}) };
     const { flashBytes, flashMax, ramBytes, ramMax } = result;
     return { folder, board, ok: true, flashBytes, flashMax, ramBytes, ramMax };
   } finally {
     await rm(root, { recursive: true, force: true });
   }
+}
+
+/** The check of a bundle already done (or under way), without starting one. */
+export function cachedVerifyResult(files: BundleFile[]): Promise<VerifyResult> | undefined {
+  return cache.get(bundleHash(files));
 }
 
 /**
@@ -95,7 +86,11 @@ export function verifyBundle(files: BundleFile[], options: VerifyOptions = {}): 
     return { hash, sketches };
   })();
   cache.set(hash, job);
-  job.catch(() => cache.delete(hash));
+  // A check stopped at its time limit says nothing about the code: the next request tries again.
+  job.then(
+    (result) => result.sketches.some((s) => s.timedOut) && cache.delete(hash),
+    () => cache.delete(hash),
+  );
   if (cache.size > CACHE_LIMIT) cache.delete(cache.keys().next().value!);
   return job;
 }

@@ -1,4 +1,5 @@
 import JSZip from 'jszip';
+import { snakeWords } from './c-text';
 import type { BundleFile } from './render-bundle';
 
 // Every entry carries the same date, so the same bundle always zips to the same bytes
@@ -12,7 +13,11 @@ export async function zipBundle(files: BundleFile[]): Promise<Buffer> {
   return zip.generateAsync({ type: 'nodebuffer', compression: 'DEFLATE', compressionOptions: { level: 9 }, platform: 'UNIX' });
 }
 
-/** The download's file name: robot slug and revision, e.g. `greenhouse_cart-r3.zip`. */
-export function bundleFileName(sketchFolder: string, revision: number): string {
-  return `${sketchFolder}-r${revision}.zip`;
+/**
+ * The download's file name: the robot's name as a slug and the revision, e.g.
+ * `greenhouse-cart-r7.zip` (ASCII only, so it survives every browser and file system).
+ */
+export function bundleFileName(robotName: string, revision: number): string {
+  const slug = snakeWords(robotName).replace(/_/g, '-').slice(0, 60).replace(/-+$/, '') || 'robot';
+  return `${slug}-r${revision}.zip`;
 }

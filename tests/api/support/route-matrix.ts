@@ -2,7 +2,9 @@ import { deleteRobot } from '@server/features/robot-bin/robot-bin.service';
 import { uploadPhoto } from '@server/features/photos/photos.service';
 import { pngImage } from '../../factories/images';
 import { robotConfigInput } from '../../factories/robot-config';
+import { wiredConfig } from '../../factories/wired-config';
 import { uniqueEmail, type TeamScenario } from './factories';
+import { saveWiredRevision } from './firmware-factories';
 import type { TestContext } from './test-app';
 
 export type Caller = 'anonymous' | 'outsider' | 'viewer' | 'editor' | 'owner';
@@ -87,6 +89,27 @@ export const TEAM_ROUTES: Record<string, { request: (s: TeamScenario) => RouteRe
       body: { baseRevision: 1, message: 'Matrix change', config: robotConfigInput() },
     }),
     expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 201, owner: 201 },
+  },
+  // Firmware: viewers may read, download and compile-check; nobody changes anything.
+  // The compile check's robot is on an ESP32, so it answers at once ("not checked here").
+  'GET /api/robots/:robotId/revisions/:revision/files': {
+    request: (s) => ({ path: `/api/robots/${s.robot.id}/revisions/2/files`, before: (ctx) => saveWiredRevision(ctx, s) }),
+    expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
+  },
+  'GET /api/robots/:robotId/revisions/:revision/bundle': {
+    request: (s) => ({ path: `/api/robots/${s.robot.id}/revisions/2/bundle`, before: (ctx) => saveWiredRevision(ctx, s) }),
+    expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
+  },
+  'POST /api/robots/:robotId/revisions/:revision/verify': {
+    request: (s) => ({
+      path: `/api/robots/${s.robot.id}/revisions/2/verify`,
+      before: (ctx) => saveWiredRevision(ctx, s, { board: 'esp32-devkitc' }),
+    }),
+    expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
+  },
+  'POST /api/robots/:robotId/preview-files': {
+    request: (s) => ({ path: `/api/robots/${s.robot.id}/preview-files`, body: { config: wiredConfig() } }),
+    expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
   },
   'GET /api/robots/:robotId/history': {
     request: (s) => ({ path: `/api/robots/${s.robot.id}/history` }),

@@ -1,6 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { DRIVE_LAYOUT_IDS, type DriveLayoutId } from '@shared/schemas/ids';
 import type { RobotConfig } from '@shared/schemas/robot-config';
+import { bootLine } from '@server/features/firmware/boot-line';
 import { configHash } from '@server/features/firmware/model/config-hash';
 import { cyclesPerMs, simulate, type SimEvent, type SimResult } from '../sim/simavr';
 import { unoRegisters } from '../helpers/avr-registers';
@@ -113,5 +114,10 @@ describe.each(cases)('a %s robot on a simulated Uno fed %s frames', (layout, sou
   it('prints a boot line with the revision and the configuration hash', () => {
     const text = result.uart.toString('latin1');
     expect(text).toContain(`revision=${REVISION} hash=${configHash(config)} `);
+  });
+
+  it('prints, as its first line, exactly the boot line the Firmware section shows', () => {
+    const firstLine = result.uart.toString('utf8').split(/\r?\n/)[0];
+    expect(firstLine).toBe(bootLine(config, REVISION));
   });
 });
