@@ -16,8 +16,8 @@ export function DriverRatingsFields({ driverIndex, driver, canEdit, onChange }: 
           {ratings.motorVolts ? `; motor supply ${ratings.motorVolts.min}–${ratings.motorVolts.max} V` : ''}).
         </p>
       </div>
-      <NumberField id={fieldDomId([...base, 'continuousCurrentA'])} label="Continuous" value={driver.continuousCurrentA} onCommit={(v) => onChange({ continuousCurrentA: v })} min={0.1} max={500} unit="A" placeholder={ratings.continuousA === null ? '—' : String(ratings.continuousA)} disabled={!canEdit} />
-      <NumberField id={fieldDomId([...base, 'peakCurrentA'])} label="Peak" value={driver.peakCurrentA} onCommit={(v) => onChange({ peakCurrentA: v })} min={0.1} max={1000} unit="A" placeholder={ratings.peakA === null ? '—' : String(ratings.peakA)} disabled={!canEdit} />
+      <NumberField id={fieldDomId([...base, 'continuousCurrentA'])} field={`wiring.drivers.${driverIndex}.continuousCurrentA`} label="Continuous" value={driver.continuousCurrentA} onCommit={(v) => onChange({ continuousCurrentA: v })} min={0.1} max={500} unit="A" placeholder={ratings.continuousA === null ? '—' : String(ratings.continuousA)} disabled={!canEdit} />
+      <NumberField id={fieldDomId([...base, 'peakCurrentA'])} field={`wiring.drivers.${driverIndex}.peakCurrentA`} label="Peak" value={driver.peakCurrentA} onCommit={(v) => onChange({ peakCurrentA: v })} min={0.1} max={1000} unit="A" placeholder={ratings.peakA === null ? '—' : String(ratings.peakA)} disabled={!canEdit} />
     </div>
   );
 }

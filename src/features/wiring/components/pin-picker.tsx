@@ -4,7 +4,7 @@ import { cx } from '@/components/ui/cx';
 import { isRoleLit, useHighlight } from '../hooks/wiring-highlight';
 import type { PinChoice, PinChoices } from '../lib/pin-choices';
 import { pinName } from '../lib/pin-words';
-import { fieldDomId } from '../lib/wiring-problems';
+import { fieldDomId, roleFieldKey } from '../lib/wiring-problems';
 import { LockToggle } from './lock-toggle';
 import { ProblemLine } from './severity-icon';
 
@@ -37,7 +37,6 @@ export function PinPicker({ demand, label, choices, problems, canEdit, onPin, on
   const leave = () => setHighlight(null);
   return (
     <div
-      data-flash-target
       data-role={demand.key}
       data-lit={lit || undefined}
       onMouseEnter={enter}
@@ -45,7 +44,7 @@ export function PinPicker({ demand, label, choices, problems, canEdit, onPin, on
       onFocus={enter}
       onBlur={leave}
       className={cx(
-        'rounded-md px-2 py-1.5 transition-colors data-[flash]:ring-2 data-[flash]:ring-accent',
+        'rounded-md px-2 py-1.5 transition-colors',
         lit ? 'bg-accent-soft/70' : worst?.severity === 'error' ? 'bg-error-soft/40' : worst ? 'bg-warn-soft/40' : '',
       )}
     >
@@ -56,6 +55,7 @@ export function PinPicker({ demand, label, choices, problems, canEdit, onPin, on
         </label>
         <select
           id={id}
+          data-field={roleFieldKey(demand)}
           value={demand.pin ?? ''}
           disabled={!canEdit}
           aria-invalid={worst?.severity === 'error' || undefined}

@@ -24,6 +24,8 @@ describe('which section shows a field', () => {
     [['motors', 1, 'ratedVoltage'], 'chassis'],
     [['controls', 'axes', 'yaw', 'channel'], 'controls'],
     [['wiring', 'drivers', 0, 'pins', 'a.pwm'], 'wiring'],
+    [['controls', 'link', 'remotePins', 'ce', 'pin'], 'wiring'],
+    [['controls', 'link', 'remoteBoard'], 'controls'],
     [['safety', 'failsafeTimeoutMs'], 'safety'],
     [['power', 'cells'], 'safety'],
     [['firmware', 'sketchName'], 'firmware'],
