@@ -35,6 +35,9 @@ export function PinPicker({ demand, label, choices, problems, canEdit, onPin, on
   const worst = problems.find((p) => p.severity === 'error') ?? problems[0];
   const enter = () => setHighlight({ side: demand.side, pin: demand.pin, roleKey: demand.key });
   const leave = () => setHighlight(null);
+  // The closed list cuts a long choice off at its width; the whole text shows on hover.
+  const chosen = choices.suits.find((c) => c.pin.id === demand.pin) ?? choices.others.find((c) => c.pin.id === demand.pin);
+  const chosenText = chosen ? (choices.suits.includes(chosen) ? suitText(chosen) : otherText(chosen)) : undefined;
   return (
     <div
       data-role={demand.key}
@@ -56,6 +59,7 @@ export function PinPicker({ demand, label, choices, problems, canEdit, onPin, on
         <select
           id={id}
           data-field={roleFieldKey(demand)}
+          title={chosenText}
           value={demand.pin ?? ''}
           disabled={!canEdit}
           aria-invalid={worst?.severity === 'error' || undefined}
