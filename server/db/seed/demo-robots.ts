@@ -1,4 +1,5 @@
 import { INPUT_SOURCES } from '@shared/inputs/input-sources';
+import { assignPins } from '@shared/pins/assign-pins';
 import type { InputSourceId } from '@shared/schemas/ids';
 import {
   RobotConfigSchema,
@@ -8,7 +9,8 @@ import {
 
 // The first revision of each demo robot of the Larkspur Makers Club. Invented builds: the
 // dimensions are plausible for small school robots, not measurements of anything real.
-// Pins are left unassigned; the wiring screen fills them.
+// Pins are placed by the automatic assignment, as the club would have done in Wiring, so the
+// demo opens without pin errors.
 
 type WheelInput = RobotConfigInput['chassis']['wheels'][number];
 
@@ -183,7 +185,13 @@ function benchKiwi(): RobotConfigInput {
   };
 }
 
-/** The demo robots' first revisions, parsed (every default filled in). */
+/** The demo robots' first revisions, parsed (every default filled in), every pin placed. */
 export function demoRobotConfigs(): RobotConfig[] {
-  return [greenhouseCart(), aisleScout(), gardenHauler(), benchKiwi()].map((c) => RobotConfigSchema.parse(c));
+  return [greenhouseCart(), aisleScout(), gardenHauler(), benchKiwi()].map((c) => withPinsPlaced(RobotConfigSchema.parse(c)));
+}
+
+function withPinsPlaced(config: RobotConfig): RobotConfig {
+  const result = assignPins(config);
+  if (!result.ok) throw new Error(`Demo robot “${config.name}” has no pin plan: ${result.reason}`);
+  return result.config;
 }

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { demoRobotConfigs } from '@server/db/seed/demo-robots';
 import { computeMixing } from '@shared/kinematics/mixing';
+import { robotProblems } from '@shared/problems/robot-problems';
 import { RobotConfigSchema, type RobotConfig } from '@shared/schemas/robot-config';
 
 const byName = (name: string): RobotConfig => demoRobotConfigs().find((c) => c.name === name)!;
@@ -24,6 +25,12 @@ describe('the demo robots', () => {
     expect(config.wiring.board).toBe(board);
     expect(config.controls.source).toBe(source);
     expect(new Set(config.wiring.drivers.map((d) => d.kind))).toEqual(new Set([driver]));
+  });
+
+  it('open without errors: every pin is placed and the pin check passes', () => {
+    for (const config of demoRobotConfigs()) {
+      expect(robotProblems(config).filter((p) => p.severity === 'error').map((p) => p.message), config.name).toEqual([]);
+    }
   });
 
   it('puts every motor on exactly one driver channel', () => {
