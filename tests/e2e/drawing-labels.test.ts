@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { openBrowser, type Browser } from './support/browser';
 import { startApp, type RunningApp } from './support/app-server';
+import { signUpWithRobot } from './support/new-builder';
 
 let app: RunningApp;
 let builder: Browser;
@@ -35,20 +36,7 @@ async function clippedLabels(page: Page): Promise<string[]> {
 describe('wheel labels in the drawings', () => {
   it('stay inside every drawing when the motors have long names of their own', async () => {
     const page = builder.page;
-    await page.goto(`${app.url}/sign-up`);
-    await page.getByLabel('Your name').fill('Ines Marlow');
-    await page.getByLabel('E-mail').fill('ines.marlow@example.org');
-    await page.getByLabel('Password').fill('long names on every motor');
-    await page.getByRole('button', { name: 'Create account' }).click();
-    await page.waitForURL(`${app.url}/teams`);
-    await page.getByLabel('Team name').fill('Weir Street Robotics');
-    await page.getByRole('button', { name: 'Create team' }).click();
-    await page.getByRole('button', { name: 'New robot' }).click();
-    const dialog = page.getByRole('dialog', { name: 'New robot' });
-    await dialog.getByLabel('Robot name').fill('Long Reach');
-    await dialog.getByLabel('Starter layout').selectOption('quad-mecanum');
-    await dialog.getByRole('button', { name: 'Create robot' }).click();
-    await page.waitForURL(/\/robots\/[^/]+\/chassis$/);
+    await signUpWithRobot(page, app.url, { name: 'Ines Marlow', email: 'ines.marlow@example.org', team: 'Weir Street Robotics', robot: 'Long Reach', layout: 'quad-mecanum' });
 
     for (const [i, wheel] of ['Front left', 'Front right', 'Rear right', 'Rear left'].entries()) {
       const name = page.getByLabel(`Name of motor ${wheel}`);
