@@ -9,6 +9,7 @@ export function Panel({
   children,
   className,
   titleId,
+  field,
 }: {
   title?: ReactNode;
   description?: ReactNode;
@@ -16,10 +17,13 @@ export function Panel({
   children: ReactNode;
   className?: string;
   titleId?: string;
+  /** The configuration path this panel shows, as `data-field`, so the editor's field links can lead here. */
+  field?: string;
 }) {
   return (
     <section
       aria-labelledby={titleId}
+      data-field={field}
       className={cx('rounded-lg border border-rule bg-paper-raised shadow-[0_1px_2px_rgba(29,42,68,0.06)]', className)}
     >
       {(title || actions) && (

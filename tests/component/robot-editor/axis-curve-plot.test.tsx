@@ -31,8 +31,14 @@ describe('the axis curve plot', () => {
     expect((SIZE / 2 - numberAttr(marker, 'cy')) / HALF).toBeCloseTo(shapeAxis(0.6, { low: -1, centre: 0, high: 1 }, AXIS), 9);
   });
 
-  it('says its settings in words', () => {
+  it('says its settings in words, in percent like the fields beside it', () => {
     renderSvg(<AxisCurvePlot axis={AXIS} label="Yaw" />);
-    expect(screen.getByRole('img', { name: /Yaw stick curve/ }).textContent).toContain('deadband 10 % of half travel, expo 0.50, rate 80 %');
+    expect(screen.getByRole('img', { name: /Yaw stick curve/ }).textContent).toContain('deadband 10 % of half travel, expo 50 %, rate 80 %');
+  });
+
+  it('shows under the plot what half stick gives, in percent', () => {
+    const { container } = renderSvg(<AxisCurvePlot axis={AXIS} label="Yaw" />);
+    const half = Math.round(shapeAxis(0.5, { low: -1, centre: 0, high: 1 }, AXIS) * 100);
+    expect(container.querySelector('figcaption')!.textContent).toBe(`Yaw: half stick gives +${half}\u00a0%`);
   });
 });

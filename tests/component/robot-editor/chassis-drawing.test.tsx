@@ -1,6 +1,8 @@
 import { screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { computeMixing, mixSticks } from '@shared/kinematics/mixing';
+import { DRIVE_LAYOUT_IDS } from '@shared/schemas/ids';
+import { estimateTextWidth, labelRoom } from '@/features/robot-editor/lib/wheel-labels';
 import { ChassisDrawing } from '@/features/robot-editor/components/chassis-drawing';
 import { makeConfig } from '../../factories/engine';
 import { numberAttr, renderSvg, rotateSvg } from './factories';
@@ -95,3 +97,67 @@ describe('the chassis drawing', () => {
     expect([push('Front left'), push('Front right'), push('Rear right'), push('Rear left')]).toEqual(['1', '-1', '1', '-1']);
   });
 });
+
+describe('the chassis drawing’s wheel labels', () => {
+  /** Motors named apart from their wheels, and long: "M2 front right gearmotor, 12 V 300 rpm". */
+  const longNames = (layout: (typeof DRIVE_LAYOUT_IDS)[number]) =>
+    makeConfig(layout, (c) => {
+      c.chassis.wheels = c.chassis.wheels.map((w, i) => ({ ...w, motor: `M${i + 1} ${w.name.toLowerCase()} gearmotor, 12 V 300 rpm` }));
+    }).chassis.wheels;
+
+  // Each label's extent from what is drawn: its anchor, first baseline and lines, with the text
+  // widths estimated as the drawing does (the browser test checks the estimate against Chromium).
+  const boxes = (container: HTMLElement) =>
+    [...container.querySelectorAll('text')]
+      .filter((text) => text.querySelector('tspan'))
+      .map((text) => {
+        const lines = [...text.querySelectorAll('tspan')].map((t) => estimateTextWidth(t.textContent ?? '', 12, t.getAttribute('font-weight') === '600'));
+        const width = Math.max(...lines);
+        const x = numberAttr(text, 'x');
+        const y = numberAttr(text, 'y');
+        const anchor = text.getAttribute('text-anchor');
+        const left = anchor === 'start' ? x : anchor === 'end' ? x - width : x - width / 2;
+        return { text: text.textContent, left, right: left + width, top: y - 11, bottom: y + (lines.length - 1) * 14 + 4 };
+      });
+
+  describe.each([
+    [480, 440],
+    [420, 400],
+    [420, 380],
+  ])('at %i × %i', (width, height) => {
+    it.each(DRIVE_LAYOUT_IDS)('keeps every label of a %s inside the drawing, clear of the forward mark and the scale bar', (layout) => {
+      const wheels = longNames(layout);
+      const commands = Object.fromEntries(wheels.map((w) => [w.motor, -1]));
+      const { svg, container } = renderSvg(<ChassisDrawing wheels={wheels} motorCommands={commands} width={width} height={height} />);
+      expect(svg.getAttribute('viewBox')).toBe(`0 0 ${width} ${height}`);
+      const { inside, keepOut } = labelRoom(width, height);
+      const labels = boxes(container);
+      expect(labels).toHaveLength(wheels.length);
+      for (const box of labels) {
+        expect(box.left, `${box.text} runs off the left`).toBeGreaterThanOrEqual(inside.left);
+        expect(box.right, `${box.text} runs off the right`).toBeLessThanOrEqual(inside.right);
+        expect(box.top, `${box.text} runs off the top`).toBeGreaterThanOrEqual(inside.top);
+        expect(box.bottom, `${box.text} runs into the scale bar`).toBeLessThanOrEqual(inside.bottom);
+        for (const k of keepOut) expect(box.right <= k.left || box.left >= k.right || box.bottom <= k.top || box.top >= k.bottom, `${box.text} covers the forward mark`).toBe(true);
+      }
+    });
+  });
+
+  it('draws the robot smaller to make room for long names, and at full size for short ones', () => {
+    const short = renderSvg(<ChassisDrawing wheels={makeConfig('quad-mecanum').chassis.wheels} />);
+    const long = renderSvg(<ChassisDrawing wheels={longNames('quad-mecanum')} />);
+    expect(numberAttr(long.svg, 'data-scale')).toBeLessThan(numberAttr(short.svg, 'data-scale'));
+    expect(numberAttr(long.svg, 'data-scale')).toBeGreaterThan(0.4 * numberAttr(short.svg, 'data-scale'));
+  });
+
+  it('shows a long motor name whole, over several lines, with the wheel’s own name beneath', () => {
+    const wheels = longNames('trio-omni');
+    const { container } = renderSvg(<ChassisDrawing wheels={wheels} />);
+    const front = [...container.querySelectorAll('text')].find((t) => t.textContent?.includes('wheel Front'))!;
+    const lines = [...front.querySelectorAll('tspan')].map((t) => t.textContent);
+    expect(lines.length).toBeGreaterThan(2);
+    expect(lines.slice(0, -1).join(' ')).toBe(wheels[0].motor);
+    expect(lines.at(-1)).toBe('wheel Front');
+  });
+});
+

@@ -27,6 +27,19 @@ describe('a driver card', () => {
     expect(within(driver).getByRole('radio', { name: /Coast/ })).toHaveProperty('disabled', true);
   });
 
+  it('names the motor supply range once, from the ratings’ source when it states one', () => {
+    renderWiring(unoPlan({ driver: 'pwm-in1-in2-stby' }));
+    const note = within(card('Driver 1')).getByText(/Leave empty for the kind’s typical figures/).textContent!;
+    // TB6612FNG datasheet, absolute maximum ratings: VM 2.5–13.5 V, stated by the source itself.
+    expect(note.match(/2\.5–13\.5 V/g)).toHaveLength(1);
+    expect(note).not.toContain('motor supply');
+  });
+
+  it('adds the motor supply range when the ratings’ source does not state it', () => {
+    renderWiring(unoPlan({ driver: 'pwm-dir' }));
+    expect(within(card('Driver 1')).getByText(/Leave empty for the kind’s typical figures/).textContent).toContain('motor supply 6–30 V');
+  });
+
   it('keeps shared roles’ pins when the kind changes and says what it cleared', () => {
     const view = renderWiring(unoPlan());
     fireEvent.change(within(card('Driver 1')).getByLabelText('Kind'), { target: { value: 'pwm-in1-in2-stby' } });

@@ -28,11 +28,4 @@ describe('a pin clash in the Wiring section', () => {
     expect(within(pinRow).getByRole('img', { name: 'Error' })).toBeTruthy();
     expect(within(pinRow).getByText(/D9 is used for Driver 1 A PWM and Driver 1 A Direction/)).toBeTruthy();
   });
-
-  it('takes the builder from a listed problem to the role’s pin picker', () => {
-    const { container } = renderWiring(unoPlan({}, { 'Driver 1/b.pwm': null }));
-    fireEvent.click(screen.getByRole('button', { name: /Driver 1 B PWM has no pin/ }));
-    expect(document.activeElement).toBe(pickerFor(container, 'driver:0:b.pwm'));
-    expect(roleRow(container, 'driver:0:b.pwm').dataset.flash).toBe('on');
-  });
 });

@@ -21,6 +21,14 @@ describe('the pin picker', () => {
     expect(optionValues(others)).toHaveLength(uno.pins.length - 6);
   });
 
+  it('shows the whole text of the chosen pin on hover, however narrow the list', () => {
+    const { container } = renderWiring(buildConfig({ board: 'uno', driver: 'pwm-dir', source: 'ppm' }));
+    const select = pickerFor(container, 'driver:0:a.pwm');
+    fireEvent.change(select, { target: { value: 'D2' } });
+    expect(pickerFor(container, 'driver:0:a.pwm').title).toBe(select.selectedOptions[0].textContent);
+    expect(select.title).toMatch(/^D2 — has no PWM$/);
+  });
+
   it('puts a plain PWM pin first and keeps pins with scarce abilities for last', () => {
     const { container } = renderWiring(buildConfig({ board: 'uno', driver: 'pwm-dir', source: 'rc-pwm' }));
     const suits = optionValues(pickerFor(container, 'driver:0:a.pwm').querySelector('optgroup')!);

@@ -69,6 +69,23 @@ describe('the wiring sheet', () => {
     expect(within(open).getAllByRole('listitem').map((li) => li.textContent)).toEqual(['Error: no pin yet for Driver 1 A PWM, PPM signal.']);
   });
 
+  it('boxes open warnings in amber and keeps brick red for errors', () => {
+    const sheetOf = (overrides: Record<string, string | null>) =>
+      render(
+        <MemoryRouter>
+          <WiringSheet robotName="Test robot" teamName="Quarry Lane Robotics" revision={revisionOf(unoPlan({}, overrides), 5)} />
+        </MemoryRouter>,
+      );
+    const warned = sheetOf({ 'status-led': null });
+    const warning = screen.getByRole('region', { name: /1 open wiring problem/ });
+    expect(within(warning).getByText(/^Warning:/)).toBeTruthy();
+    expect(warning.className).toContain('border-warn');
+    expect(warning.className).not.toContain('border-error');
+    warned.unmount();
+    sheetOf({ 'input/ppm': null });
+    expect(screen.getByRole('region', { name: /open wiring problem/ }).className).toContain('border-error');
+  });
+
   it('leaves the photo slot empty without a photo and fills it with one', () => {
     const { container, unmount } = renderSheet();
     expect(container.querySelector('[data-slot="robot-photo"]')).toBeNull();

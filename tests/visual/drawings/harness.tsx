@@ -19,6 +19,13 @@ const reversed = params.get('reversed');
 
 function configFor(layout: DriveLayoutId) {
   const config = buildStarterConfig({ layout });
+  // names=long: motors named apart from their wheels, long enough to test the labels' room.
+  if (params.get('names') === 'long') {
+    const rename = (name: string) => `M${config.motors.findIndex((m) => m.name === name) + 1} ${name.toLowerCase()} gearmotor`;
+    config.chassis.wheels = config.chassis.wheels.map((w) => ({ ...w, motor: rename(w.motor) }));
+    config.wiring.drivers = config.wiring.drivers.map((d) => ({ ...d, motors: d.motors.map(rename) }));
+    config.motors = config.motors.map((m) => ({ ...m, name: rename(m.name) }));
+  }
   if (reversed) config.chassis.wheels = config.chassis.wheels.map((w) => (w.motor === reversed ? { ...w, reversed: true } : w));
   if (params.get('expo')) STICK_AXES.forEach((a) => (config.controls.axes[a] = { ...config.controls.axes[a], expo: Number(params.get('expo')), deadband: 0.08, rate: 0.8 }));
   return config;

@@ -1,7 +1,7 @@
 import { useId } from 'react';
 import type { AxisMap } from '@shared/schemas/robot-config';
 import { shapeAxis } from '@shared/shaping/input-curves';
-import { formatSigned } from '../lib/screen-frame';
+import { formatPercent } from '../lib/screen-frame';
 
 export interface AxisCurvePlotProps {
   /** The axis settings (`config.controls.axes.forward` …). */
@@ -41,9 +41,11 @@ export function AxisCurvePlot({ axis, label, rateScale = 1, input = null, size =
   const curve = points.map((x) => `${sx(x).toFixed(2)},${sy(axisOutput(axis, x, rateScale)).toFixed(2)}`).join(' ');
   const rate = axis.rate * rateScale;
   const marked = input === null ? null : { x: Math.max(-1, Math.min(1, input)), y: axisOutput(axis, input, rateScale) };
+  // Percent throughout, as the deadband, expo and rate fields beside the plot show them.
+  const halfStick = formatPercent(axisOutput(axis, 0.5, rateScale));
   const words =
-    `${label}: deadband ${Math.round(axis.deadband * 100)} % of half travel, expo ${axis.expo.toFixed(2)}, ` +
-    `rate ${Math.round(rate * 100)} %${axis.reverse ? ', reversed' : ''}. Half stick gives ${formatSigned(axisOutput(axis, 0.5, rateScale), 2)}.`;
+    `${label}: deadband ${Math.round(axis.deadband * 100)} % of half travel, expo ${Math.round(axis.expo * 100)} %, ` +
+    `rate ${Math.round(rate * 100)} %${axis.reverse ? ', reversed' : ''}. Half stick gives ${halfStick}.`;
   return (
     <figure className={`font-sans text-ink ${className ?? ''}`}>
       <svg viewBox={`0 0 ${size} ${size}`} role="img" aria-labelledby={`${id}-title ${id}-desc`} className="block h-auto w-full bg-paper-raised">
@@ -76,10 +78,8 @@ export function AxisCurvePlot({ axis, label, rateScale = 1, input = null, size =
         {marked && <circle cx={sx(marked.x)} cy={sy(marked.y)} r={4} className="fill-accent stroke-paper-raised" strokeWidth={1.5} data-testid="axis-marker" />}
       </svg>
       <figcaption className="mt-1 text-xs text-ink-muted">
-        <span className="font-semibold text-ink">{label}</span>{' '}
-        <span className="font-mono">
-          db {Math.round(axis.deadband * 100)}% · expo {axis.expo.toFixed(2)} · rate {Math.round(rate * 100)}%{axis.reverse ? ' · rev' : ''}
-        </span>
+        <span className="font-semibold text-ink">{label}</span>: half stick gives <span className="font-mono">{halfStick}</span>
+        {axis.reverse ? ', reversed' : ''}
       </figcaption>
     </figure>
   );

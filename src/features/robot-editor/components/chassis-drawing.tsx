@@ -1,9 +1,10 @@
 import { useId } from 'react';
 import type { MotionFractions } from '@shared/kinematics/motion-words';
-import { drawingFrame, labelPlacement, wheelShape, type DrawingFrame, type WheelLike, type WheelShape } from '../lib/chassis-geometry';
+import type { DrawingFrame, WheelLike, WheelShape } from '../lib/chassis-geometry';
 import { describeChassis } from '../lib/describe-chassis';
 import { topRollerAngleDeg } from '@shared/kinematics/roller-pattern';
-import { formatPercent, screenDirection, type ScreenPoint } from '../lib/screen-frame';
+import { screenDirection, type ScreenPoint } from '../lib/screen-frame';
+import { fitDrawing, LABEL_FONT_SIZE, LABEL_LINE_HEIGHT, wheelLabelLines, type LabelTone, type WheelLabelLayout } from '../lib/wheel-labels';
 import { Arrow, DrawingGrid, ForwardMark, ScaleBar, TurnArrow } from './drawing-parts';
 import { CommandArrow, WheelGlyph } from './wheel-glyph';
 
@@ -49,9 +50,9 @@ export function ChassisDrawing({
   className,
 }: ChassisDrawingProps) {
   const id = useId();
-  const frame = drawingFrame(wheels, width, height);
-  const shapes = wheels.map((w) => wheelShape(w, frame.scale, frame.origin));
   const overlay = motorCommands !== undefined;
+  // The robot is drawn as large as the labels leave room for, so no label is cut at the edge.
+  const { frame, shapes, labels } = fitDrawing(wheels, width, height, (wheel) => wheelLabelLines(wheel, overlay ? (motorCommands[wheel.motor] ?? 0) : undefined));
   return (
     <svg
       viewBox={`0 0 ${width} ${height}`}
@@ -79,8 +80,8 @@ export function ChassisDrawing({
       {overlay && shapes.map((shape, i) => <CommandArrow key={`c${i}`} shape={shape} command={motorCommands[shape.wheel.motor] ?? 0} />)}
       {intendedMotion && <MotionMark frame={frame} motion={intendedMotion} intended />}
       {motion && <MotionMark frame={frame} motion={motion} />}
-      {shapes.map((shape, i) => (
-        <WheelLabel key={`l${i}`} shape={shape} origin={frame.origin} command={overlay ? (motorCommands[shape.wheel.motor] ?? 0) : undefined} />
+      {labels.map((label, i) => (
+        <WheelLabel key={`l${i}`} label={label} wheel={shapes[i].wheel.name} />
       ))}
       <ScaleBar at={{ x: 16, y: height - 16 }} lengthMm={frame.scaleBarMm} scale={frame.scale} />
       <text x={width - 14} y={height - 12} textAnchor="end" fontSize={10.5} className="fill-ink-faint font-sans">
@@ -165,29 +166,30 @@ function MotionMark({ frame, motion, intended = false }: { frame: DrawingFrame; 
   );
 }
 
-function WheelLabel({ shape, origin, command }: { shape: WheelShape; origin: ScreenPoint; command?: number }) {
-  const { at, anchor, vertical } = labelPlacement(shape, origin);
-  const { wheel } = shape;
-  const lines: { text: string; className: string; weight?: number }[] = [{ text: wheel.motor, className: 'fill-ink', weight: 600 }];
-  if (wheel.name !== wheel.motor) lines.push({ text: `wheel ${wheel.name}`, className: 'fill-ink-muted' });
-  if (command !== undefined) lines.push({ text: formatPercent(command), className: 'fill-accent-strong' });
-  else if (wheel.reversed) lines.push({ text: 'reversed', className: 'fill-warn-strong' });
-  const lineHeight = 14;
-  const firstBaseline = vertical === 1 ? at.y + 10 : vertical === -1 ? at.y - (lines.length - 1) * lineHeight - 2 : at.y + 4 - ((lines.length - 1) * lineHeight) / 2;
+const TONE: Record<LabelTone, { className: string; weight?: number }> = {
+  motor: { className: 'fill-ink', weight: 600 },
+  wheel: { className: 'fill-ink-muted' },
+  command: { className: 'fill-accent-strong' },
+  reversed: { className: 'fill-warn-strong' },
+};
+
+function WheelLabel({ label, wheel }: { label: WheelLabelLayout; wheel: string }) {
+  const { at, anchor, lines, firstBaseline } = label;
   return (
     <text
       x={at.x}
       y={firstBaseline}
       textAnchor={anchor}
-      fontSize={12}
+      fontSize={LABEL_FONT_SIZE}
       className="stroke-paper-raised font-sans"
       strokeWidth={3}
       paintOrder="stroke"
       strokeLinejoin="round"
       aria-hidden="true"
+      data-testid={`label-${wheel}`}
     >
       {lines.map((line, i) => (
-        <tspan key={i} x={at.x} dy={i === 0 ? 0 : lineHeight} className={line.className} fontWeight={line.weight}>
+        <tspan key={i} x={at.x} dy={i === 0 ? 0 : LABEL_LINE_HEIGHT} className={TONE[line.tone].className} fontWeight={TONE[line.tone].weight}>
           {line.text}
         </tspan>
       ))}

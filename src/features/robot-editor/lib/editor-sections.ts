@@ -37,8 +37,12 @@ const SECTION_OF_ROOT: Record<string, SectionId> = {
   firmware: 'firmware',
 };
 
-/** The section that shows the field at `path`, or null for a path no section shows. */
+/**
+ * The section that shows the field at `path`, or null for a path no section shows. The handheld
+ * remote's pins are planned in Wiring beside the robot's, though they live in the link settings.
+ */
 export function sectionOfPath(path: readonly (string | number)[]): SectionId | null {
+  if (path[0] === 'controls' && path[1] === 'link' && path[2] === 'remotePins') return 'wiring';
   return SECTION_OF_ROOT[String(path[0])] ?? null;
 }
 

@@ -43,11 +43,12 @@ export function NewRobotForm({ teamId, onCreated, onCancel }: { teamId: string; 
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-3">
       <FormError message={errors.root?.server?.message} />
       <TextField label="Robot name" autoComplete="off" autoFocus error={errors.name?.message} {...form.register('name')} />
+      {/* Input sources and driver kinds have long names: each gets the full width so none is cut off. */}
       <div className="grid gap-3 sm:grid-cols-2">
         <ChoiceField control={form.control} name="layout" label="Starter layout" options={layoutOptions} />
         <ChoiceField control={form.control} name="board" label="Board" options={boardOptions} />
-        <ChoiceField control={form.control} name="input" label="Input source" options={inputOptions} />
-        <ChoiceField control={form.control} name="driver" label="Motor driver" options={driverOptions} />
+        <ChoiceField control={form.control} name="input" label="Input source" options={inputOptions} className="sm:col-span-2" />
+        <ChoiceField control={form.control} name="driver" label="Motor driver" options={driverOptions} className="sm:col-span-2" />
       </div>
       <div role="status" className="min-h-12 rounded-md border border-rule bg-paper px-3 py-2 text-sm">
         <p className="font-semibold text-ink-soft">
@@ -75,7 +76,7 @@ export function NewRobotForm({ teamId, onCreated, onCancel }: { teamId: string; 
 }
 
 /** A controlled select: the form state, not the DOM, holds the choice. */
-function ChoiceField({ control, name, label, options }: { control: Control<Values>; name: Exclude<keyof Values, 'name'>; label: string; options: { value: string; label: string }[] }) {
+function ChoiceField({ control, name, label, options, className }: { control: Control<Values>; name: Exclude<keyof Values, 'name'>; label: string; options: { value: string; label: string }[]; className?: string }) {
   const { field, fieldState } = useController({ control, name });
-  return <SelectField label={label} options={options} error={fieldState.error?.message} name={field.name} value={field.value} onChange={field.onChange} onBlur={field.onBlur} ref={field.ref} />;
+  return <SelectField label={label} options={options} className={className} error={fieldState.error?.message} name={field.name} value={field.value} onChange={field.onChange} onBlur={field.onBlur} ref={field.ref} />;
 }

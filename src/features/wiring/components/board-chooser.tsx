@@ -30,7 +30,7 @@ export function BoardChooser({ config, canEdit, onChange }: { config: RobotConfi
         <label htmlFor={id} className="text-sm font-semibold text-ink-soft">
           Board
         </label>
-        <select id={id} value={config.wiring.board} disabled={!canEdit} onChange={(e) => choose(e.target.value as BoardId)} className="h-9 rounded-md border border-rule-strong bg-paper-raised px-2 font-semibold text-ink disabled:bg-paper-sunken">
+        <select id={id} data-field="wiring.board" value={config.wiring.board} disabled={!canEdit} onChange={(e) => choose(e.target.value as BoardId)} className="h-9 rounded-md border border-rule-strong bg-paper-raised px-2 font-semibold text-ink disabled:bg-paper-sunken">
           {BOARD_IDS.map((b) => (
             <option key={b} value={b}>
               {BOARDS[b].name}

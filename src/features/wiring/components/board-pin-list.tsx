@@ -4,9 +4,9 @@ import type { PinDemand, PlanSide } from '@shared/pins/pin-demands';
 import type { Problem } from '@shared/problems/problem';
 import { cx } from '@/components/ui/cx';
 import { isPinLit, isRoleLit, useHighlight } from '../hooks/wiring-highlight';
-import { focusProblemField } from '../lib/focus-field';
+import { useShowField } from '../hooks/use-show-field';
 import { abilityTags, type AbilityTone } from '../lib/pin-words';
-import { problemsForPin } from '../lib/wiring-problems';
+import { problemsForPin, roleFieldKey } from '../lib/wiring-problems';
 import { PinStrip, type PinState } from './pin-strip';
 import { SeverityIcon } from './severity-icon';
 
@@ -117,6 +117,7 @@ interface PinRowProps {
 
 function PinRow({ board, side, pin, roles, problems, roleLabel, tabbable, onActive }: PinRowProps) {
   const { highlight, setHighlight } = useHighlight();
+  const showField = useShowField();
   const lit = isPinLit(highlight, side, pin.id) || roles.some((d) => isRoleLit(highlight, side, d.key, d.pin));
   const worst = problems.find((p) => p.severity === 'error') ?? problems[0];
   const enter = () => setHighlight({ side, pin: pin.id, roleKey: null });
@@ -166,7 +167,7 @@ function PinRow({ board, side, pin, roles, problems, roleLabel, tabbable, onActi
         {roles.length > 0 && (
           <p className="mt-0.5 flex flex-wrap gap-x-2 text-[13px]">
             {roles.map((d) => (
-              <button key={d.key} type="button" onClick={() => focusProblemField(d.path)} className="font-semibold text-accent-strong underline decoration-accent/30 underline-offset-2 hover:decoration-accent">
+              <button key={d.key} type="button" onClick={() => showField(roleFieldKey(d))} className="font-semibold text-accent-strong underline decoration-accent/30 underline-offset-2 hover:decoration-accent">
                 → {roleLabel(d)}
               </button>
             ))}

@@ -9,6 +9,7 @@ import { Button } from '@/components/ui/button';
 import { cx } from '@/components/ui/cx';
 import { removeDriver, setChannelMotor, setDriverKind, updateDriver } from '../lib/driver-edits';
 import type { PinChoices } from '../lib/pin-choices';
+import { pathKey } from '@shared/history/field-path';
 import { fieldDomId, problemsForRole, samePath } from '../lib/wiring-problems';
 import { DriverRatingsFields } from './driver-ratings-fields';
 import { PinPicker } from './pin-picker';
@@ -58,7 +59,7 @@ export function DriverCard({ config, index, demands, choices, advice, problems, 
   );
 
   return (
-    <article id={fieldDomId(base)} tabIndex={-1} data-flash-target aria-labelledby={`${fieldDomId(base)}-title`} className="rounded-lg border border-rule bg-paper-raised data-[flash]:ring-2 data-[flash]:ring-accent">
+    <article id={fieldDomId(base)} data-field={pathKey(base)} aria-labelledby={`${fieldDomId(base)}-title`} className="rounded-lg border border-rule bg-paper-raised">
       <header className="flex flex-wrap items-end gap-3 border-b border-rule px-4 py-3">
         <h3 id={`${fieldDomId(base)}-title`} className="sr-only">
           {driver.name}
@@ -67,13 +68,13 @@ export function DriverCard({ config, index, demands, choices, advice, problems, 
           <label htmlFor={fieldDomId([...base, 'name'])} className="text-xs font-semibold tracking-wide text-ink-muted uppercase">
             Driver name
           </label>
-          <NameInput id={fieldDomId([...base, 'name'])} value={driver.name} disabled={!canEdit} onCommit={(name) => onChange(updateDriver(config, index, { name }))} />
+          <NameInput id={fieldDomId([...base, 'name'])} field={pathKey([...base, 'name'])} value={driver.name} disabled={!canEdit} onCommit={(name) => onChange(updateDriver(config, index, { name }))} />
         </div>
         <div className="flex min-w-0 flex-1 flex-col gap-1">
           <label htmlFor={fieldDomId([...base, 'kind'])} className="text-xs font-semibold tracking-wide text-ink-muted uppercase">
             Kind
           </label>
-          <select id={fieldDomId([...base, 'kind'])} value={driver.kind} disabled={!canEdit} onChange={(e) => changeKind(e.target.value as DriverKindId)} className={cx(selectClasses, 'w-full')}>
+          <select id={fieldDomId([...base, 'kind'])} data-field={pathKey([...base, 'kind'])} value={driver.kind} disabled={!canEdit} onChange={(e) => changeKind(e.target.value as DriverKindId)} className={cx(selectClasses, 'w-full')}>
             {DRIVER_KIND_IDS.map((id) => (
               <option key={id} value={id}>
                 {DRIVER_KINDS[id].name}
@@ -144,7 +145,7 @@ function ChannelBlock({ config, index, slot, canEdit, onChange, children }: Chan
         <label htmlFor={id} className="text-sm font-semibold text-ink-soft">
           Channel {letter} motor
         </label>
-        <select id={id} value={motor ?? ''} disabled={!canEdit} onChange={(e) => onChange(setChannelMotor(config, index, slot, e.target.value === '' ? null : e.target.value))} className={cx(selectClasses, 'min-w-44')}>
+        <select id={id} data-field={pathKey(['wiring', 'drivers', index, 'motors', slot])} value={motor ?? ''} disabled={!canEdit} onChange={(e) => onChange(setChannelMotor(config, index, slot, e.target.value === '' ? null : e.target.value))} className={cx(selectClasses, 'min-w-44')}>
           {slot === 1 && <option value="">Unused</option>}
           {offered.map((name) => (
             <option key={name} value={name}>
@@ -159,7 +160,7 @@ function ChannelBlock({ config, index, slot, canEdit, onChange, children }: Chan
 }
 
 /** The driver's name, typed freely; only a non-empty name reaches the configuration. */
-function NameInput({ id, value, disabled, onCommit }: { id: string; value: string; disabled: boolean; onCommit: (name: string) => void }) {
+function NameInput({ id, field, value, disabled, onCommit }: { id: string; field: string; value: string; disabled: boolean; onCommit: (name: string) => void }) {
   const [draft, setDraft] = useState(value);
   useEffect(() => setDraft((current) => (current.trim() === value ? current : value)), [value]);
   const empty = draft.trim() === '';
@@ -167,6 +168,7 @@ function NameInput({ id, value, disabled, onCommit }: { id: string; value: strin
     <>
       <input
         id={id}
+        data-field={field}
         value={draft}
         disabled={disabled}
         maxLength={40}

@@ -31,7 +31,7 @@ export function DriversPanel({ config, advice, ...rest }: DriversPanelProps) {
   };
   return (
     <section aria-labelledby={`${id}-title`} className="space-y-3">
-      <div id={id} tabIndex={-1} data-flash-target className="flex flex-wrap items-end justify-between gap-2 rounded-md data-[flash]:ring-2 data-[flash]:ring-accent">
+      <div id={id} data-field="wiring.drivers" className="flex flex-wrap items-end justify-between gap-2 rounded-md">
         <div>
           <h2 id={`${id}-title`} className="text-lg font-semibold text-ink">
             Motor drivers

@@ -3,6 +3,8 @@ import { cx } from '@/components/ui/cx';
 
 export interface NumberFieldProps {
   id: string;
+  /** The configuration path it edits, as `data-field`, so a problem's link can lead here. */
+  field?: string;
   label: string;
   value: number | null;
   onCommit: (value: number | null) => void;
@@ -20,7 +22,7 @@ export interface NumberFieldProps {
  * A number typed freely: the draft stays as typed and only a valid value reaches the
  * configuration, so the layout does not jump and half-typed numbers are not saved.
  */
-export function NumberField({ id, label, value, onCommit, min, max, unit, placeholder, integer = false, disabled, className }: NumberFieldProps) {
+export function NumberField({ id, field, label, value, onCommit, min, max, unit, placeholder, integer = false, disabled, className }: NumberFieldProps) {
   const [draft, setDraft] = useState(value === null ? '' : String(value));
   const [error, setError] = useState<string | null>(null);
 
@@ -52,6 +54,7 @@ export function NumberField({ id, label, value, onCommit, min, max, unit, placeh
       <div className="flex items-center gap-1.5">
         <input
           id={id}
+          data-field={field}
           inputMode="decimal"
           value={draft}
           placeholder={placeholder}

@@ -4,7 +4,7 @@ import { cx } from '@/components/ui/cx';
 import { isRoleLit, useHighlight } from '../hooks/wiring-highlight';
 import type { PinChoice, PinChoices } from '../lib/pin-choices';
 import { pinName } from '../lib/pin-words';
-import { fieldDomId } from '../lib/wiring-problems';
+import { fieldDomId, roleFieldKey } from '../lib/wiring-problems';
 import { LockToggle } from './lock-toggle';
 import { ProblemLine } from './severity-icon';
 
@@ -35,9 +35,11 @@ export function PinPicker({ demand, label, choices, problems, canEdit, onPin, on
   const worst = problems.find((p) => p.severity === 'error') ?? problems[0];
   const enter = () => setHighlight({ side: demand.side, pin: demand.pin, roleKey: demand.key });
   const leave = () => setHighlight(null);
+  // The closed list cuts a long choice off at its width; the whole text shows on hover.
+  const chosen = choices.suits.find((c) => c.pin.id === demand.pin) ?? choices.others.find((c) => c.pin.id === demand.pin);
+  const chosenText = chosen ? (choices.suits.includes(chosen) ? suitText(chosen) : otherText(chosen)) : undefined;
   return (
     <div
-      data-flash-target
       data-role={demand.key}
       data-lit={lit || undefined}
       onMouseEnter={enter}
@@ -45,7 +47,7 @@ export function PinPicker({ demand, label, choices, problems, canEdit, onPin, on
       onFocus={enter}
       onBlur={leave}
       className={cx(
-        'rounded-md px-2 py-1.5 transition-colors data-[flash]:ring-2 data-[flash]:ring-accent',
+        'rounded-md px-2 py-1.5 transition-colors',
         lit ? 'bg-accent-soft/70' : worst?.severity === 'error' ? 'bg-error-soft/40' : worst ? 'bg-warn-soft/40' : '',
       )}
     >
@@ -56,6 +58,8 @@ export function PinPicker({ demand, label, choices, problems, canEdit, onPin, on
         </label>
         <select
           id={id}
+          data-field={roleFieldKey(demand)}
+          title={chosenText}
           value={demand.pin ?? ''}
           disabled={!canEdit}
           aria-invalid={worst?.severity === 'error' || undefined}

@@ -1,6 +1,7 @@
 import { formatHz } from '@shared/boards/pwm-timing';
 import type { DriverPwmAdvice } from '@shared/pins/pwm-advice';
 import { Button } from '@/components/ui/button';
+import { pathKey } from '@shared/history/field-path';
 import { fieldDomId } from '../lib/wiring-problems';
 import { NumberField } from './number-field';
 
@@ -16,10 +17,11 @@ export interface PwmFrequencyFieldProps {
 export function PwmFrequencyField({ driverIndex, value, advice, canEdit, onChange }: PwmFrequencyFieldProps) {
   const path = ['wiring', 'drivers', driverIndex, 'pwmFrequencyHz'];
   const id = fieldDomId(path);
+  const field = pathKey(path);
   const name = `${id}-mode`;
   if (advice.maxHz === null) {
     return (
-      <div id={id} tabIndex={-1} data-flash-target className="rounded-md data-[flash]:ring-2 data-[flash]:ring-accent">
+      <div id={id} data-field={field} className="rounded-md">
         <p className="text-sm font-semibold text-ink-soft">PWM frequency</p>
         <p className="text-sm text-ink-muted">{advice.suggestion}</p>
       </div>
@@ -28,7 +30,7 @@ export function PwmFrequencyField({ driverIndex, value, advice, canEdit, onChang
   const suggested = advice.suggestedHz;
   const running = runningWords(advice);
   return (
-    <fieldset data-flash-target className="rounded-md data-[flash]:ring-2 data-[flash]:ring-accent">
+    <fieldset data-field={value === null ? field : undefined} className="rounded-md">
       <legend className="text-sm font-semibold text-ink-soft">PWM frequency</legend>
       <div className="mt-1 flex flex-wrap items-end gap-x-4 gap-y-2">
         <label className="flex h-8 items-center gap-1.5 text-sm">
@@ -39,8 +41,7 @@ export function PwmFrequencyField({ driverIndex, value, advice, canEdit, onChang
           <input type="radio" name={name} checked={value !== null} disabled={!canEdit} onChange={() => onChange(suggested ?? 20_000)} className="accent-accent" />
           Set a frequency
         </label>
-        {value !== null && <NumberField id={id} label="Frequency" value={value} onCommit={(hz) => hz !== null && onChange(hz)} min={50} max={100_000} unit="Hz" integer disabled={!canEdit} className="[&>label]:sr-only" />}
-        {value === null && <span id={id} tabIndex={-1} className="sr-only">Board default frequency</span>}
+        {value !== null && <NumberField id={id} field={field} label="Frequency" value={value} onCommit={(hz) => hz !== null && onChange(hz)} min={50} max={100_000} unit="Hz" integer disabled={!canEdit} className="[&>label]:sr-only" />}
       </div>
       <div className="mt-2 rounded-md border border-rule bg-paper px-3 py-2 text-sm">
         <div className="flex flex-wrap items-start justify-between gap-2">

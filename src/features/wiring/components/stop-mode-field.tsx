@@ -12,7 +12,7 @@ export function StopModeField({ driverIndex, driver, canEdit, onChange }: { driv
   const ways = DRIVER_KINDS[driver.kind].stopModes;
   const id = fieldDomId(['wiring', 'drivers', driverIndex, 'stopMode']);
   return (
-    <fieldset id={id} tabIndex={-1} data-flash-target className="rounded-md data-[flash]:ring-2 data-[flash]:ring-accent">
+    <fieldset id={id} data-field={`wiring.drivers.${driverIndex}.stopMode`} className="rounded-md">
       <legend className="text-sm font-semibold text-ink-soft">At zero command</legend>
       <div className="mt-1 space-y-1.5">
         {(['brake', 'coast'] as const).map((mode) => {

@@ -1,12 +1,13 @@
 import type { Problem } from '@shared/problems/problem';
 import { useHighlight } from '../hooks/wiring-highlight';
-import { focusProblemField } from '../lib/focus-field';
-import { isRemoteProblem } from '../lib/wiring-problems';
+import { useShowField } from '../hooks/use-show-field';
+import { isRemoteProblem, wiringFieldFor } from '../lib/wiring-problems';
 import { SeverityIcon } from './severity-icon';
 
 /** The section's problems with their hints; each leads to the field it is about. */
 export function WiringProblemList({ problems }: { problems: Problem[] }) {
   const { setHighlight } = useHighlight();
+  const showField = useShowField();
   const errors = problems.filter((p) => p.severity === 'error').length;
   const warnings = problems.length - errors;
   if (problems.length === 0) {
@@ -21,7 +22,7 @@ export function WiringProblemList({ problems }: { problems: Problem[] }) {
     );
   }
   const show = (p: Problem) => {
-    focusProblemField(p.path);
+    showField(wiringFieldFor(p.path));
     if (p.pins[0]) setHighlight({ side: isRemoteProblem(p) ? 'remote' : 'robot', pin: p.pins[0], roleKey: null });
   };
   return (

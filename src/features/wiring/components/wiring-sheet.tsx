@@ -4,6 +4,7 @@ import { collectDemands } from '@shared/pins/pin-demands';
 import { powerAdvice } from '@shared/power/power-advice';
 import { robotProblems } from '@shared/problems/robot-problems';
 import type { RevisionDetail } from '@shared/schemas/robots';
+import { cx } from '@/components/ui/cx';
 import { formatDate, formatDateTime } from '@/lib/format';
 import { isWiringProblem } from '../lib/wiring-problems';
 import { sheetPinRows } from '../lib/sheet-model';
@@ -35,6 +36,8 @@ export function WiringSheet({ robotName, teamName, revision, photoUrl, printedAt
     .filter((d) => d.required && d.pin === null)
     .map((d) => d.label);
   const others = open.filter((p) => p.code !== 'pin-missing');
+  // Brick red only when something is wrong; warnings alone get the amber box.
+  const hasErrors = missing.length > 0 || others.some((p) => p.severity === 'error');
   const hasRemote = config.controls.source === 'nrf24';
   const advice = powerAdvice(config);
   return (
@@ -70,8 +73,8 @@ export function WiringSheet({ robotName, teamName, revision, photoUrl, printedAt
         </figure>
       )}
       {open.length > 0 && (
-        <section aria-labelledby="sheet-open-title" className="mt-3 rounded border-2 border-error px-3 py-2 print:mt-2 print:py-1">
-          <h2 id="sheet-open-title" className="text-sm font-bold text-error-strong">
+        <section aria-labelledby="sheet-open-title" className={cx('mt-3 rounded border-2 px-3 py-2 print:mt-2 print:py-1', hasErrors ? 'border-error' : 'border-warn')}>
+          <h2 id="sheet-open-title" className={cx('text-sm font-bold', hasErrors ? 'text-error-strong' : 'text-warn-strong')}>
             This revision has {open.length} open wiring problem{open.length === 1 ? '' : 's'}: check before wiring
           </h2>
           <ul className="mt-1 list-disc pl-5 text-[13px]">

@@ -1,6 +1,7 @@
 import type { PinDemand } from '@shared/pins/pin-demands';
 import { PIN_PROBLEM_CODES } from '@shared/pins/problem-codes';
 import type { Problem } from '@shared/problems/problem';
+import { pathKey } from '@shared/history/field-path';
 
 type Path = Problem['path'];
 
@@ -34,21 +35,29 @@ export function isRemoteProblem(problem: Problem): boolean {
   return a === 'controls' && b === 'link' && c === 'remotePins';
 }
 
-/** The DOM id of the field a configuration path points at, so a problem can lead to it. */
+/** The DOM id of a field, for its label (`htmlFor`) and descriptions. */
 export function fieldDomId(path: Path): string {
   return `wiring-field-${path.map((part) => String(part).replace(/[^A-Za-z0-9_-]/g, '_')).join('-')}`;
 }
 
 /**
- * The field to focus for a problem: the element for its path, else for the longest part of the
- * path that has one (a driver's card for a driver-wide problem), else the drivers panel. A path
- * into the controls (the input source) leads to the input's pins, shown here.
+ * The `data-field` of a role's pin picker: the path of its pin assignment
+ * (`wiring.drivers.0.pins.a.pwm`), so a problem about the pin (`….a.pwm.pin`) or its lock finds it
+ * through the editor's field links, which try shorter paths until one is on screen.
  */
-export function targetFor(path: Path, exists: (id: string) => boolean): string {
-  if (path[0] === 'controls' && path[1] !== 'link' && exists(fieldDomId(['wiring', 'inputPins']))) return fieldDomId(['wiring', 'inputPins']);
-  for (let n = path.length; n > 0; n -= 1) {
-    const id = fieldDomId(path.slice(0, n));
-    if (exists(id)) return id;
-  }
-  return fieldDomId(['wiring', 'drivers']);
+export function roleFieldKey(demand: Pick<PinDemand, 'path'>): string {
+  const path = demand.path.at(-1) === 'pin' ? demand.path.slice(0, -1) : demand.path;
+  return pathKey(path);
+}
+
+/**
+ * Where a problem listed in the Wiring section leads inside the section: its own field for a
+ * wiring path or a remote pin, the input's pins for a problem about the input source, else the
+ * drivers (a motor that is on no driver channel).
+ */
+export function wiringFieldFor(path: Path): string {
+  const [a, b] = path;
+  if (a === 'wiring' || (a === 'controls' && b === 'link')) return pathKey(path);
+  if (a === 'controls') return 'wiring.inputPins';
+  return 'wiring.drivers';
 }

@@ -1,8 +1,8 @@
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { render } from '@testing-library/react';
-import { createMemoryRouter, RouterProvider } from 'react-router';
+import { createMemoryRouter, RouterProvider, useParams } from 'react-router';
 import { vi } from 'vitest';
-import { RobotEditor } from '@/features/robot-editor/components/shell/robot-editor';
+import { RobotEditor, type RobotEditorProps } from '@/features/robot-editor/components/shell/robot-editor';
 import type { SectionRegistry } from '@/features/robot-editor/lib/editor-sections';
 import { SafetySection } from '@/features/robot-editor/sections/safety-section';
 import type { RevisionDetail, RobotDetail, SaveRevisionInput } from '@shared/schemas/robots';
@@ -31,7 +31,7 @@ export function robotDetail(overrides: { role?: RobotDetail['robot']['role']; he
   };
 }
 
-/** The editor at `/teams/team-1/robots/robot-1/<section>` in a memory router, with the Safety section. */
+/** The editor at `/teams/team-1/robots/robot-1/<section>` in a memory router, with the Safety section unless told. */
 export function renderEditor(
   detail: RobotDetail,
   options: { save?: (input: SaveRevisionInput) => Promise<RevisionDetail>; revisions?: Record<number, RevisionDetail>; path?: string; sections?: SectionRegistry } = {},
@@ -39,22 +39,24 @@ export function renderEditor(
   const save = vi.fn(options.save ?? (async (input: SaveRevisionInput) => revisionDetail(detail.head.number + 1, input.config as RevisionDetail['config'], input.message)));
   const revisions = options.revisions ?? {};
   const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+  // The section follows the path, as in the app, so links between sections can be followed.
+  function EditorAt() {
+    const { section = 'safety' } = useParams();
+    return (
+      <RobotEditor
+        detail={detail}
+        section={section as RobotEditorProps['section']}
+        sections={options.sections ?? { safety: SafetySection }}
+        basePath="/teams/team-1/robots/robot-1"
+        save={save}
+        revisionQuery={(n) => ({ queryKey: ['revision', n], queryFn: async () => revisions[n] })}
+        onStale={() => {}}
+      />
+    );
+  }
   const router = createMemoryRouter(
     [
-      {
-        path: '/teams/:teamId/robots/:robotId/:section',
-        element: (
-          <RobotEditor
-            detail={detail}
-            section="safety"
-            sections={options.sections ?? { safety: SafetySection }}
-            basePath="/teams/team-1/robots/robot-1"
-            save={save}
-            revisionQuery={(n) => ({ queryKey: ['revision', n], queryFn: async () => revisions[n] })}
-            onStale={() => {}}
-          />
-        ),
-      },
+      { path: '/teams/:teamId/robots/:robotId/:section', element: <EditorAt /> },
       { path: '/teams/:teamId', element: <p>Team page</p> },
     ],
     { initialEntries: [options.path ?? '/teams/team-1/robots/robot-1/safety'] },

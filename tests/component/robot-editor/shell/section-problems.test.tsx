@@ -24,6 +24,8 @@ describe('which section shows a field', () => {
     [['motors', 1, 'ratedVoltage'], 'chassis'],
     [['controls', 'axes', 'yaw', 'channel'], 'controls'],
     [['wiring', 'drivers', 0, 'pins', 'a.pwm'], 'wiring'],
+    [['controls', 'link', 'remotePins', 'ce', 'pin'], 'wiring'],
+    [['controls', 'link', 'remoteBoard'], 'controls'],
     [['safety', 'failsafeTimeoutMs'], 'safety'],
     [['power', 'cells'], 'safety'],
     [['firmware', 'sketchName'], 'firmware'],
@@ -86,6 +88,21 @@ describe('links from a problem to its field', () => {
     expect(within(item).getByText('Failsafe too slow')).toBeTruthy();
     expect(within(item).getByText('Do something about it')).toBeTruthy();
     expect(within(item).getByRole('link', { name: 'Show field' }).getAttribute('href')).toBe('/teams/t/robots/r/safety?field=safety.failsafeTimeoutMs');
+  });
+
+  it('tells the links of several problems apart by the problem each is about', () => {
+    render(
+      <MemoryRouter initialEntries={['/teams/t/robots/r/problems']}>
+        <Routes>
+          <Route
+            path="/teams/:teamId/robots/:robotId/:section"
+            element={<ProblemList problems={[problem('error', ['safety', 'failsafeTimeoutMs'], 'Failsafe too slow'), problem('warning', ['safety', 'rampPerSecond'], 'Ramp too steep')]} available={['safety']} />}
+          />
+        </Routes>
+      </MemoryRouter>,
+    );
+    expect(screen.getByRole('link', { name: 'Show field', description: 'Warning: Ramp too steep' }).getAttribute('href')).toBe('/teams/t/robots/r/safety?field=safety.rampPerSecond');
+    expect(screen.getByRole('link', { name: 'Show field', description: 'Error: Failsafe too slow' })).toBeTruthy();
   });
 });
 

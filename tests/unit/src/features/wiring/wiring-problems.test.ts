@@ -3,7 +3,7 @@ import { checkPinPlan } from '@shared/pins/check-pins';
 import { collectDemands } from '@shared/pins/pin-demands';
 import { robotProblems } from '@shared/problems/robot-problems';
 import { describePinChange, pinChanges } from '@/features/wiring/lib/pin-changes';
-import { fieldDomId, isWiringProblem, problemsForRole, targetFor } from '@/features/wiring/lib/wiring-problems';
+import { isWiringProblem, problemsForRole, roleFieldKey, wiringFieldFor } from '@/features/wiring/lib/wiring-problems';
 import { unoPlan } from '../../../../fixtures/pin-plans';
 import { buildConfig, withPins } from '../../../../fixtures/robot-config-factory';
 
@@ -23,10 +23,19 @@ describe('wiring problems', () => {
     expect(problemsForRole(problems, demand).map((p) => p.code)).toEqual(['pin-missing']);
   });
 
-  it('finds the closest field on screen for a problem’s path', () => {
-    const onScreen = new Set([fieldDomId(['wiring', 'drivers', 1]), fieldDomId(['wiring', 'drivers'])]);
-    expect(targetFor(['wiring', 'drivers', 1, 'motors', 0], (id) => onScreen.has(id))).toBe(fieldDomId(['wiring', 'drivers', 1]));
-    expect(targetFor(['motors', 2, 'name'], (id) => onScreen.has(id))).toBe(fieldDomId(['wiring', 'drivers']));
+  it('names a role’s pin picker by the path of its pin assignment', () => {
+    const demands = collectDemands(unoPlan());
+    const key = (k: string) => roleFieldKey(demands.find((d) => d.key === k)!);
+    expect(key('driver:0:a.pwm')).toBe('wiring.drivers.0.pins.a.pwm');
+    expect(key('input:ppm')).toBe('wiring.inputPins.ppm');
+    expect(key('status-led')).toBe('wiring.statusLed');
+  });
+
+  it('leads a problem listed in Wiring to a field the section shows', () => {
+    expect(wiringFieldFor(['wiring', 'drivers', 1, 'pins', 'a.pwm', 'pin'])).toBe('wiring.drivers.1.pins.a.pwm.pin');
+    expect(wiringFieldFor(['controls', 'link', 'remotePins', 'ce', 'pin'])).toBe('controls.link.remotePins.ce.pin');
+    expect(wiringFieldFor(['controls', 'source'])).toBe('wiring.inputPins');
+    expect(wiringFieldFor(['motors', 2, 'name'])).toBe('wiring.drivers');
   });
 });
 
