@@ -52,3 +52,39 @@ export function withValueAt<T>(root: T, path: readonly (string | number)[], valu
   else base[String(key)] = next;
   return base as T;
 }
+
+/** One difference between two JSON values; `undefined` means absent on that side. */
+export interface FieldChange {
+  path: FieldPath;
+  before: unknown;
+  after: unknown;
+}
+
+function objectChanges(a: Record<string, unknown>, b: Record<string, unknown>, path: FieldPath): FieldChange[] {
+  const keys = [...Object.keys(a), ...Object.keys(b).filter((k) => !(k in a))];
+  return keys.flatMap((key) => {
+    // A key on one side only is one change of its whole value (a pin role, a layout parameter).
+    if (!(key in b) || !(key in a)) return deepEqual(a[key], b[key]) ? [] : [{ path: [...path, key], before: a[key], after: b[key] }];
+    return fieldChanges(a[key], b[key], [...path, key]);
+  });
+}
+
+const isPrimitive = (value: unknown) => value === null || typeof value !== 'object';
+
+/**
+ * Every field that differs from `a` (before) to `b` (after), in document order. Objects are
+ * compared key by key; lists of parts (wheels, motors, channels, drivers) item by item, an item
+ * on one side only being one change; a list of plain values (rates, a driver's motors) is one
+ * value. Works on any JSON-like value, not only a whole configuration.
+ */
+export function fieldChanges(a: unknown, b: unknown, path: FieldPath = []): FieldChange[] {
+  if (deepEqual(a, b)) return [];
+  if (isPlainObject(a) && isPlainObject(b)) return objectChanges(a, b, path);
+  if (Array.isArray(a) && Array.isArray(b) && ![...a, ...b].every(isPrimitive)) {
+    const length = Math.max(a.length, b.length);
+    return Array.from({ length }, (_, i) =>
+      i < a.length && i < b.length ? fieldChanges(a[i], b[i], [...path, i]) : [{ path: [...path, i], before: a[i], after: b[i] }],
+    ).flat();
+  }
+  return [{ path, before: a, after: b }];
+}

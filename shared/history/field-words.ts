@@ -1,100 +1,130 @@
+import { BOARDS } from '../boards/boards';
+import { DRIVER_KINDS } from '../drivers/driver-kinds';
+import { INPUT_SOURCES } from '../inputs/input-sources';
+import { LAYOUT_LABELS } from '../kinematics/presets';
+import type { BoardId, DriveLayoutId, DriverKindId, InputSourceId } from '../schemas/ids';
+
 /**
- * Names of configuration fields in words, with their units, for diffs, conflict dialogs and
- * history. Keys are the field names of RobotConfigSchema; an unknown key is spelled out from
- * its camelCase name, so a field added later still reads sensibly.
+ * Names of configuration fields in words and how their values read, for the editor's change
+ * list, the conflict dialog, table errors and History. Keys are the field names of
+ * RobotConfigSchema; an unknown key is spelled out from its camelCase name and its unit read
+ * from its ending, so a field added later (or a starter layout's parameter) still reads sensibly.
  */
-export const FIELD_WORDS: Record<string, { label: string; unit?: string }> = {
-  schemaVersion: { label: 'file format version' },
-  name: { label: 'name' },
-  chassis: { label: 'chassis' },
-  motors: { label: 'motors' },
-  controls: { label: 'controls' },
-  wiring: { label: 'wiring' },
-  safety: { label: 'safety' },
-  power: { label: 'power' },
-  firmware: { label: 'firmware' },
+type Format = (value: unknown) => string;
+
+const num = (value: number) => (Number.isFinite(value) ? String(Math.round(value * 10000) / 10000) : 'not a number');
+
+/**
+ * "29 mm", "45°", "80 %": a space between number and unit, none before the degree sign
+ * (The International System of Units, SI Brochure 9th ed., "Formatting the value of a
+ * quantity"; section from memory).
+ */
+export function quantityWords(value: number, unit: string): string {
+  if (!Number.isFinite(value)) return num(value);
+  return unit === '°' ? `${num(value)}°` : `${num(value)} ${unit}`;
+}
+
+const unit =
+  (suffix: string): Format =>
+  (v) =>
+    typeof v === 'number' ? quantityWords(v, suffix) : plainWords(v);
+const fraction: Format = (v) => (typeof v === 'number' ? quantityWords(v * 100, '%') : plainWords(v));
+const onOff: Format = (v) => (v === true ? 'on' : v === false ? 'off' : plainWords(v));
+const orNone =
+  (none: string, format: Format): Format =>
+  (v) =>
+    v === null ? none : format(v);
+const named =
+  (names: Record<string, string>): Format =>
+  (v) =>
+    typeof v === 'string' ? (names[v] ?? v) : plainWords(v);
+
+/** Any value in words: lists joined by commas, objects as "field value" pairs in words. */
+export function plainWords(value: unknown): string {
+  if (value === undefined) return 'not set';
+  if (value === null) return 'none';
+  if (typeof value === 'boolean') return onOff(value);
+  if (typeof value === 'number') return num(value);
+  if (typeof value === 'string') return value === '' ? 'empty' : value;
+  if (Array.isArray(value)) return value.length === 0 ? 'none' : value.map(plainWords).join(', ');
+  const entries = Object.entries(value as Record<string, unknown>).filter(([, v]) => v !== undefined);
+  return entries.length === 0 ? 'empty' : entries.map(([k, v]) => `${fieldName(k)} ${formatValue(k, v)}`).join(', ');
+}
+
+const boardNames = Object.fromEntries(Object.entries(BOARDS).map(([id, b]) => [id, b.name])) as Record<BoardId, string>;
+const sourceNames = Object.fromEntries(Object.entries(INPUT_SOURCES).map(([id, s]) => [id, s.name])) as Record<InputSourceId, string>;
+const kindNames = Object.fromEntries(Object.entries(DRIVER_KINDS).map(([id, k]) => [id, k.name])) as Record<DriverKindId, string>;
+const layoutNames: Record<DriveLayoutId | 'custom', string> = { ...LAYOUT_LABELS, custom: 'Custom wheel table' };
+
+/** Field key → its name in words and how its values read; values of keys not listed read plainly. */
+const FIELDS: Record<string, [string, Format?]> = {
+  schemaVersion: ['file format version'],
+  name: ['name'],
   // Chassis
-  layout: { label: 'drive layout' },
-  params: { label: 'layout parameters' },
-  wheels: { label: 'wheels' },
-  kind: { label: 'kind' },
-  xMm: { label: 'x (ahead of centre)', unit: 'mm' },
-  yMm: { label: 'y (left of centre)', unit: 'mm' },
-  driveAngleDeg: { label: 'driving direction', unit: '°' },
-  rollerAngleDeg: { label: 'roller angle', unit: '°' },
-  radiusMm: { label: 'radius', unit: 'mm' },
-  motor: { label: 'motor' },
-  reversed: { label: 'reversed' },
-  maxRpm: { label: 'top speed', unit: 'rpm' },
-  startThreshold: { label: 'start threshold (duty)' },
-  stallCurrentA: { label: 'stall current', unit: 'A' },
-  ratedVoltage: { label: 'rated voltage', unit: 'V' },
+  layout: ['drive layout', named(layoutNames)],
+  params: ['layout parameters'],
+  kind: ['kind', named(kindNames)],
+  xMm: ['x (ahead of centre)', unit('mm')],
+  yMm: ['y (left of centre)', unit('mm')],
+  driveAngleDeg: ['driving direction', unit('°')],
+  rollerAngleDeg: ['roller angle', unit('°')],
+  radiusMm: ['radius', unit('mm')],
+  reversed: ['reversed', onOff],
+  maxRpm: ['top speed', unit('rpm')],
+  startThreshold: ['start threshold (duty)', fraction],
+  stallCurrentA: ['stall current', unit('A')],
+  ratedVoltage: ['rated voltage', unit('V')],
   // Controls
-  source: { label: 'input source' },
-  channels: { label: 'channels' },
-  number: { label: 'channel number' },
-  low: { label: 'low end' },
-  centre: { label: 'centre' },
-  high: { label: 'high end' },
-  axes: { label: 'stick map' },
-  forward: { label: 'forward' },
-  strafe: { label: 'strafe' },
-  yaw: { label: 'yaw' },
-  channel: { label: 'channel' },
-  reverse: { label: 'reverse' },
-  deadband: { label: 'deadband' },
-  expo: { label: 'expo' },
-  rate: { label: 'rate' },
-  rateSwitch: { label: 'rate switch' },
-  positions: { label: 'positions' },
-  rates: { label: 'rates' },
-  armingSwitch: { label: 'arming switch' },
-  armedWhen: { label: 'armed when' },
-  desaturation: { label: 'over-100 % handling' },
-  link: { label: '2.4 GHz link' },
-  rfChannel: { label: 'RF channel' },
-  dataRate: { label: 'data rate' },
-  address: { label: 'address' },
-  sendRateHz: { label: 'send rate', unit: 'Hz' },
-  remoteBoard: { label: 'remote board' },
-  remotePins: { label: 'remote pins' },
+  source: ['input source', named(sourceNames)],
+  number: ['channel number'],
+  low: ['low end'],
+  high: ['high end'],
+  axes: ['stick map'],
+  channel: ['channel', orNone('none', plainWords)],
+  reverse: ['reversed', onOff],
+  deadband: ['deadband', fraction],
+  expo: ['expo', fraction],
+  rate: ['rate', fraction],
+  rates: ['rates', (v) => (Array.isArray(v) ? v.map(fraction).join(', ') : plainWords(v))],
+  armedWhen: ['armed at the', (v) => `${plainWords(v)} end`],
+  desaturation: ['over-100 % handling', named({ scale: 'scale all motors down', clip: 'clip each motor' })],
+  link: ['2.4 GHz link'],
+  rfChannel: ['RF channel'],
+  dataRate: ['data rate', named({ '250k': '250 kbit/s', '1M': '1 Mbit/s', '2M': '2 Mbit/s' })],
+  sendRateHz: ['send rate', unit('Hz')],
+  remoteBoard: ['remote board', named(boardNames)],
   // Wiring
-  board: { label: 'board' },
-  drivers: { label: 'drivers' },
-  pins: { label: 'pins' },
-  pin: { label: 'pin' },
-  locked: { label: 'locked' },
-  inputPins: { label: 'input pins' },
-  statusLed: { label: 'status LED' },
-  benchTestPin: { label: 'bench-test pin' },
-  pwmFrequencyHz: { label: 'PWM frequency', unit: 'Hz' },
-  stopMode: { label: 'stop mode' },
-  continuousCurrentA: { label: 'continuous current', unit: 'A' },
-  peakCurrentA: { label: 'peak current', unit: 'A' },
+  board: ['board', named(boardNames)],
+  statusLed: ['status LED'],
+  benchTestPin: ['bench-test pin'],
+  pwmFrequencyHz: ['PWM frequency', orNone('board default', unit('Hz'))],
+  continuousCurrentA: ['continuous current', orNone('kind default', unit('A'))],
+  peakCurrentA: ['peak current', orNone('kind default', unit('A'))],
+  pin: ['pin', orNone('unassigned', plainWords)],
+  locked: ['locked', onOff],
   // Safety and power
-  failsafeTimeoutMs: { label: 'failsafe timeout', unit: 'ms' },
-  rampPerSecond: { label: 'ramp limit', unit: 'full scale/s' },
-  outputLimitPercent: { label: 'output limit', unit: '%' },
-  armingRequired: { label: 'arming required' },
-  reverseDwellMs: { label: 'reverse dwell', unit: 'ms' },
-  startupValidFrames: { label: 'good frames before start' },
-  centreTolerance: { label: 'centre tolerance' },
-  chemistry: { label: 'battery chemistry' },
-  cells: { label: 'cells in series' },
-  capacityMah: { label: 'capacity', unit: 'mAh' },
-  dischargeC: { label: 'discharge rating', unit: 'C' },
-  logicSupply: { label: 'logic supply' },
+  failsafeTimeoutMs: ['failsafe timeout', unit('ms')],
+  rampPerSecond: ['ramp limit', unit('full scale/s')],
+  outputLimitPercent: ['output limit', unit('%')],
+  armingRequired: ['arming required', onOff],
+  reverseDwellMs: ['reverse dwell', unit('ms')],
+  startupValidFrames: ['valid frames before start'],
+  centreTolerance: ['centre tolerance', fraction],
+  chemistry: ['battery chemistry'],
+  cells: ['cells in series'],
+  capacityMah: ['capacity', unit('mAh')],
+  dischargeC: ['discharge rating', unit('C')],
   // Firmware
-  sketchName: { label: 'sketch name' },
-  serialDiagnostics: { label: 'serial diagnostics' },
-  serialBaud: { label: 'serial speed', unit: 'baud' },
-  diagnosticsIntervalMs: { label: 'diagnostics interval', unit: 'ms' },
-  benchTestDuty: { label: 'bench-test duty' },
-  benchTestMs: { label: 'bench-test time per motor', unit: 'ms' },
+  sketchName: ['sketch name', orNone('from the robot name', plainWords)],
+  serialDiagnostics: ['serial diagnostics', onOff],
+  serialBaud: ['serial speed', unit('baud')],
+  diagnosticsIntervalMs: ['diagnostics interval', unit('ms')],
+  benchTestDuty: ['bench-test duty', fraction],
+  benchTestMs: ['bench-test time per motor', unit('ms')],
 };
 
-/** "pwmFrequencyHz" → "pwm frequency hz" for keys not in the table. */
-export function spellKey(key: string): string {
+/** "pwmFrequencyHz" → "pwm frequency hz", for keys without a listed name. */
+function spellKey(key: string): string {
   return key
     .replace(/([a-z0-9])([A-Z])/g, '$1 $2')
     .replace(/[-_]/g, ' ')
@@ -110,9 +140,22 @@ const UNIT_SUFFIXES: [RegExp, string][] = [
   [/Rpm$/, 'rpm'],
 ];
 
-export function fieldWords(key: string): { label: string; unit?: string } {
-  if (FIELD_WORDS[key]) return FIELD_WORDS[key];
+/** A field's name in words and how its values read. */
+function wordsFor(key: string): [string, Format] {
+  const listed = FIELDS[key];
+  if (listed) return [listed[0], listed[1] ?? plainWords];
   const suffix = UNIT_SUFFIXES.find(([pattern]) => pattern.test(key));
-  if (suffix) return { label: spellKey(key.replace(suffix[0], '')), unit: suffix[1] };
-  return { label: spellKey(key) };
+  if (suffix) return [spellKey(key.replace(suffix[0], '')), unit(suffix[1])];
+  return [spellKey(key), plainWords];
+}
+
+/** "failsafeTimeoutMs" → "failsafe timeout"; "wheelbaseMm" → "wheelbase". */
+export function fieldName(key: string): string {
+  return wordsFor(key)[0];
+}
+
+/** A field's value in words: "250 ms", "on", "Arduino Mega 2560", "unassigned". */
+export function formatValue(key: string, value: unknown): string {
+  if (value === undefined) return 'not set';
+  return wordsFor(key)[1](value);
 }

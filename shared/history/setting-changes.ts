@@ -1,15 +1,15 @@
 import { driverPinRoles } from '../drivers/driver-kinds';
 import { inputPinRoles, remotePinRoles } from '../inputs/input-sources';
 import type { RobotConfig } from '../schemas/robot-config';
-import { jsonChanges, type JsonPath } from './json-changes';
-import { fieldName, formatValue, plain } from './setting-words';
+import { fieldName, formatValue, plainWords } from './field-words';
+import { fieldChanges, isPlainObject, type FieldPath } from './field-path';
 
 export type SettingSection = 'Robot' | 'Chassis' | 'Motors' | 'Controls' | 'Wiring' | 'Safety' | 'Power' | 'Firmware';
 
 /** One setting that differs between two configurations, in words. */
 export interface SettingChange {
   /** Path in the configuration, e.g. ['chassis', 'wheels', 0, 'reversed']. */
-  path: JsonPath;
+  path: FieldPath;
   section: SettingSection;
   /** What the setting belongs to: "Front left wheel", "Forward axis", "Safety". */
   subject: string;
@@ -40,6 +40,8 @@ function itemLabel(name: unknown, noun: string, index: number, alsoMeans: string
 
 type Side = Partial<RobotConfig> & Record<string, any>;
 
+const side = (value: unknown): Side => (isPlainObject(value) ? value : {});
+
 function pick<T>(a: Side, b: Side, get: (c: Side) => T | undefined): T | undefined {
   return get(b) ?? get(a);
 }
@@ -48,9 +50,9 @@ function roleLabel(roles: { id: string; label: string }[], id: string): string {
   return roles.find((r) => r.id === id)?.label ?? id;
 }
 
-const pinKey = (rest: JsonPath): Pick<Located, 'key' | 'prefix'> => ({ key: rest.length ? String(rest[rest.length - 1]) : null });
+const pinKey = (rest: FieldPath): Pick<Located, 'key' | 'prefix'> => ({ key: rest.length ? String(rest[rest.length - 1]) : null });
 
-function locateWiring(path: JsonPath, a: Side, b: Side): Located {
+function locateWiring(path: FieldPath, a: Side, b: Side): Located {
   const [, part, index, sub, role, ...rest] = path;
   if (part === 'drivers' && typeof index === 'number') {
     const driver = pick(a, b, (c) => c.wiring?.drivers?.[index]);
@@ -64,7 +66,7 @@ function locateWiring(path: JsonPath, a: Side, b: Side): Located {
   if (part === 'inputPins' && index !== undefined) {
     const source = pick(a, b, (c) => c.controls);
     const roles = source ? inputPinRoles(source.source, source.channels.map((ch: { number: number }) => ch.number)) : [];
-    return { section: 'Wiring', subject: 'Input', ...pinKey([sub, role, ...rest].filter((x) => x !== undefined) as JsonPath), prefix: `${roleLabel(roles, String(index))} pin` };
+    return { section: 'Wiring', subject: 'Input', ...pinKey([sub, role, ...rest].filter((x) => x !== undefined) as FieldPath), prefix: `${roleLabel(roles, String(index))} pin` };
   }
   if (part === 'statusLed' || part === 'benchTestPin') {
     const subject = part === 'statusLed' ? 'Status LED' : 'Bench test switch';
@@ -73,7 +75,7 @@ function locateWiring(path: JsonPath, a: Side, b: Side): Located {
   return { section: 'Wiring', subject: 'Wiring', key: part === undefined ? null : String(part) };
 }
 
-function locateControls(path: JsonPath, a: Side, b: Side): Located {
+function locateControls(path: FieldPath, a: Side, b: Side): Located {
   const [, part, index, key, ...rest] = path;
   if (part === 'channels' && typeof index === 'number') {
     const channel = pick(a, b, (c) => c.controls?.channels?.[index]);
@@ -98,7 +100,7 @@ function locateControls(path: JsonPath, a: Side, b: Side): Located {
   return { section: 'Controls', subject: 'Controls', key: part === undefined ? null : String(part) };
 }
 
-function locate(path: JsonPath, a: Side, b: Side): Located {
+function locate(path: FieldPath, a: Side, b: Side): Located {
   const [top, part, index, key] = path;
   switch (top) {
     case 'chassis': {
@@ -125,34 +127,29 @@ function locate(path: JsonPath, a: Side, b: Side): Located {
       return { section, subject: section, key: part === undefined ? null : String(part) };
     }
     default:
-      return { section: 'Robot', subject: 'Robot', key: top === undefined ? null : String(top) };
+      // The robot's own fields (name), or a path of some other JSON value: named by its last key.
+      return { section: 'Robot', subject: 'Robot', key: top === undefined ? null : String(path[path.length - 1]) };
   }
 }
 
 function sentence(change: Omit<SettingChange, 'text' | 'path' | 'section'>): string {
   if (change.field === '') return `${change.subject} ${change.kind}`;
-  if (change.kind === 'added') return `${change.subject}: ${change.field ? `${change.field} ` : ''}added${change.to ? ` (${change.to})` : ''}`;
-  if (change.kind === 'removed') return `${change.subject}: ${change.field ? `${change.field} ` : ''}removed${change.from ? ` (was ${change.from})` : ''}`;
+  if (change.kind === 'added') return `${change.subject}: ${change.field} added${change.to ? ` (${change.to})` : ''}`;
+  if (change.kind === 'removed') return `${change.subject}: ${change.field} removed${change.from ? ` (was ${change.from})` : ''}`;
   return `${change.subject}: ${change.field} ${change.from} → ${change.to}`;
 }
 
-/**
- * Every setting that differs from `from` to `to`, in configuration order, each with a sentence
- * a builder reads at a glance: "Front left wheel: reversed off → on", "Safety: failsafe
- * timeout 250 ms → 150 ms", "Front driver: A PWM pin D5 → D6".
- */
-export function settingChanges(from: RobotConfig | Side, to: RobotConfig | Side): SettingChange[] {
-  return jsonChanges(from, to).map(({ path, from: before, to: after }) => {
-    const where = locate(path, from as Side, to as Side);
-    const kind = before === undefined ? 'added' : after === undefined ? 'removed' : 'changed';
-    const wholeItem = where.key === null;
-    // A pin's own field reads as the role's pin ("A PWM pin"), not "A PWM pin pin".
-    const keyName = wholeItem || (where.prefix?.endsWith(' pin') && where.key === 'pin') ? '' : fieldName(where.key!);
-    const field = [where.prefix, keyName].filter(Boolean).join(' ');
-    const show = (value: unknown) => (value === undefined ? null : wholeItem ? plainItem(value) : formatValue(where.key!, value));
-    const change = { subject: where.subject, field, kind, from: show(before), to: show(after) } as const;
-    return { path, section: where.section, ...change, text: sentence(change) };
-  });
+/** A setting's name in words: what it belongs to, and the field ("A PWM pin", "" for a whole item). */
+function placeWords(path: FieldPath, a: Side, b: Side): Located & { field: string } {
+  const where = locate(path, a, b);
+  // A pin's own field reads as the role's pin ("A PWM pin"), not "A PWM pin pin".
+  const keyName = where.key === null || (where.prefix?.endsWith(' pin') && where.key === 'pin') ? '' : fieldName(where.key);
+  return { ...where, field: [where.prefix, keyName].filter(Boolean).join(' ') };
+}
+
+function valueIn(where: Located, value: unknown): string | null {
+  if (value === undefined) return null;
+  return where.key === null ? plainItem(value) : formatValue(where.key, value);
 }
 
 /** An added or removed item reads as its name (and kind) rather than every field. */
@@ -162,5 +159,32 @@ function plainItem(value: unknown): string {
     if ('pin' in item) return `${formatValue('pin', item.pin)}${item.locked ? ', locked' : ''}`;
     if (typeof item.name === 'string') return item.name;
   }
-  return plain(value);
+  return plainWords(value);
+}
+
+/**
+ * The value at `path` in words, as it reads in a change between `from` and `to` (null where
+ * absent): the conflict dialog shows the base revision's value this way.
+ */
+export function settingValueWords(path: FieldPath, value: unknown, from: unknown, to: unknown): string | null {
+  return valueIn(locate(path, side(from), side(to)), value);
+}
+
+/**
+ * Every setting that differs from `from` to `to`, in configuration order, each with a sentence
+ * a builder reads at a glance: "Front left wheel: reversed off → on", "Safety: failsafe
+ * timeout 250 ms → 150 ms", "Front driver: A PWM pin D5 → D6". Works on any JSON-like value.
+ */
+export function settingChanges(from: unknown, to: unknown): SettingChange[] {
+  return fieldChanges(from, to).map(({ path, before, after }) => {
+    const where = placeWords(path, side(from), side(to));
+    const kind = before === undefined ? 'added' : after === undefined ? 'removed' : 'changed';
+    const change = { subject: where.subject, field: where.field, kind, from: valueIn(where, before), to: valueIn(where, after) } as const;
+    return { path, section: where.section, ...change, text: sentence(change) };
+  });
+}
+
+/** A change's place on one line, for lists without section headings: "Chassis › Front left wheel › reversed". */
+export function changeLabel(change: Pick<SettingChange, 'section' | 'subject' | 'field'>): string {
+  return [change.section === change.subject ? null : change.section, change.subject, change.field].filter(Boolean).join(' › ');
 }

@@ -105,8 +105,8 @@ describe('building a robot in the editor', () => {
     // Save with a message.
     await page.getByRole('button', { name: 'Save…' }).click();
     const save = page.getByRole('dialog', { name: 'Save a new revision' });
-    await save.getByText('Chassis › layout parameters › wheel radius').waitFor();
-    await save.getByText('Chassis › wheel “Front right” › reversed').waitFor();
+    await save.getByText('Chassis › layout wheel radius').waitFor();
+    await save.getByText('Chassis › Front right wheel › reversed').waitFor();
     await save.getByLabel('What changed, and why?').fill('Bigger wheels, softer forward stick, horn channel');
     await screenshot(page, 'editor-save-dialog');
     await save.getByRole('button', { name: 'Save revision' }).click();

@@ -3,6 +3,8 @@ import { rebaseDraft, rebaseRows } from '@shared/history/rebase-draft';
 import { RobotConfigSchema } from '@shared/schemas/robot-config';
 import { robotConfig } from '../../../factories/robot-config';
 
+const channel = (number: number, name: string) => ({ number, name, low: 1000, centre: 1500, high: 2000 });
+
 /** A base revision, a newer revision by someone else, and my draft from the base. */
 function threeWay() {
   const base = robotConfig();
@@ -20,7 +22,7 @@ describe('rebaseRows', () => {
     const { base, theirs, mine } = threeWay();
     const rows = rebaseRows(base, theirs, mine);
     const byKey = Object.fromEntries(rows.map((r) => [r.key, r]));
-    expect(byKey['safety.failsafeTimeoutMs']).toMatchObject({ origin: 'theirs', suggested: 'theirs', beforeWords: '150 ms', afterWords: '250 ms' });
+    expect(byKey['safety.failsafeTimeoutMs']).toMatchObject({ origin: 'theirs', suggested: 'theirs', from: '150 ms', to: '250 ms' });
     expect(byKey['safety.rampPerSecond']).toMatchObject({ origin: 'mine', suggested: 'mine' });
     expect(byKey['chassis.wheels.0.radiusMm']).toMatchObject({ origin: 'both', suggested: 'mine', baseWords: '30 mm' });
   });
@@ -48,7 +50,7 @@ describe('rebaseDraft', () => {
     expect(next.safety.failsafeTimeoutMs).toBe(250);
   });
 
-  it('replaces a whole list when I added an item', () => {
+  it('adds the item I added to their list', () => {
     const { base, theirs } = threeWay();
     const mine = structuredClone(base);
     mine.controls.channels.push({ number: 5, name: 'Rate', low: 1000, centre: 1500, high: 2000 });
@@ -62,5 +64,32 @@ describe('rebaseDraft', () => {
     const copy = structuredClone(theirs);
     rebaseDraft(theirs, rebaseRows(base, theirs, mine), {});
     expect(theirs).toEqual(copy);
+  });
+
+  it('keeps their added item and my changed field in the same list', () => {
+    const base = robotConfig();
+    const theirs = structuredClone(base);
+    theirs.controls.channels.push(channel(3, 'Mode'));
+    const mine = structuredClone(base);
+    mine.controls.channels[0].centre = 1520;
+    const next = rebaseDraft(theirs, rebaseRows(base, theirs, mine), {});
+    expect(next.controls.channels.map((c) => [c.number, c.centre])).toEqual([[1, 1520], [2, 1500], [3, 1500]]);
+  });
+
+  it('takes out the items I removed when the person keeps mine', () => {
+    const base = robotConfig();
+    base.controls.channels.push(channel(3, 'Mode'), channel(4, 'Horn'));
+    const mine = structuredClone(base);
+    mine.controls.channels.splice(2);
+    const next = rebaseDraft(structuredClone(base), rebaseRows(base, base, mine), {});
+    expect(next.controls.channels.map((c) => c.number)).toEqual([1, 2]);
+  });
+
+  it('appends a later item of mine even when an earlier one is left out', () => {
+    const base = robotConfig();
+    const mine = structuredClone(base);
+    mine.controls.channels.push(channel(3, 'Mode'), channel(4, 'Horn'));
+    const next = rebaseDraft(base, rebaseRows(base, base, mine), { 'controls.channels.2': 'theirs' });
+    expect(next.controls.channels.map((c) => c.number)).toEqual([1, 2, 4]);
   });
 });

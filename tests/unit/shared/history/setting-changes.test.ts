@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { jsonChanges } from '@shared/history/json-changes';
-import { settingChanges } from '@shared/history/setting-changes';
+import { changeLabel, settingChanges, settingValueWords } from '@shared/history/setting-changes';
 import type { RobotConfig } from '@shared/schemas/robot-config';
 import { makeConfig } from '../../../factories/engine';
 
@@ -11,20 +10,6 @@ const edited = (edit: (c: RobotConfig) => void) => {
   return c;
 };
 const texts = (a: RobotConfig, b: RobotConfig) => settingChanges(a, b).map((c) => c.text);
-
-describe('the structural comparison', () => {
-  it('finds nothing between equal values', () => {
-    expect(jsonChanges(mecanum(), structuredClone(mecanum()))).toEqual([]);
-  });
-
-  it('compares a list of plain values as one value', () => {
-    expect(jsonChanges({ rates: [0.5, 1] }, { rates: [0.5, 0.8, 1] })).toEqual([{ path: ['rates'], from: [0.5, 1], to: [0.5, 0.8, 1] }]);
-  });
-
-  it('reports an item present on one side only as one change', () => {
-    expect(jsonChanges({ w: [{ n: 1 }] }, { w: [{ n: 1 }, { n: 2 }] })).toEqual([{ path: ['w', 1], from: undefined, to: { n: 2 } }]);
-  });
-});
 
 describe('setting changes in words', () => {
   it('names a wheel by its name and a switch by on and off', () => {
@@ -95,5 +80,45 @@ describe('setting changes in words', () => {
   it('puts the robot name under Robot', () => {
     const after = edited((c) => (c.name = 'Aisle Scout II'));
     expect(settingChanges(mecanum(), after)[0]).toMatchObject({ section: 'Robot', text: `Robot: name ${mecanum().name} → Aisle Scout II` });
+  });
+
+  it('finds nothing between a configuration and its copy', () => {
+    expect(settingChanges(mecanum(), structuredClone(mecanum()))).toEqual([]);
+  });
+
+  it('names a changed layout parameter, with the unit read from its key', () => {
+    const after = edited((c) => (c.chassis.params.wheelbaseMm = 180));
+    expect(settingChanges(mecanum(), after)).toMatchObject([{ subject: 'Chassis', field: 'layout wheelbase', from: '160 mm', to: '180 mm' }]);
+  });
+
+  it('names a channel by its number and its name', () => {
+    const after = edited((c) => (c.controls.channels[1].centre = 1000));
+    expect(texts(mecanum(), after)).toEqual(['Channel 2 (Forward): centre 1500 → 1000']);
+  });
+
+  it('names a field of some other JSON value by its last key', () => {
+    expect(settingChanges({ a: { radiusMm: 30 } }, { a: { radiusMm: 31 } })).toMatchObject([{ path: ['a', 'radiusMm'], field: 'radius', from: '30 mm', to: '31 mm' }]);
+  });
+
+  it('puts a value at a path in words as a change there would read it', () => {
+    expect(settingValueWords(['safety', 'failsafeTimeoutMs'], 300, mecanum(), mecanum())).toBe('300 ms');
+    expect(settingValueWords(['controls', 'channels', 9], undefined, mecanum(), mecanum())).toBeNull();
+  });
+});
+
+describe('changeLabel', () => {
+  it('puts the section, the part and the field on one line', () => {
+    const after = edited((c) => (c.chassis.wheels[2].radiusMm = 35));
+    expect(changeLabel(settingChanges(mecanum(), after)[0])).toBe('Chassis › Rear right wheel › radius');
+  });
+
+  it('says a section once when the setting belongs to the section itself', () => {
+    const after = edited((c) => (c.safety.rampPerSecond = 6));
+    expect(changeLabel(settingChanges(mecanum(), after)[0])).toBe('Safety › ramp limit');
+  });
+
+  it('calls the top-level name the robot name', () => {
+    const after = edited((c) => (c.name = 'Moss Crawler'));
+    expect(changeLabel(settingChanges(mecanum(), after)[0])).toBe('Robot › name');
   });
 });

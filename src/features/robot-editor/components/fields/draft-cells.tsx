@@ -1,6 +1,6 @@
 import { cx } from '@/components/ui/cx';
 import type { FieldPath } from '@shared/history/field-path';
-import { fieldWords } from '@shared/history/field-words';
+import { fieldName } from '@shared/history/field-words';
 import { useDraftField, useErrorsUnder } from './draft-fields-context';
 import type { Option } from './draft-fields';
 import { compactInputClasses, NumberInput } from './number-input';
@@ -94,7 +94,7 @@ export function TableErrors({ prefix, rowName }: { prefix: FieldPath; rowName: (
       {errors.map(([key, message]) => {
         const rest = key.split('.').slice(prefix.length);
         const row = /^\d+$/.test(rest[0] ?? '') ? rowName(Number(rest[0])) : null;
-        const field = rest.length > 1 ? fieldWords(rest[rest.length - 1]).label : null;
+        const field = rest.length > 1 ? fieldName(rest[rest.length - 1]) : null;
         return (
           <li key={key}>
             ✕ {[row, field].filter(Boolean).join(', ') || 'This table'}: {message}

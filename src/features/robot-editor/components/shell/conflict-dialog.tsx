@@ -6,6 +6,7 @@ import { Dialog } from '@/components/ui/dialog';
 import { ErrorState, LoadingState } from '@/components/ui/states';
 import { errorMessage } from '@/lib/api-client';
 import { rebaseDraft, rebaseRows, type RebaseRow } from '@shared/history/rebase-draft';
+import { changeLabel } from '@shared/history/setting-changes';
 import type { RobotConfig } from '@shared/schemas/robot-config';
 import type { RevisionDetail, RevisionSummary } from '@shared/schemas/robots';
 
@@ -89,15 +90,15 @@ function RebaseTable({ base, theirs, mine, onClose, onRebase }: { base: Revision
                 {rows.map((row) => (
                   <tr key={row.key} className={cx(row.origin === 'both' && 'bg-warn-soft/50')}>
                     <th scope="row" className="px-2 py-1.5 font-normal">
-                      {row.label}
+                      {changeLabel(row)}
                       <span className={cx('block text-xs', row.origin === 'both' ? 'font-semibold text-warn-strong' : 'text-ink-muted')}>{ORIGIN_WORDS[row.origin]}</span>
                     </th>
-                    <td className="px-2 py-1.5 text-ink-muted">{row.baseWords}</td>
-                    <td className={cx('px-2 py-1.5', chosen(row) === 'theirs' && 'font-semibold')}>{row.beforeWords}</td>
-                    <td className={cx('px-2 py-1.5', chosen(row) === 'mine' && 'font-semibold')}>{row.afterWords}</td>
+                    <td className="px-2 py-1.5 text-ink-muted">{row.baseWords ?? 'not set'}</td>
+                    <td className={cx('px-2 py-1.5', chosen(row) === 'theirs' && 'font-semibold')}>{row.from ?? 'not set'}</td>
+                    <td className={cx('px-2 py-1.5', chosen(row) === 'mine' && 'font-semibold')}>{row.to ?? 'not set'}</td>
                     <td className="px-2 py-1.5 whitespace-nowrap">
                       <fieldset className="flex gap-3">
-                        <legend className="sr-only">Keep for {row.label}</legend>
+                        <legend className="sr-only">Keep for {changeLabel(row)}</legend>
                         {(['theirs', 'mine'] as const).map((side) => (
                           <label key={side} className="flex items-center gap-1">
                             <input type="radio" name={row.key} checked={chosen(row) === side} onChange={() => setChoices((c) => ({ ...c, [row.key]: side }))} className="accent-accent" />

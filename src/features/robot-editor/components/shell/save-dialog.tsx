@@ -5,7 +5,7 @@ import { Button } from '@/components/ui/button';
 import { Dialog } from '@/components/ui/dialog';
 import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
-import { diffConfigs } from '@shared/history/diff-configs';
+import { settingChanges, type SettingChange } from '@shared/history/setting-changes';
 import { RevisionMessageSchema } from '@shared/schemas/robots';
 import type { RobotConfig } from '@shared/schemas/robot-config';
 import { ChangeList } from './change-list';
@@ -36,7 +36,7 @@ export function SaveDialog({ open, onClose, initialMessage, baseRevision, baseCo
       {open && (
         <SaveForm
           initialMessage={initialMessage}
-          changes={baseConfig ? diffConfigs(baseConfig, draft) : null}
+          changes={baseConfig ? settingChanges(baseConfig, draft) : null}
           baseRevision={baseRevision}
           invalidFields={invalidFields}
           saving={saving}
@@ -58,7 +58,7 @@ function SaveForm({
   error,
   onSubmit,
   onCancel,
-}: Pick<SaveDialogProps, 'initialMessage' | 'baseRevision' | 'invalidFields' | 'saving' | 'error' | 'onSubmit'> & { changes: ReturnType<typeof diffConfigs> | null; onCancel: () => void }) {
+}: Pick<SaveDialogProps, 'initialMessage' | 'baseRevision' | 'invalidFields' | 'saving' | 'error' | 'onSubmit'> & { changes: SettingChange[] | null; onCancel: () => void }) {
   const form = useForm<SaveForm>({ resolver: zodResolver(SaveFormSchema), defaultValues: { message: initialMessage } });
   const submit = form.handleSubmit((values) => onSubmit(values.message.trim()));
   return (
