@@ -184,7 +184,7 @@ export function powerAdvice(config: RobotConfig): PowerAdvice {
     rules: [
       `Running current: half of each motor’s stall current, summed (${amps(runningA)}): a motor driven hard works near its maximum-power point (linear DC-motor model).`,
       // Both rules are common practice (wire-and-fuse.ts).
-      `Fuse: the next standard blade fuse at or above 1.25 × the running current${fuseA ? ` (${fuseA} A)` : ''}: the 125 % continuous-load rule.`,
+      `Fuse: the next standard blade fuse at or above 1.25 × the running current${fuseA ? ` (${fuseA} A)` : ''}, by the 125 % continuous-load rule.`,
       `Wire: the thinnest gauge whose chassis-wiring ampacity covers the fuse${wire ? ` (AWG ${wire.awg}, ${wire.mm2} mm², ${wire.ampacityA} A)` : ''}, so the fuse blows before the wire overheats.`,
     ],
     drivers: rows,

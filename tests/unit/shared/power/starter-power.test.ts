@@ -2,18 +2,15 @@ import { describe, expect, it } from 'vitest';
 import { DRIVER_KINDS } from '@shared/drivers/driver-kinds';
 import { powerAdvice } from '@shared/power/power-advice';
 import { STARTER_POWER } from '@shared/power/starter-power';
-import { BOARD_IDS, DRIVE_LAYOUT_IDS, DRIVER_KIND_IDS, INPUT_SOURCE_IDS } from '@shared/schemas/ids';
+import { DRIVER_KIND_IDS } from '@shared/schemas/ids';
 import { buildStarterConfig } from '@shared/starter';
+import { choiceName, everyStarterChoice } from '../../../fixtures/starter-options';
 
 describe('the motors and battery of a starter configuration', () => {
   it('raise no power problem for any layout, board, input source and driver kind', () => {
-    for (const layout of DRIVE_LAYOUT_IDS)
-      for (const board of BOARD_IDS)
-        for (const input of INPUT_SOURCE_IDS)
-          for (const driver of DRIVER_KIND_IDS) {
-            const problems = powerAdvice(buildStarterConfig({ layout, board, input, driver })).problems;
-            expect(problems.map((p) => p.code), `${layout}/${board}/${input}/${driver}`).toEqual([]);
-          }
+    for (const choice of everyStarterChoice()) {
+      expect(powerAdvice(buildStarterConfig(choice)).problems.map((p) => p.code), choiceName(choice)).toEqual([]);
+    }
   });
 
   it.each(DRIVER_KIND_IDS)('gives %s drivers motors whose stall current is within the kind’s continuous rating', (driver) => {
