@@ -2,6 +2,7 @@ import { DRIVER_KINDS, driverPinRoles } from './drivers/driver-kinds';
 import { INPUT_SOURCES, inputPinRoles } from './inputs/input-sources';
 import { computeMixing } from './kinematics/mixing';
 import { LAYOUT_LABELS, presetChassis, presetMotors } from './kinematics/presets';
+import { STARTER_POWER } from './power/starter-power';
 import type { BoardId, DriveLayoutId, DriverKindId, InputSourceId } from './schemas/ids';
 import {
   CURRENT_SCHEMA_VERSION,
@@ -31,11 +32,14 @@ export const STARTER_CHANNELS = { strafe: 1, forward: 2, yaw: 4, rateSwitch: 5, 
 
 const unassigned = (): PinAssignment => ({ pin: null, locked: false });
 
-/** A complete, valid configuration for a starter layout: every pin left for the pin plan to fill. */
+/**
+ * A complete, valid configuration for a starter layout: every pin left for the pin plan to fill,
+ * motors and battery that suit the driver kind (STARTER_POWER), so the power advice starts quiet.
+ */
 export function buildStarterConfig(options: StarterOptions): RobotConfig {
   const { layout, board = 'uno', input = 'rc-pwm', driver = 'dual-pwm' } = options;
   const chassis = presetChassis(layout);
-  const motors = presetMotors(chassis);
+  const motors = presetMotors(chassis).map((motor) => ({ ...motor, ...STARTER_POWER[driver].motor }));
   const controls = starterControls(input, computeMixing({ chassis, motors }).canStrafe);
   const config: RobotConfigInput = {
     schemaVersion: CURRENT_SCHEMA_VERSION,
@@ -50,6 +54,7 @@ export function buildStarterConfig(options: StarterOptions): RobotConfig {
     },
     // Motors stay off until the arming switch is on, whenever there is one.
     safety: { armingRequired: controls.armingSwitch.channel !== null },
+    power: { ...STARTER_POWER[driver].power },
   };
   return RobotConfigSchema.parse(config);
 }

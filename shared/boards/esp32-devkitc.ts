@@ -73,5 +73,6 @@ export const ESP32_DEVKITC: BoardProfile = {
     { port: 'Serial2', rx: 'GPIO16', tx: 'GPIO17', usb: false, remappable: true },
   ],
   pins: HEADER_GPIOS.map(esp32Pin),
-  supplyInput: { pin: '5V', minVolts: 4.75, maxVolts: 5.25, note: 'the 5V pin feeds the 3.3 V regulator and expects a regulated 5 V (from memory)' },
+  // The 5V pin's role and the ±5 % window are from memory.
+  supplyInput: { pin: '5V', minVolts: 4.75, maxVolts: 5.25, note: 'the 5V pin feeds the 3.3 V regulator and expects a regulated 5 V' },
 };

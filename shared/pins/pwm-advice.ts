@@ -49,7 +49,8 @@ function defaultNote(board: BoardProfile): string {
     const t1 = board.timers.find((t) => t.id === 1)!;
     return `Left at the board’s default, PWM runs at ${formatHz(t1.defaultHz)} (${t1.defaultFormula}) and at ${formatHz(t0.defaultHz)} on timer 0 (${t0.defaultFormula}): well within hearing, so the motors whine, most at low speed.`;
   }
-  return `Left at the core’s default, analogWrite runs at ${formatHz(board.defaultPwmHz['*'])} (from memory): within hearing, so the motors whine, most at low speed.`;
+  // The ESP32 and RP2040 cores' default analogWrite frequency is from memory, hence "about".
+  return `Left at the core’s default, analogWrite runs at about ${formatHz(board.defaultPwmHz['*'])}: within hearing, so the motors whine, most at low speed.`;
 }
 
 /** Whether two PWM pins share a timer (AVR) or a slice (RP2040), and so one frequency. */

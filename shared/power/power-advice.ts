@@ -149,10 +149,12 @@ function checkLogicSupply(config: RobotConfig, battery: BatterySummary): Problem
 
 function notes(config: RobotConfig): string[] {
   const list = [
-    'Join the grounds: battery negative, every driver’s ground and the board’s ground must meet, or signals float and motors twitch (common practice).',
+    // Common practice.
+    'Join the grounds: battery negative, every driver’s ground and the board’s ground must meet, or signals float and motors twitch.',
     'Put the fuse and a reachable power switch in the battery’s positive lead, as close to the battery as you can.',
   ];
-  if (config.controls.source === 'nrf24') list.push('Feed the nRF24L01+ from 3.3 V (its supply range is 1.9–3.6 V; its inputs take 5 V), with a 10 µF capacitor across its supply pins (nRF24L01+ Product Specification; the capacitor is common practice).');
+  // Supply range and 5 V-tolerant inputs: nRF24L01+ Product Specification v1.0; the capacitor is common practice.
+  if (config.controls.source === 'nrf24') list.push('Feed the nRF24L01+ from 3.3 V (its supply range is 1.9–3.6 V; its inputs take 5 V), with a 10 µF capacitor across its supply pins.');
   if (['lipo', 'li-ion', 'lifepo4'].includes(config.power.chemistry)) list.push('Charge lithium packs with a balance charger, supervised, on a fire-safe surface; never above 4.2 V per LiPo cell; store at about 3.8 V per cell; retire a swollen pack.');
   if (config.wiring.drivers.some((d) => DRIVER_KINDS[d.kind].bridgeDropVolts)) list.push('An L298-class bridge loses about 2–3 V (L298 datasheet: 1.8–3.2 V at 1 A): the motors see that much less than the battery.');
   if (config.wiring.drivers.some((d) => 'fractionOfVcc' in DRIVER_KINDS[d.kind].logic.minHigh)) list.push('Feed the TB6612-class driver’s VCC from the board’s own logic supply, so its inputs read the board’s high level.');
@@ -181,8 +183,9 @@ export function powerAdvice(config: RobotConfig): PowerAdvice {
     wire,
     rules: [
       `Running current: half of each motor’s stall current, summed (${amps(runningA)}): a motor driven hard works near its maximum-power point (linear DC-motor model).`,
-      `Fuse: the next standard blade fuse at or above 1.25 × the running current${fuseA ? ` (${fuseA} A)` : ''} (common practice, the 125 % continuous-load rule).`,
-      `Wire: the thinnest gauge whose chassis-wiring ampacity covers the fuse${wire ? ` (AWG ${wire.awg}, ${wire.mm2} mm², ${wire.ampacityA} A)` : ''}, so the fuse blows before the wire overheats (common practice).`,
+      // Both rules are common practice (wire-and-fuse.ts).
+      `Fuse: the next standard blade fuse at or above 1.25 × the running current${fuseA ? ` (${fuseA} A)` : ''}, by the 125 % continuous-load rule.`,
+      `Wire: the thinnest gauge whose chassis-wiring ampacity covers the fuse${wire ? ` (AWG ${wire.awg}, ${wire.mm2} mm², ${wire.ampacityA} A)` : ''}, so the fuse blows before the wire overheats.`,
     ],
     drivers: rows,
     problems: [...problems.filter((p) => p.severity === 'error'), ...problems.filter((p) => p.severity === 'warning')],

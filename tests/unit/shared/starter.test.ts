@@ -1,19 +1,16 @@
 import { describe, expect, it } from 'vitest';
 import { DRIVER_KINDS, driverPinRoles } from '@shared/drivers/driver-kinds';
 import { INPUT_SOURCES } from '@shared/inputs/input-sources';
-import { BOARD_IDS, DRIVE_LAYOUT_IDS, DRIVER_KIND_IDS, INPUT_SOURCE_IDS } from '@shared/schemas/ids';
+import { DRIVER_KIND_IDS } from '@shared/schemas/ids';
 import { RobotConfigSchema } from '@shared/schemas/robot-config';
 import { buildStarterConfig, STARTER_CHANNELS } from '@shared/starter';
+import { choiceName, everyStarterChoice } from '../../fixtures/starter-options';
 
 describe('starter configurations', () => {
   it('builds a valid configuration for every layout, board, input and driver', () => {
-    for (const layout of DRIVE_LAYOUT_IDS)
-      for (const board of BOARD_IDS)
-        for (const input of INPUT_SOURCE_IDS)
-          for (const driver of DRIVER_KIND_IDS) {
-            const config = buildStarterConfig({ layout, board, input, driver });
-            expect(RobotConfigSchema.safeParse(config).success, `${layout}/${board}/${input}/${driver}`).toBe(true);
-          }
+    for (const choice of everyStarterChoice()) {
+      expect(RobotConfigSchema.safeParse(buildStarterConfig(choice)).success, choiceName(choice)).toBe(true);
+    }
   });
 
   it('uses the defaults uno, rc-pwm and dual-pwm', () => {

@@ -16,12 +16,16 @@ export function fitDriverPins(driver: Driver): Driver {
 /**
  * Motors and drivers brought in line with the wheel table. `renames` maps old motor names to
  * new ones (a renamed motor keeps its settings and its place on a driver). Motors no wheel uses
- * are dropped, new ones get default settings and a free driver channel (or a new driver).
+ * are dropped, new ones get a free driver channel (or a new driver) and the ratings of the robot's
+ * first motor: drive motors are usually alike, and a new one should not clash with the drivers
+ * and battery chosen for the others.
  */
 export function syncMotors(config: RobotConfig, renames: Readonly<Record<string, string>> = {}): RobotConfig {
   const names = [...new Set(config.chassis.wheels.map((w) => w.motor))];
   const settings = new Map(config.motors.map((m) => [renames[m.name] ?? m.name, m]));
-  const motors = names.map((name) => ({ ...(settings.get(name) ?? MotorSchema.parse({ name })), name }));
+  const like = config.motors[0];
+  const fresh = (name: string) => MotorSchema.parse(like ? { name, stallCurrentA: like.stallCurrentA, ratedVoltage: like.ratedVoltage } : { name });
+  const motors = names.map((name) => ({ ...(settings.get(name) ?? fresh(name)), name }));
   // Each motor keeps the first channel it is found on; merged motors free the others.
   const seen = new Set<string>();
   const keep = (m: string) => names.includes(m) && !seen.has(m) && (seen.add(m), true);

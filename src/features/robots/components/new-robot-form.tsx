@@ -13,19 +13,17 @@ import { LAYOUT_LABELS } from '@shared/kinematics/presets';
 import { BOARD_IDS, DRIVE_LAYOUT_IDS, DRIVER_KIND_IDS, INPUT_SOURCE_IDS } from '@shared/schemas/ids';
 import type { RobotSummary } from '@shared/schemas/robots';
 import { useCreateRobot } from '../api/create-robot';
-import { NewRobotFormSchema, starterRobot, type NewRobotForm as Values } from '../lib/starter-robot';
+import { NEW_ROBOT_DEFAULTS, NewRobotFormSchema, starterRobot, type NewRobotForm as Values } from '../lib/starter-robot';
 
 const layoutOptions = DRIVE_LAYOUT_IDS.map((id) => ({ value: id, label: LAYOUT_LABELS[id] }));
 const boardOptions = BOARD_IDS.map((id) => ({ value: id, label: BOARDS[id].name }));
 const inputOptions = INPUT_SOURCE_IDS.map((id) => ({ value: id, label: INPUT_SOURCES[id].name }));
 const driverOptions = DRIVER_KIND_IDS.map((id) => ({ value: id, label: DRIVER_KINDS[id].name }));
 
-const defaults: Values = { name: '', layout: 'trio-omni', board: 'nano', input: 'ppm', driver: 'pwm-in1-in2-stby' };
-
 /** A robot from a starter layout: five choices, with the pin plan tried before anything is saved. */
 export function NewRobotForm({ teamId, onCreated, onCancel }: { teamId: string; onCreated: (robot: RobotSummary) => void; onCancel: () => void }) {
   const create = useCreateRobot(teamId);
-  const form = useForm<Values>({ resolver: zodResolver(NewRobotFormSchema), defaultValues: defaults });
+  const form = useForm<Values>({ resolver: zodResolver(NewRobotFormSchema), defaultValues: NEW_ROBOT_DEFAULTS });
   const { errors } = form.formState;
   const [layout, board, input, driver] = useWatch({ control: form.control, name: ['layout', 'board', 'input', 'driver'] });
   const preview = useMemo(() => starterRobot({ layout, board, input, driver }), [layout, board, input, driver]);

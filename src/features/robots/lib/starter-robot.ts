@@ -15,6 +15,9 @@ export const NewRobotFormSchema = z.object({
 });
 export type NewRobotForm = z.infer<typeof NewRobotFormSchema>;
 
+/** What the form offers first: a small three-wheel robot whose parts fit and wire up cleanly. */
+export const NEW_ROBOT_DEFAULTS: NewRobotForm = { name: '', layout: 'trio-omni', board: 'nano', input: 'ppm', driver: 'pwm-in1-in2-stby' };
+
 export interface StarterRobot {
   config: RobotConfig;
   /** Whether the pin plan placed every pin; when not, the reason in one sentence. */

@@ -27,8 +27,8 @@ describe('the safety section', () => {
   it('names the fuse and the rule of thumb it comes from', () => {
     renderSection(SafetySection, starter());
     expect(screen.getByText(/the 125 % continuous-load rule/)).toBeTruthy();
-    // Two motors stalling at 2 A run at about 2 A together; 1.25 × 2 A = 2.5 A, so the next blade fuse is 3 A.
-    expect(screen.getByText('3 A blade fuse')).toBeTruthy();
+    // The starter's two motors stall at 1 A: they run at about 1 A together; 1.25 × 1 A = 1.25 A, so the next blade fuse is 2 A.
+    expect(screen.getByText('2 A blade fuse')).toBeTruthy();
   });
 
   it('warns when a motor stalls above the driver’s peak rating', async () => {
@@ -36,6 +36,7 @@ describe('the safety section', () => {
     renderSection(SafetySection, {
       ...starter(),
       motors: starter().motors.map((m) => ({ ...m, stallCurrentA: 5 })),
+      power: { ...starter().power, chemistry: 'lipo', cells: 2 },
     });
     expect(screen.getByText(/stalls at 5 A, above Driver 1’s 3\.2 A peak/)).toBeTruthy();
     await user.clear(screen.getByLabelText('Cells in series'));

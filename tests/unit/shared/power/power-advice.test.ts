@@ -23,7 +23,7 @@ describe('power advice on a sound robot', () => {
   it('sizes the fuse and wire from two 2 A stall currents: 2 A running, 3 A fuse, AWG 24', () => {
     const advice = powerAdvice(robot());
     expect(advice).toMatchObject({ stallTotalA: 4, runningA: 2, fuseA: 3, wire: { awg: 24, ampacityA: 3.5 } });
-    expect(advice.rules.join(' ')).toContain('common practice');
+    expect(advice.rules.join(' ')).toContain('the 125 % continuous-load rule');
   });
 
   it('always reminds about a common ground', () => {

@@ -1,8 +1,11 @@
 import { Panel } from '@/components/ui/panel';
-import { SECTION_IDS, SECTION_LABELS, sectionOfPath, type EditorProblem, type SectionId } from '../../lib/editor-sections';
+import { homeSectionOf, SECTION_IDS, SECTION_LABELS, type EditorProblem, type SectionId } from '../../lib/editor-sections';
 import { ProblemList } from './problem-list';
 
-/** Every problem of the draft, grouped by the section that shows its field. */
+/**
+ * Every problem of the draft once, grouped by its home section: a power problem under Safety,
+ * which explains it, any other under the section with its field. Each links to its field.
+ */
 export function AllProblems({ problems, available }: { problems: readonly EditorProblem[]; available: readonly SectionId[] }) {
   if (problems.length === 0) {
     return (
@@ -13,7 +16,7 @@ export function AllProblems({ problems, available }: { problems: readonly Editor
   }
   const groups = [...SECTION_IDS, null].map((section) => ({
     section,
-    items: problems.filter((p) => sectionOfPath(p.path) === section),
+    items: problems.filter((p) => homeSectionOf(p) === section),
   }));
   return (
     <Panel title="All problems" titleId="all-problems-title" description="From the drive engine, the pin check, the power advice and the form's own checks. Errors first.">

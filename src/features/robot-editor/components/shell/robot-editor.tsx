@@ -14,8 +14,8 @@ import {
   countBySection,
   fieldErrorProblems,
   SECTION_IDS,
+  problemsOfSection,
   SECTION_LABELS,
-  sectionOfPath,
   type EditorProblem,
   type SectionCount,
   type SectionId,
@@ -117,7 +117,7 @@ export function RobotEditor({ detail, section, sections, basePath, save, revisio
     fieldErrors,
     requestSave: openSave,
   };
-  const sectionProblems = section === 'problems' ? [] : problems.filter((p) => sectionOfPath(p.path) === section);
+  const sectionProblems = section === 'problems' ? [] : problemsOfSection(problems, section);
 
   return (
     <div>

@@ -78,6 +78,12 @@ describe('wheels and motors', () => {
     expect(valid(next)).toBe(true);
   });
 
+  it('gives a new motor the ratings of the robot’s motors, so the power advice stays quiet', () => {
+    const config = changeLayout(trio(), 'custom');
+    const next = addWheel({ ...config, motors: config.motors.map((m) => ({ ...m, stallCurrentA: 0.8, ratedVoltage: 4.5 })) });
+    expect(next.motors.find((m) => m.name === 'Wheel 4')).toMatchObject({ stallCurrentA: 0.8, ratedVoltage: 4.5 });
+  });
+
   it('removes a wheel and the motor that only it used', () => {
     const config = changeLayout(mecanum(), 'custom');
     const next = removeWheel(config, 3);
