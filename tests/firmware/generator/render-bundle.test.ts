@@ -8,6 +8,9 @@ import { configHash } from '@server/features/firmware/model/config-hash';
 import { renderBundle, type BundleFile } from '@server/features/firmware/render-bundle';
 import { zipBundle } from '@server/features/firmware/zip-bundle';
 import { getBoard } from '@shared/boards/boards';
+import { assignPins } from '@shared/pins/assign-pins';
+import { INPUT_SOURCE_IDS } from '@shared/schemas/ids';
+import { buildStarterConfig } from '@shared/starter';
 import { sampleConfig } from '../helpers/sample-config';
 
 const file = (files: BundleFile[], path: string) => {
@@ -99,6 +102,15 @@ describe('the firmware bundle', () => {
     expect(readme).toContain('verify it by switching the remote off');
     expect(readme).toContain('fuse on the battery line');
     expect(readme).toContain('Charge lithium packs supervised');
+  });
+
+  it('keeps where a figure comes from out of the README, for every input source', () => {
+    for (const input of INPUT_SOURCE_IDS) {
+      const assigned = assignPins(buildStarterConfig({ layout: 'quad-mecanum', board: 'mega2560', input, driver: 'pwm-in1-in2-stby' }));
+      if (!assigned.ok) throw new Error(`No pins for ${input}: ${assigned.reason}`);
+      const readme = file(renderBundle(assigned.config, { revision: 1 }), 'README.md');
+      expect(readme, input).not.toMatch(/from memory|common practice/i);
+    }
   });
 
   it('renders the same bytes for the same configuration and revision', () => {
