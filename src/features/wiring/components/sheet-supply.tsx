@@ -15,7 +15,7 @@ const CHEMISTRY: Record<RobotConfig['power']['chemistry'], string> = {
 const LOGIC: Record<RobotConfig['power']['logicSupply'], string> = {
   usb: 'the board runs from USB',
   'driver-regulator': 'the board is fed from a driver’s 5 V regulator',
-  'separate-regulator': 'the board is fed from its own regulator on the battery',
+  'separate-regulator': 'the board is fed from a separate 5 V regulator on the battery',
   'board-vin': 'the battery feeds the board’s own supply input',
 };
 

@@ -43,4 +43,12 @@ describe('the safety section', () => {
     await user.type(screen.getByLabelText('Cells in series'), '3');
     expect(screen.getByText(/Pack voltage 9 V empty, 11.1 V nominal, 12.6 V full/)).toBeTruthy();
   });
+
+  it('explains the cell count in the way packs of the chosen chemistry are named', async () => {
+    const user = userEvent.setup();
+    renderSection(SafetySection, { ...starter(), power: { ...starter().power, chemistry: 'nimh', cells: 5 } });
+    expect(screen.getByText('A 6 V pack has 5')).toBeTruthy();
+    await user.selectOptions(screen.getByLabelText('Chemistry'), 'lipo');
+    expect(screen.getByText('A 2S pack has 2')).toBeTruthy();
+  });
 });

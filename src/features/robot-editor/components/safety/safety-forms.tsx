@@ -12,8 +12,18 @@ const CHEMISTRY = [
   { value: 'alkaline', label: 'Alkaline (not rechargeable)' },
 ];
 
+// How builders name packs of each chemistry, so the cell count is easy to read off the label.
+const CELLS_HINT: Record<string, string> = {
+  lipo: 'A 2S pack has 2',
+  'li-ion': 'A 2S pack has 2',
+  lifepo4: 'A 2S pack has 2',
+  nimh: 'A 6 V pack has 5',
+  'lead-acid': 'A 6 V battery has 3, a 12 V one 6',
+  alkaline: 'Four AA cells in a holder are 4',
+};
+
 const LOGIC_SUPPLY = [
-  { value: 'separate-regulator', label: 'Its own regulator from the battery' },
+  { value: 'separate-regulator', label: 'A separate 5 V regulator from the battery' },
   { value: 'driver-regulator', label: 'A motor driver’s 5 V regulator' },
   { value: 'board-vin', label: 'Battery straight to the board’s supply input' },
   { value: 'usb', label: 'USB cable' },
@@ -54,7 +64,7 @@ export function PowerForm() {
     <Panel title="Battery and logic supply" titleId="power-title">
       <div className="grid grid-cols-[repeat(auto-fill,minmax(12rem,1fr))] gap-x-5">
         <DraftSelectField path={['power', 'chemistry']} label="Chemistry" options={CHEMISTRY} width="w-full" />
-        <DraftNumberField path={['power', 'cells']} label="Cells in series" hint="A 2S pack has 2" width="w-16" />
+        <DraftNumberField path={['power', 'cells']} label="Cells in series" hint={CELLS_HINT[config.power.chemistry]} width="w-16" />
         <DraftNumberField path={['power', 'capacityMah']} label="Capacity" unit="mAh" />
         <DraftNumberField path={['power', 'dischargeC']} label="Discharge rating" unit="C" width="w-16" />
         <DraftSelectField path={['power', 'logicSupply']} label="The board is fed from" options={LOGIC_SUPPLY} width="w-full" className="col-span-2" />
