@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import JSZip from 'jszip';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { sampleConfigInput } from '../firmware/helpers/sample-config';
+import { sampleConfigInput } from '../factories/robot-config';
 
 function cli(...args: string[]): Promise<{ code: number; stdout: string; stderr: string }> {
   return new Promise((resolve) => {

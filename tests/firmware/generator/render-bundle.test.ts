@@ -8,7 +8,7 @@ import { configHash } from '@server/features/firmware/model/config-hash';
 import { renderBundle, type BundleFile } from '@server/features/firmware/render-bundle';
 import { zipBundle } from '@server/features/firmware/zip-bundle';
 import { getBoard } from '@shared/boards/boards';
-import { sampleConfig } from '../helpers/sample-config';
+import { sampleConfig } from '../../factories/robot-config';
 
 const file = (files: BundleFile[], path: string) => {
   const found = files.find((f) => f.path === path);

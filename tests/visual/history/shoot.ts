@@ -16,7 +16,7 @@ import { deleteRobot, listBin } from '@server/features/robot-bin/robot-bin.servi
 import { createRobot, robotDetail, saveRevision } from '@server/features/robots/robots.service';
 import { insertMembership, insertTeamWithOwner } from '@server/features/teams/teams.repository';
 import { pngImage } from '../../factories/images';
-import { sampleConfig } from '../../firmware/helpers/sample-config';
+import { sampleConfig } from '../../factories/robot-config';
 import { shootHarness } from '../shared/shoot-harness';
 
 function fixture() {
