@@ -7,7 +7,7 @@ import { join } from 'node:path';
 import type { AppContext } from '@server/config';
 import { openDatabase } from '@server/db/client';
 import { runMigrations } from '@server/db/migrate';
-import { listAuditLog } from '@server/features/audit/audit-log.repository';
+import { listAuditLog } from '@server/features/audit/audit.repository';
 import { insertUser } from '@server/features/auth/auth.repository';
 import { renderBundle } from '@server/features/firmware/render-bundle';
 import { flashLog, recordFlash } from '@server/features/flashes/flashes.service';
