@@ -1,28 +1,14 @@
 import type { FieldPath } from '@shared/history/field-path';
 import { fieldWords } from '@shared/history/field-words';
 import { useDraftField, useErrorsUnder } from './draft-fields-context';
-import { DraftSelect, DraftTextInput, type Option } from './draft-controls';
-import { NumberInput } from './number-input';
+import { DraftNumberInput, DraftSelect, DraftTextInput, type Option } from './draft-controls';
 
 // Table cells: no visible label (the column heading is one; aria-label names the cell), no
 // error text in the cell (the row would grow): a red border, and the reason below the table.
 
 export function NumberCell({ path, label, width = 'w-20', scale, allowEmpty }: { path: FieldPath; label: string; width?: string; scale?: number; allowEmpty?: boolean }) {
   const field = useDraftField<number | null>(path);
-  return (
-    <NumberInput
-      aria-label={label}
-      data-field={field.key}
-      value={field.value}
-      onCommit={field.set}
-      scale={scale}
-      allowEmpty={allowEmpty}
-      invalid={Boolean(field.error)}
-      disabled={field.disabled}
-      title={field.error}
-      className={width}
-    />
-  );
+  return <DraftNumberInput field={field} width={width} scale={scale} allowEmpty={allowEmpty} aria-label={label} title={field.error} />;
 }
 
 export function TextCell({ path, label, width = 'w-32' }: { path: FieldPath; label: string; width?: string }) {

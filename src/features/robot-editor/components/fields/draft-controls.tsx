@@ -1,7 +1,7 @@
 import type { InputHTMLAttributes, SelectHTMLAttributes } from 'react';
 import { cx } from '@/components/ui/cx';
 import type { useDraftField } from './draft-fields-context';
-import { compactInputClasses } from './number-input';
+import { compactInputClasses, NumberInput, type NumberInputProps } from './number-input';
 
 // The bare controls of a draft field (from useDraftField), with no label of their own: the
 // labelled fields (draft-fields.tsx) frame them, the table cells (draft-cells.tsx) name them
@@ -52,4 +52,8 @@ export function DraftTextInput({ field, width, ...rest }: ControlProps<string, I
       className={cx(compactInputClasses, width, borderFor(field.error))}
     />
   );
+}
+
+export function DraftNumberInput({ field, width, ...rest }: ControlProps<number | null, Omit<NumberInputProps, 'onCommit' | 'invalid'>>) {
+  return <NumberInput {...rest} data-field={field.key} value={field.value} onCommit={field.set} invalid={Boolean(field.error)} disabled={field.disabled} className={width} />;
 }

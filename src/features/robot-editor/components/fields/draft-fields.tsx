@@ -2,8 +2,7 @@ import { useId, type ReactNode } from 'react';
 import { cx } from '@/components/ui/cx';
 import type { FieldPath } from '@shared/history/field-path';
 import { useDraftField } from './draft-fields-context';
-import { DraftSelect, DraftTextInput, type Option } from './draft-controls';
-import { NumberInput } from './number-input';
+import { DraftNumberInput, DraftSelect, DraftTextInput, type Option } from './draft-controls';
 
 interface LabelledProps {
   path: FieldPath;
@@ -41,18 +40,7 @@ export function DraftNumberField({
   const field = useDraftField<number | null>(path);
   return (
     <FieldFrame id={id} label={label} hint={hint} error={field.error} className={className}>
-      <NumberInput
-        id={id}
-        data-field={field.key}
-        value={field.value}
-        onCommit={field.set}
-        scale={scale}
-        allowEmpty={allowEmpty}
-        invalid={Boolean(field.error)}
-        aria-describedby={`${id}-note`}
-        disabled={field.disabled}
-        className={width}
-      />
+      <DraftNumberInput id={id} field={field} width={width} scale={scale} allowEmpty={allowEmpty} aria-describedby={`${id}-note`} />
       {unit && <span className="text-sm text-ink-muted">{unit}</span>}
     </FieldFrame>
   );
