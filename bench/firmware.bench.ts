@@ -13,7 +13,7 @@ import { compileAvrSketch } from '@server/features/firmware/toolchain/avr-compil
 import { zipBundle } from '@server/features/firmware/zip-bundle';
 import { GPIOR0, unoRegisters } from '../tests/firmware/helpers/avr-registers';
 import { sketchFolders, writeBundle } from '../tests/firmware/helpers/bundle-files';
-import { seededRandom } from '../tests/firmware/helpers/random';
+import { seededRandom } from '../tests/factories/random';
 import { buildForSimulator } from '../tests/firmware/helpers/sim-firmware';
 import { Timeline } from '../tests/firmware/helpers/timeline';
 import { unoWiredConfig } from '../tests/firmware/helpers/uno-configs';

@@ -17,7 +17,7 @@ import { readUploadedConfig } from '../server/features/imports/imports.service';
 import { createRobot, saveRevision } from '../server/features/robots/robots.service';
 import { insertTeamWithOwner } from '../server/features/teams/teams.repository';
 import { configHash } from '../shared/history/config-hash';
-import { sampleConfig } from '../tests/firmware/helpers/sample-config';
+import { sampleConfig } from '../tests/factories/robot-config';
 
 const REVISIONS = 200;
 

@@ -1,40 +1,10 @@
-import { execFile } from 'node:child_process';
-import { mkdtemp, rm, writeFile } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { RobotConfigSchema } from '@shared/schemas/robot-config';
 import { rawConfig } from '../factories/engine';
+import { cli, useScratchDir } from './support/run-cli';
 
-interface Outcome {
-  code: number;
-  stdout: string;
-  stderr: string;
-}
-
-/** Runs the real command line, as a user would: `npx tsx server/cli/index.ts ...`. */
-function cli(...args: string[]): Promise<Outcome> {
-  return new Promise((resolve) => {
-    execFile('npx', ['tsx', 'server/cli/index.ts', ...args], { cwd: process.cwd() }, (error, stdout, stderr) => {
-      const code = error ? (typeof error.code === 'number' ? error.code : 1) : 0;
-      resolve({ code, stdout, stderr });
-    });
-  });
-}
-
-let dir: string;
-const file = async (name: string, value: unknown) => {
-  const path = join(dir, name);
-  await writeFile(path, typeof value === 'string' ? value : JSON.stringify(value));
-  return path;
-};
-
-beforeAll(async () => {
-  dir = await mkdtemp(join(tmpdir(), 'mixwright-cli-'));
-});
-afterAll(async () => {
-  await rm(dir, { recursive: true, force: true });
-});
+const { file } = useScratchDir('mixwright-cli-');
 
 describe('the engine commands', { timeout: 60_000 }, () => {
   it('prints a complete, valid starter configuration', async () => {

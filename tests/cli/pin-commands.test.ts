@@ -1,41 +1,11 @@
-import { execFile } from 'node:child_process';
-import { mkdtemp, rm, writeFile } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { checkPinPlan } from '@shared/pins/check-pins';
 import { RobotConfigSchema } from '@shared/schemas/robot-config';
 import { buildStarterConfig } from '@shared/starter';
 import { withPins } from '../fixtures/robot-config-factory';
+import { cli, useScratchDir } from './support/run-cli';
 
-interface Outcome {
-  code: number;
-  stdout: string;
-  stderr: string;
-}
-
-/** Runs the real command line: `npx tsx server/cli/index.ts ...`. */
-function cli(...args: string[]): Promise<Outcome> {
-  return new Promise((resolve) => {
-    execFile('npx', ['tsx', 'server/cli/index.ts', ...args], { cwd: process.cwd() }, (error, stdout, stderr) => {
-      resolve({ code: error ? (typeof error.code === 'number' ? error.code : 1) : 0, stdout, stderr });
-    });
-  });
-}
-
-let dir: string;
-const file = async (name: string, value: unknown) => {
-  const path = join(dir, name);
-  await writeFile(path, typeof value === 'string' ? value : JSON.stringify(value));
-  return path;
-};
-
-beforeAll(async () => {
-  dir = await mkdtemp(join(tmpdir(), 'mixwright-pins-cli-'));
-});
-afterAll(async () => {
-  await rm(dir, { recursive: true, force: true });
-});
+const { file } = useScratchDir('mixwright-pins-cli-');
 
 /** A starter: its motors and battery suit its driver kind, so it raises no power warning. */
 const starter = buildStarterConfig;

@@ -1,21 +1,9 @@
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { openBrowser, type Browser } from './support/browser';
-import { startApp, type RunningApp } from './support/app-server';
+import { useRunningApp } from './support/use-running-app';
 import { signUpWithRobot } from './support/new-builder';
 
-let app: RunningApp;
-let builder: Browser;
-
-beforeAll(async () => {
-  app = await startApp({ client: inject('clientDir') });
-  builder = await openBrowser({ width: 1280, height: 720 });
-});
-
-afterAll(async () => {
-  await builder?.close();
-  await app?.close();
-});
+const e2e = useRunningApp({ builder: { width: 1280, height: 720 } });
 
 /** Every wheel label of every chassis drawing on the page that the browser draws past the drawing's edge. */
 async function clippedLabels(page: Page): Promise<string[]> {
@@ -35,8 +23,8 @@ async function clippedLabels(page: Page): Promise<string[]> {
 
 describe('wheel labels in the drawings', () => {
   it('stay inside every drawing when the motors have long names of their own', async () => {
-    const page = builder.page;
-    await signUpWithRobot(page, app.url, { name: 'Ines Marlow', email: 'ines.marlow@example.org', team: 'Weir Street Robotics', robot: 'Long Reach', layout: 'quad-mecanum' });
+    const page = e2e.builder.page;
+    await signUpWithRobot(page, e2e.app.url, { name: 'Ines Marlow', email: 'ines.marlow@example.org', team: 'Weir Street Robotics', robot: 'Long Reach', layout: 'quad-mecanum' });
 
     for (const [i, wheel] of ['Front left', 'Front right', 'Rear right', 'Rear left'].entries()) {
       const name = page.getByLabel(`Name of motor ${wheel}`);

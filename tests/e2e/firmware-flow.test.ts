@@ -1,37 +1,26 @@
 import { readFile } from 'node:fs/promises';
 import JSZip from 'jszip';
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { openBrowser, screenshot, type Browser } from './support/browser';
-import { startApp, type RunningApp } from './support/app-server';
+import { describe, expect, it } from 'vitest';
+import { screenshot } from './support/browser';
+import { useRunningApp } from './support/use-running-app';
 
-let app: RunningApp;
-let builder: Browser;
-
-beforeAll(async () => {
-  app = await startApp({ client: inject('clientDir') });
-  builder = await openBrowser({ width: 1366, height: 768 });
-});
-
-afterAll(async () => {
-  await builder?.close();
-  await app?.close();
-});
+const e2e = useRunningApp({ builder: { width: 1366, height: 768 } });
 
 const section = (page: Page, name: string) =>
   page.getByRole('navigation', { name: 'Robot sections' }).getByRole('link', { name: new RegExp(`^${name}`) }).click();
 
 describe('from sign-up to a downloaded firmware bundle', () => {
   it('builds a robot from a starter layout, sets its sticks and pins, saves it and downloads its firmware', async () => {
-    const page = builder.page;
+    const page = e2e.builder.page;
 
     // A new builder and a team.
-    await page.goto(`${app.url}/sign-up`);
+    await page.goto(`${e2e.app.url}/sign-up`);
     await page.getByLabel('Your name').fill('Ines Marlow');
     await page.getByLabel('E-mail').fill('ines.marlow@example.org');
     await page.getByLabel('Password').fill('three wheels at 120 degrees');
     await page.getByRole('button', { name: 'Create account' }).click();
-    await page.waitForURL(`${app.url}/teams`);
+    await page.waitForURL(`${e2e.app.url}/teams`);
     await page.getByLabel('Team name').fill('Larkspur Makers Club');
     await page.getByRole('button', { name: 'Create team' }).click();
     await page.getByRole('heading', { name: 'Larkspur Makers Club' }).waitFor();
@@ -126,6 +115,6 @@ describe('from sign-up to a downloaded firmware bundle', () => {
     await page.getByRole('status').filter({ hasText: 'r2' }).getByText('head', { exact: true }).waitFor();
     await screenshot(page, 'flow-09-history');
 
-    expect(builder.problems.filter((p) => !p.includes('401 (Unauthorized)'))).toEqual([]);
+    expect(e2e.builder.problems.filter((p) => !p.includes('401 (Unauthorized)'))).toEqual([]);
   });
 });

@@ -1,32 +1,20 @@
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { openBrowser, screenshot, type Browser } from './support/browser';
-import { startApp, type RunningApp } from './support/app-server';
+import { describe, expect, it } from 'vitest';
+import { screenshot } from './support/browser';
+import { useRunningApp } from './support/use-running-app';
 
-let app: RunningApp;
-let founder: Browser;
-let guest: Browser;
-
-beforeAll(async () => {
-  app = await startApp({ client: inject('clientDir') });
-  [founder, guest] = await Promise.all([openBrowser(), openBrowser()]);
-});
-
-afterAll(async () => {
-  await Promise.all([founder?.close(), guest?.close()]);
-  await app?.close();
-});
+const e2e = useRunningApp({ founder: {}, guest: {} });
 
 const GUEST_EMAIL = 'wren.guest@example.org';
 
 describe('inviting someone to a team', () => {
   it('takes a new person from sign-up to a team, and a guest from the e-mailed link to viewer', async () => {
-    const page = founder.page;
-    await page.goto(`${app.url}/sign-up`);
+    const page = e2e.founder.page;
+    await page.goto(`${e2e.app.url}/sign-up`);
     await page.getByLabel('Your name').fill('Orla Founder');
     await page.getByLabel('E-mail').fill('orla.founder@example.org');
     await page.getByLabel('Password').fill('gears and sprockets');
     await page.getByRole('button', { name: 'Create account' }).click();
-    await page.waitForURL(`${app.url}/teams`);
+    await page.waitForURL(`${e2e.app.url}/teams`);
     await page.getByText('You are not in a team yet').waitFor();
     await screenshot(page, 'e2e-teams-empty');
 
@@ -46,8 +34,8 @@ describe('inviting someone to a team', () => {
     await screenshot(page, 'e2e-team-people-invited');
 
     // The guest opens the development mailbox and follows the link in the invitation.
-    const g = guest.page;
-    await g.goto(`${app.url}/dev/mailbox`);
+    const g = e2e.guest.page;
+    await g.goto(`${e2e.app.url}/dev/mailbox`);
     const message = g.locator('article', { hasText: GUEST_EMAIL });
     await message.getByRole('heading', { name: 'Orla Founder invited you to Hilltop Rover Club on Mixwright' }).waitFor();
     await message.getByRole('link', { name: /\/invitations\// }).click();
@@ -72,7 +60,7 @@ describe('inviting someone to a team', () => {
     await page.reload();
     await expect(page.getByLabel('Role of Wren Guest').inputValue()).resolves.toBe('viewer');
 
-    const unexpected = [...founder.problems, ...guest.problems].filter((p) => !p.includes('401 (Unauthorized)'));
+    const unexpected = [...e2e.founder.problems, ...e2e.guest.problems].filter((p) => !p.includes('401 (Unauthorized)'));
     expect(unexpected).toEqual([]);
   });
 });

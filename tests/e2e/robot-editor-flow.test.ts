@@ -1,31 +1,23 @@
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { openBrowser, screenshot, type Browser } from './support/browser';
-import { startApp, type RunningApp } from './support/app-server';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { screenshot } from './support/browser';
+import { useRunningApp } from './support/use-running-app';
 
-let app: RunningApp;
-let builder: Browser;
+const e2e = useRunningApp({ builder: { width: 1366, height: 768 } });
 
-beforeAll(async () => {
-  app = await startApp({ client: inject('clientDir') });
-  builder = await openBrowser({ width: 1366, height: 768 });
+beforeAll(() => {
   // Reloading with unsaved changes makes the browser ask; the builder says "leave".
-  builder.page.on('dialog', (dialog) => void dialog.accept());
-});
-
-afterAll(async () => {
-  await builder?.close();
-  await app?.close();
+  e2e.builder.page.on('dialog', (dialog) => void dialog.accept());
 });
 
 describe('building a robot in the editor', () => {
   it('takes a new builder from sign-up to a saved second revision, with the draft surviving a reload', async () => {
-    const page = builder.page;
-    await page.goto(`${app.url}/sign-up`);
+    const page = e2e.builder.page;
+    await page.goto(`${e2e.app.url}/sign-up`);
     await page.getByLabel('Your name').fill('Tamsin Wright');
     await page.getByLabel('E-mail').fill('tamsin.wright@example.org');
     await page.getByLabel('Password').fill('omni wheels all the way');
     await page.getByRole('button', { name: 'Create account' }).click();
-    await page.waitForURL(`${app.url}/teams`);
+    await page.waitForURL(`${e2e.app.url}/teams`);
     await page.getByLabel('Team name').fill('Quarry Lane Robotics');
     await page.getByRole('button', { name: 'Create team' }).click();
     await page.getByRole('heading', { name: 'Quarry Lane Robotics' }).waitFor();
@@ -121,6 +113,6 @@ describe('building a robot in the editor', () => {
     await expect(row.textContent()).resolves.toMatch(/Quad mecanum.*ESP32 DevKitC.*r2/);
     await screenshot(page, 'editor-dashboard');
 
-    expect(builder.problems.filter((p) => !p.includes('401 (Unauthorized)'))).toEqual([]);
+    expect(e2e.builder.problems.filter((p) => !p.includes('401 (Unauthorized)'))).toEqual([]);
   });
 });

@@ -1,29 +1,17 @@
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { openBrowser, type Browser } from './support/browser';
-import { startApp, type RunningApp } from './support/app-server';
+import { describe, expect, it } from 'vitest';
+import { useRunningApp } from './support/use-running-app';
 import { signUpWithRobot } from './support/new-builder';
 
-let app: RunningApp;
-let builder: Browser;
-
-beforeAll(async () => {
-  app = await startApp({ client: inject('clientDir') });
-  builder = await openBrowser({ width: 1280, height: 720 });
-});
-
-afterAll(async () => {
-  await builder?.close();
-  await app?.close();
-});
+const e2e = useRunningApp({ builder: { width: 1280, height: 720 } });
 
 const pagesOf = (pdf: Buffer) => (pdf.toString('latin1').match(/\/Type\s*\/Page(?!s)/g) ?? []).length;
 
 describe('the printed wiring sheet', () => {
   it('fits a four-motor robot with two drivers on one page of A4 and one of Letter', async () => {
-    const page = builder.page;
-    await signUpWithRobot(page, app.url, { name: 'Tova Brennan', email: 'tova.brennan@example.org', team: 'Lock Keepers', robot: 'Four Square', layout: 'skid-steer' });
+    const page = e2e.builder.page;
+    await signUpWithRobot(page, e2e.app.url, { name: 'Tova Brennan', email: 'tova.brennan@example.org', team: 'Lock Keepers', robot: 'Four Square', layout: 'skid-steer' });
     const robotPath = new URL(page.url()).pathname.replace(/\/chassis$/, '');
-    await page.goto(`${app.url}${robotPath}/wiring-sheet`);
+    await page.goto(`${e2e.app.url}${robotPath}/wiring-sheet`);
     await page.getByRole('table', { name: /Pins on the/ }).first().waitFor();
     expect(await page.getByRole('row').count()).toBeGreaterThan(20);
     await page.emulateMedia({ media: 'print' });

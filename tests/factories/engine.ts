@@ -43,15 +43,3 @@ export function makeCustomConfig(wheels: Wheel[]): RobotConfig {
 export function rawConfig(layout: DriveLayoutId = 'quad-mecanum'): Record<string, any> {
   return JSON.parse(JSON.stringify(makeConfig(layout)));
 }
-
-/** Deterministic pseudo-random numbers (mulberry32), so a failing layout can be replayed. */
-export function seededRandom(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}

@@ -1,6 +1,7 @@
-import { desc, eq } from 'drizzle-orm';
+import { and, desc, eq, like, lt, or, sql, type SQL } from 'drizzle-orm';
 import type { Db } from '@server/db/client';
 import { auditEvents, users } from '@server/db/schema';
+import type { AuditKind } from '@shared/schemas/history';
 import type { TeamActivity } from '@shared/schemas/teams';
 
 export interface AuditEntry {
@@ -11,6 +12,16 @@ export interface AuditEntry {
   target?: string | null;
   detail?: Record<string, unknown>;
 }
+
+const SIGN_IN = 'user.signed_in';
+
+// Which actions each filter shows, by their dotted prefix.
+const KIND_PREFIXES: Record<Exclude<AuditKind, 'all' | 'sign-ins'>, string[]> = {
+  people: ['team.', 'invitation.', 'member.'],
+  robots: ['robot.', 'photo.'],
+  revisions: ['revision.'],
+  flashes: ['flash.'],
+};
 
 export function recordEvent(db: Db, entry: AuditEntry): void {
   db.insert(auditEvents)
@@ -24,7 +35,8 @@ export function recordEvent(db: Db, entry: AuditEntry): void {
     .run();
 }
 
-export function listTeamEvents(db: Db, teamId: string, limit: number): TeamActivity[] {
+/** Events with the name of whoever did them, as the team's activity lists show them. */
+function selectActivity(db: Db) {
   return db
     .select({
       id: auditEvents.id,
@@ -35,16 +47,49 @@ export function listTeamEvents(db: Db, teamId: string, limit: number): TeamActiv
       createdAt: auditEvents.createdAt,
     })
     .from(auditEvents)
-    .leftJoin(users, eq(users.id, auditEvents.actorId))
+    .leftJoin(users, eq(users.id, auditEvents.actorId));
+}
+
+function toActivity<Row extends { detail: string; createdAt: Date }>(row: Row) {
+  return { ...row, detail: JSON.parse(row.detail) as Record<string, unknown>, createdAt: row.createdAt.toISOString() };
+}
+
+/** The latest things done in the team, newest first. */
+export function listTeamEvents(db: Db, teamId: string, limit: number): TeamActivity[] {
+  return selectActivity(db)
     .where(eq(auditEvents.teamId, teamId))
     .orderBy(desc(auditEvents.createdAt), desc(auditEvents.id))
     .limit(limit)
     .all()
-    .map((row) => ({
-      ...row,
-      detail: JSON.parse(row.detail) as Record<string, unknown>,
-      createdAt: row.createdAt.toISOString(),
-    }));
+    .map(toActivity);
+}
+
+function kindFilter(kind: AuditKind): SQL | undefined {
+  if (kind === 'all') return undefined;
+  if (kind === 'sign-ins') return eq(auditEvents.action, SIGN_IN);
+  return or(...KIND_PREFIXES[kind].map((prefix) => like(auditEvents.action, `${prefix}%`)));
+}
+
+/**
+ * The team's audit log, newest first: everything done in the team, and the sign-ins of its
+ * members since they joined (sign-ins belong to no team, so they are matched by membership).
+ */
+export function listAuditLog(db: Db, teamId: string, options: { kind: AuditKind; before?: number; limit: number }): TeamActivity[] {
+  const memberSignIn = and(
+    sql`${auditEvents.teamId} is null`,
+    eq(auditEvents.action, SIGN_IN),
+    // Plain table names: drizzle may leave columns unqualified, and inside this subquery an
+    // unqualified created_at would be the membership's own.
+    sql`exists (select 1 from memberships m where m.team_id = ${teamId} and m.user_id = audit_events.actor_id and m.created_at <= audit_events.created_at)`,
+  );
+  const conditions = [or(eq(auditEvents.teamId, teamId), memberSignIn), kindFilter(options.kind)];
+  if (options.before !== undefined) conditions.push(lt(auditEvents.id, options.before));
+  return selectActivity(db)
+    .where(and(...conditions))
+    .orderBy(desc(auditEvents.id))
+    .limit(options.limit)
+    .all()
+    .map(toActivity);
 }
 
 export function listUserEvents(db: Db, actorId: string): { action: string; createdAt: Date }[] {

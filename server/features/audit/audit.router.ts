@@ -3,7 +3,7 @@ import type { AppContext } from '@server/config';
 import { requireUser } from '@server/middleware/session';
 import { grantedAccess, requireTeamRole } from '@server/middleware/team-access';
 import { AuditQuerySchema } from '@shared/schemas/history';
-import { listAuditLog } from './audit-log.repository';
+import { listAuditLog } from './audit.repository';
 
 /** The full audit log of a team, sign-ins of its members included: owners only. */
 export function auditRoutes(ctx: AppContext): Router {

@@ -2,6 +2,7 @@ import { and, desc, eq } from 'drizzle-orm';
 import type { Db } from '@server/db/client';
 import { flashes, revisions, users } from '@server/db/schema';
 import type { FlashEntry } from '@shared/schemas/history';
+import type { RevisionSummary } from '@shared/schemas/robots';
 
 /** A stored revision as it is in the table: the configuration still as JSON text. */
 export interface StoredRevision {
@@ -21,6 +22,9 @@ const storedColumns = {
   createdAt: revisions.createdAt,
   configText: revisions.config,
 };
+
+/** The revision as lists show it, without its configuration. */
+export const revisionSummary = ({ number, message, authorName, createdAt }: StoredRevision): RevisionSummary => ({ number, message, authorName, createdAt });
 
 export function listStoredRevisions(db: Db, robotId: string): StoredRevision[] {
   return db

@@ -7,9 +7,9 @@ import { filesDiff } from '@shared/history/file-diff';
 import { settingChanges } from '@shared/history/setting-changes';
 import type { CurrentUser } from '@shared/schemas/auth';
 import type { RevisionDiff, RobotHistory } from '@shared/schemas/history';
-import type { RevisionDetail, RevisionSummary } from '@shared/schemas/robots';
+import type { RevisionDetail } from '@shared/schemas/robots';
 import type { BundleRenderer } from './bundle-renderer';
-import { findStoredRevision, listFlashes, listStoredRevisions, type StoredRevision } from './history.repository';
+import { findStoredRevision, listFlashes, listStoredRevisions, revisionSummary, type StoredRevision } from './history.repository';
 import { revisionFacts } from './revision-facts';
 
 function liveRobot(ctx: AppContext, robotId: string) {
@@ -18,14 +18,12 @@ function liveRobot(ctx: AppContext, robotId: string) {
   return robot;
 }
 
-const summary = ({ number, message, authorName, createdAt }: StoredRevision): RevisionSummary => ({ number, message, authorName, createdAt });
-
 /** Every revision, newest first, with its problem count and the times it was flashed. */
 export function robotHistory(ctx: AppContext, robotId: string): RobotHistory {
   const robot = liveRobot(ctx, robotId);
   const flashLog = listFlashes(ctx.db, robotId);
   const revisions = listStoredRevisions(ctx.db, robotId).map((revision) => ({
-    ...summary(revision),
+    ...revisionSummary(revision),
     problems: revisionFacts(revision).problems,
     flashes: flashLog
       .filter((f) => f.revisionNumber === revision.number)
@@ -72,8 +70,8 @@ export function revisionDiff(ctx: AppContext, robotId: string, from: number, to:
   const before = storedOrNotFound(ctx, robotId, from);
   const after = storedOrNotFound(ctx, robotId, to);
   return {
-    from: summary(before),
-    to: summary(after),
+    from: revisionSummary(before),
+    to: revisionSummary(after),
     settings: settingChanges(revisionFacts(before).config, revisionFacts(after).config),
     files: generatedFiles(render, before, after),
   };

@@ -1,6 +1,7 @@
-import { and, asc, desc, eq, isNull, sql } from 'drizzle-orm';
+import { and, asc, eq, isNull, sql } from 'drizzle-orm';
 import type { Db } from '@server/db/client';
-import { flashes, revisions, robots, teams, users } from '@server/db/schema';
+import { flashes, revisions, robots, teams } from '@server/db/schema';
+import { findStoredRevision, listStoredRevisions, revisionSummary } from '@server/features/history/history.repository';
 import { newId } from '@server/lib/ids';
 import { parseAnyVersion } from '@shared/schemas/migrate-config';
 import type { RobotConfig } from '@shared/schemas/robot-config';
@@ -92,34 +93,13 @@ export function insertRevision(
   db.update(robots).set({ headRevision: input.number }).where(eq(robots.id, input.robotId)).run();
 }
 
-const revisionColumns = {
-  number: revisions.number,
-  message: revisions.message,
-  authorName: users.name,
-  createdAt: revisions.createdAt,
-};
-
 export function listRevisions(db: Db, robotId: string): RevisionSummary[] {
-  return db
-    .select(revisionColumns)
-    .from(revisions)
-    .leftJoin(users, eq(users.id, revisions.authorId))
-    .where(eq(revisions.robotId, robotId))
-    .orderBy(desc(revisions.number))
-    .all()
-    .map((row) => ({ ...row, createdAt: row.createdAt.toISOString() }));
+  return listStoredRevisions(db, robotId).map(revisionSummary);
 }
 
 export function findRevision(db: Db, robotId: string, number: number) {
-  const row = db
-    .select({ ...revisionColumns, config: revisions.config })
-    .from(revisions)
-    .leftJoin(users, eq(users.id, revisions.authorId))
-    .where(and(eq(revisions.robotId, robotId), eq(revisions.number, number)))
-    .get();
-  return row
-    ? { ...row, createdAt: row.createdAt.toISOString(), config: parseAnyVersion(JSON.parse(row.config)) }
-    : undefined;
+  const stored = findStoredRevision(db, robotId, number);
+  return stored ? { ...revisionSummary(stored), config: parseAnyVersion(JSON.parse(stored.configText)) } : undefined;
 }
 
 export function insertFlash(

@@ -7,7 +7,7 @@ import { cyclesPerMs, simulate, type SimEvent, type SimResult } from '../sim/sim
 import { unoRegisters } from '../helpers/avr-registers';
 import { ibusFrame, sbusFrame } from '../helpers/frames';
 import { signedUnoDuty } from '../helpers/motor-duty';
-import { seededRandom } from '../helpers/random';
+import { seededRandom } from '../../factories/random';
 import { buildForSimulator, engineDuties } from '../helpers/sim-firmware';
 import { unoWiredConfig } from '../helpers/uno-configs';
 

@@ -8,7 +8,7 @@ import { compileAvrSketch, type AvrCompileResult } from '@server/features/firmwa
 import { runLimited } from '@server/features/firmware/toolchain/run-tool';
 import { sketchFolders, writeBundle } from '../helpers/bundle-files';
 import { lexC } from '../helpers/c-lexer';
-import { sampleConfig } from '../helpers/sample-config';
+import { sampleConfig } from '../../factories/robot-config';
 
 // Hostile names for the robot, its motors, wheels, channels and driver must never become code:
 // every bundle still compiles with -Wall -Wextra -Werror, and user text appears only inside

@@ -11,7 +11,7 @@ import { getBoard } from '@shared/boards/boards';
 import { assignPins } from '@shared/pins/assign-pins';
 import { INPUT_SOURCE_IDS } from '@shared/schemas/ids';
 import { buildStarterConfig } from '@shared/starter';
-import { sampleConfig } from '../helpers/sample-config';
+import { sampleConfig } from '../../factories/robot-config';
 
 const file = (files: BundleFile[], path: string) => {
   const found = files.find((f) => f.path === path);

@@ -3,7 +3,7 @@ import { assignPins } from '@shared/pins/assign-pins';
 import { buildStarterConfig } from '@shared/starter';
 import { renderBundle, type BundleFile } from '@server/features/firmware/render-bundle';
 import { verifyBundle } from '@server/features/firmware/verify-bundle';
-import { sampleConfig } from '../helpers/sample-config';
+import { sampleConfig } from '../../factories/robot-config';
 
 const uno = () => renderBundle(sampleConfig(), { revision: 2 });
 const edit = (files: BundleFile[], path: string, change: (text: string) => string) =>

@@ -4,15 +4,10 @@
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { fileURLToPath } from 'node:url';
-import react from '@vitejs/plugin-react';
-import tailwindcss from '@tailwindcss/vite';
-import { chromium } from 'playwright-core';
-import { createServer } from 'vite';
 import type { AppContext } from '@server/config';
 import { openDatabase } from '@server/db/client';
 import { runMigrations } from '@server/db/migrate';
-import { listAuditLog } from '@server/features/audit/audit-log.repository';
+import { listAuditLog } from '@server/features/audit/audit.repository';
 import { insertUser } from '@server/features/auth/auth.repository';
 import { renderBundle } from '@server/features/firmware/render-bundle';
 import { flashLog, recordFlash } from '@server/features/flashes/flashes.service';
@@ -20,9 +15,9 @@ import { restoreRevision, revisionDiff, robotHistory } from '@server/features/hi
 import { deleteRobot, listBin } from '@server/features/robot-bin/robot-bin.service';
 import { createRobot, robotDetail, saveRevision } from '@server/features/robots/robots.service';
 import { insertMembership, insertTeamWithOwner } from '@server/features/teams/teams.repository';
-import { aliases } from '../../../vite.config';
 import { pngImage } from '../../factories/images';
-import { sampleConfig } from '../../firmware/helpers/sample-config';
+import { sampleConfig } from '../../factories/robot-config';
+import { shootHarness } from '../shared/shoot-harness';
 
 function fixture() {
   const dir = mkdtempSync(join(tmpdir(), 'mw-history-shots-'));
@@ -62,48 +57,17 @@ function fixture() {
   return { answers, detail };
 }
 
-const here = fileURLToPath(new URL('.', import.meta.url));
-const [outDir = '/tmp/mixwright-shots', ...queries] = process.argv.slice(2);
-const theme = fileURLToPath(new URL('../../../src/index.css', import.meta.url));
-
-const server = await createServer({
-  configFile: false,
-  root: here,
-  plugins: [react(), tailwindcss()],
+await shootHarness({
+  harness: import.meta.url,
+  title: 'Mixwright history harness',
+  settleMs: 1500,
+  defaultQuery: 'part=history',
   define: { __HISTORY_FIXTURE__: JSON.stringify(fixture()) },
-  resolve: { alias: [{ find: /^mixwright-theme$/, replacement: theme }, ...Object.entries(aliases).map(([find, replacement]) => ({ find, replacement }))] },
-  server: { port: 0, strictPort: false, host: '127.0.0.1', fs: { strict: false } },
-  logLevel: 'warn',
+  // click=text opens a collapsed file diff (or presses any button) before the shot.
+  beforeShot: async ({ page, params }) => {
+    const click = params.get('click');
+    if (!click) return;
+    await page.getByText(click, { exact: true }).first().click();
+    await page.waitForTimeout(300);
+  },
 });
-await server.listen();
-const address = server.httpServer?.address();
-const port = typeof address === 'object' && address ? address.port : 5173;
-const profile = mkdtempSync(join(tmpdir(), 'mw-chrome-'));
-const context = await chromium.launchPersistentContext(profile, {
-  executablePath: '/usr/bin/chromium',
-  headless: true,
-  viewport: { width: 1366, height: 768 },
-  args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
-});
-try {
-  const page = await context.newPage();
-  page.on('console', (m) => m.type() === 'error' && console.error('page:', m.text()));
-  page.on('pageerror', (e) => console.error('page error:', e.message));
-  for (const [i, query] of (queries.length ? queries : ['part=history']).entries()) {
-    await page.goto(`http://127.0.0.1:${port}/?${query}`);
-    await page.waitForTimeout(1500);
-    // click=text opens a collapsed file diff (or presses any button) before the shot.
-    const click = new URLSearchParams(query).get('click');
-    if (click) {
-      await page.getByText(click, { exact: true }).first().click();
-      await page.waitForTimeout(300);
-    }
-    const file = join(outDir, `${String(i).padStart(2, '0')}-${query.replace(/[^a-z0-9]+/gi, '_')}.png`);
-    await page.screenshot({ path: file, fullPage: process.env.FULL === '1' });
-    console.log(file);
-  }
-} finally {
-  await context.close();
-  await server.close();
-  rmSync(profile, { recursive: true, force: true });
-}

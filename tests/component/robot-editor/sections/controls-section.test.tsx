@@ -32,6 +32,38 @@ describe('the controls section', () => {
     expect(latest().controls.channels.find((c) => c.number === 3)).toMatchObject({ low: 1000, centre: 1500, high: 2000 });
   });
 
+  it('renumbers a channel when its number is left, and the stick using it follows', async () => {
+    const user = userEvent.setup();
+    const config = starter();
+    const { latest } = renderSection(ControlsSection, config);
+    const used = config.controls.axes.forward.channel!;
+    const number = screen.getByLabelText(`Number of channel ${used}`);
+    await user.clear(number);
+    await user.type(number, '9');
+    await user.tab();
+    expect(latest().controls.channels.map((c) => c.number)).toContain(9);
+    expect(latest().controls.axes.forward.channel).toBe(9);
+  });
+
+  it('refuses a channel number already in the table, says why under it and puts the old number back', async () => {
+    const user = userEvent.setup();
+    const [first, second] = starter().controls.channels;
+    renderSection(ControlsSection, starter());
+    const number = screen.getByLabelText(`Number of channel ${first.number}`) as HTMLInputElement;
+    await user.clear(number);
+    await user.type(number, `${second.number}{Enter}`);
+    expect(screen.getByRole('alert').textContent).toBe(`✕ Channel ${second.number} is already in the table`);
+    expect(number.value).toBe(String(first.number));
+  });
+
+  it('removes a channel with its row’s remove button', async () => {
+    const user = userEvent.setup();
+    const [first] = starter().controls.channels;
+    const { latest } = renderSection(ControlsSection, starter());
+    await user.click(screen.getByRole('button', { name: `Remove channel ${first.number}` }));
+    expect(latest().controls.channels.map((c) => c.number)).not.toContain(first.number);
+  });
+
   it('refuses a calibration whose centre is not between the ends, under the table', async () => {
     const user = userEvent.setup();
     renderSection(ControlsSection, starter());

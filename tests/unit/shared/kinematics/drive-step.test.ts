@@ -4,7 +4,8 @@ import { computeMixing, forwardKinematics, mixSticks, type Sticks } from '@share
 import { DRIVE_LAYOUT_IDS, STICK_AXES } from '@shared/schemas/ids';
 import type { RobotConfig } from '@shared/schemas/robot-config';
 import { shapeAxis } from '@shared/shaping/input-curves';
-import { makeConfig, seededRandom } from '../../../factories/engine';
+import { makeConfig } from '../../../factories/engine';
+import { seededRandom } from '../../../factories/random';
 
 const randomSticks = (random: () => number): Sticks => ({ forward: random() * 2 - 1, strafe: random() * 2 - 1, yaw: random() * 2 - 1 });
 

@@ -6,7 +6,8 @@ import { computeMixing, desaturate, forwardKinematics, mixSticks } from '@shared
 import { wheelJacobian } from '@shared/kinematics/wheel-equation';
 import { DRIVE_LAYOUT_IDS } from '@shared/schemas/ids';
 import type { Wheel } from '@shared/schemas/robot-config';
-import { makeConfig, makeCustomConfig, makeWheel, seededRandom } from '../../../factories/engine';
+import { makeConfig, makeCustomConfig, makeWheel } from '../../../factories/engine';
+import { seededRandom } from '../../../factories/random';
 
 /** A random wheel table of three to six omni or mecanum wheels. */
 function randomLayout(seed: number): Wheel[] {

@@ -1,70 +1,24 @@
-import { cx } from '@/components/ui/cx';
 import type { FieldPath } from '@shared/history/field-path';
 import { fieldName } from '@shared/history/field-words';
 import { useDraftField, useErrorsUnder } from './draft-fields-context';
-import type { Option } from './draft-fields';
-import { compactInputClasses, NumberInput } from './number-input';
+import { DraftNumberInput, DraftSelect, DraftTextInput, type Option } from './draft-controls';
 
 // Table cells: no visible label (the column heading is one; aria-label names the cell), no
 // error text in the cell (the row would grow): a red border, and the reason below the table.
 
 export function NumberCell({ path, label, width = 'w-20', scale, allowEmpty }: { path: FieldPath; label: string; width?: string; scale?: number; allowEmpty?: boolean }) {
   const field = useDraftField<number | null>(path);
-  return (
-    <NumberInput
-      aria-label={label}
-      data-field={field.key}
-      value={field.value}
-      onCommit={field.set}
-      scale={scale}
-      allowEmpty={allowEmpty}
-      invalid={Boolean(field.error)}
-      disabled={field.disabled}
-      title={field.error}
-      className={width}
-    />
-  );
+  return <DraftNumberInput field={field} width={width} scale={scale} allowEmpty={allowEmpty} aria-label={label} title={field.error} />;
 }
 
 export function TextCell({ path, label, width = 'w-32' }: { path: FieldPath; label: string; width?: string }) {
   const field = useDraftField<string>(path);
-  return (
-    <input
-      type="text"
-      aria-label={label}
-      autoComplete="off"
-      data-field={field.key}
-      value={field.value ?? ''}
-      disabled={field.disabled}
-      aria-invalid={field.error ? true : undefined}
-      title={field.error}
-      onChange={(e) => field.set(e.target.value)}
-      className={cx(compactInputClasses, width, field.error ? 'border-error' : 'border-rule-strong')}
-    />
-  );
+  return <DraftTextInput field={field} width={width} aria-label={label} title={field.error} />;
 }
 
 export function SelectCell<V extends string | number | null>({ path, label, options, width = 'w-32' }: { path: FieldPath; label: string; options: Option<V>[]; width?: string }) {
   const field = useDraftField<V>(path);
-  const encode = (v: V) => (v === null ? '' : String(v));
-  return (
-    <select
-      aria-label={label}
-      data-field={field.key}
-      value={encode(field.value)}
-      disabled={field.disabled}
-      aria-invalid={field.error ? true : undefined}
-      title={field.error}
-      onChange={(e) => field.set(options.find((o) => encode(o.value) === e.target.value)?.value as V)}
-      className={cx(compactInputClasses, 'py-1', width, field.error ? 'border-error' : 'border-rule-strong')}
-    >
-      {options.map((o) => (
-        <option key={encode(o.value)} value={encode(o.value)}>
-          {o.label}
-        </option>
-      ))}
-    </select>
-  );
+  return <DraftSelect field={field} options={options} width={width} className="py-1" aria-label={label} title={field.error} />;
 }
 
 export function CheckboxCell({ path, label }: { path: FieldPath; label: string }) {

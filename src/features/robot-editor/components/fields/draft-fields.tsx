@@ -2,7 +2,7 @@ import { useId, type ReactNode } from 'react';
 import { cx } from '@/components/ui/cx';
 import type { FieldPath } from '@shared/history/field-path';
 import { useDraftField } from './draft-fields-context';
-import { compactInputClasses, NumberInput } from './number-input';
+import { DraftNumberInput, DraftSelect, DraftTextInput, type Option } from './draft-controls';
 
 interface LabelledProps {
   path: FieldPath;
@@ -40,29 +40,11 @@ export function DraftNumberField({
   const field = useDraftField<number | null>(path);
   return (
     <FieldFrame id={id} label={label} hint={hint} error={field.error} className={className}>
-      <NumberInput
-        id={id}
-        data-field={field.key}
-        value={field.value}
-        onCommit={field.set}
-        scale={scale}
-        allowEmpty={allowEmpty}
-        invalid={Boolean(field.error)}
-        aria-describedby={`${id}-note`}
-        disabled={field.disabled}
-        className={width}
-      />
+      <DraftNumberInput id={id} field={field} width={width} scale={scale} allowEmpty={allowEmpty} aria-describedby={`${id}-note`} />
       {unit && <span className="text-sm text-ink-muted">{unit}</span>}
     </FieldFrame>
   );
 }
-
-export interface Option<V extends string | number | null> {
-  value: V;
-  label: string;
-}
-
-const encode = (v: string | number | null) => (v === null ? '' : String(v));
 
 export function DraftSelectField<V extends string | number | null>({
   path,
@@ -76,22 +58,7 @@ export function DraftSelectField<V extends string | number | null>({
   const field = useDraftField<V>(path);
   return (
     <FieldFrame id={id} label={label} hint={hint} error={field.error} className={className}>
-      <select
-        id={id}
-        data-field={field.key}
-        value={encode(field.value)}
-        disabled={field.disabled}
-        aria-invalid={field.error ? true : undefined}
-        aria-describedby={`${id}-note`}
-        onChange={(e) => field.set(options.find((o) => encode(o.value) === e.target.value)?.value as V)}
-        className={cx(compactInputClasses, 'py-1.5', width, field.error ? 'border-error' : 'border-rule-strong')}
-      >
-        {options.map((o) => (
-          <option key={encode(o.value)} value={encode(o.value)}>
-            {o.label}
-          </option>
-        ))}
-      </select>
+      <DraftSelect id={id} field={field} options={options} width={width} className="py-1.5" aria-describedby={`${id}-note`} />
     </FieldFrame>
   );
 }
@@ -130,18 +97,7 @@ export function DraftTextField({ path, label, hint, width = 'w-64', className }:
   const field = useDraftField<string>(path);
   return (
     <FieldFrame id={id} label={label} hint={hint} error={field.error} className={className}>
-      <input
-        id={id}
-        type="text"
-        autoComplete="off"
-        data-field={field.key}
-        value={field.value ?? ''}
-        disabled={field.disabled}
-        aria-invalid={field.error ? true : undefined}
-        aria-describedby={`${id}-note`}
-        onChange={(e) => field.set(e.target.value)}
-        className={cx(compactInputClasses, width, field.error ? 'border-error' : 'border-rule-strong')}
-      />
+      <DraftTextInput id={id} field={field} width={width} aria-describedby={`${id}-note`} />
     </FieldFrame>
   );
 }

@@ -88,6 +88,10 @@ describe('links to fields', () => {
     expect(fieldLink(['motors', 1, 'name'])).toBe('../chassis?field=motors.1.name');
     expect(fieldLink(['unknown'])).toBeNull();
   });
+
+  it("lead to Wiring for the handheld remote's pins, which Wiring plans beside the robot's", () => {
+    expect(fieldLink(['controls', 'link', 'remotePins', 'throttle', 'pin'])).toBe('../wiring?field=controls.link.remotePins.throttle.pin');
+  });
 });
 
 it('gives a file its size in bytes of UTF-8', () => {

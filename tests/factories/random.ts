@@ -1,4 +1,4 @@
-/** A small seeded generator (mulberry32), so random test positions repeat run to run. */
+/** Deterministic pseudo-random numbers (mulberry32), so a failing case can be replayed run to run. */
 export function seededRandom(seed: number): () => number {
   let a = seed >>> 0;
   return () => {
