@@ -70,6 +70,8 @@ export function createApp(deps: AppDeps): Express {
   api.use(apiNotFound);
 
   const app = express();
+  // Express reads the client address from X-Forwarded-For only through this many proxies.
+  app.set('trust proxy', config.trustProxyHops);
   app.use(securityHeaders(config));
   app.use('/api', api);
   if (showMailbox) app.use(devMailboxPage(deps.mailbox!));

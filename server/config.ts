@@ -28,6 +28,11 @@ export interface AppConfig {
   };
   /** Largest JSON body accepted, in bytes. */
   jsonLimitBytes: number;
+  /**
+   * Reverse proxies in front of the app. With 0 the client address is the socket's; behind a
+   * proxy that would put every visitor under one rate limit, so the proxy's hop count is set.
+   */
+  trustProxyHops: number;
 }
 
 export function configFromEnv(env: Env): AppConfig {
@@ -44,6 +49,7 @@ export function configFromEnv(env: Env): AppConfig {
       passwordReset: { windowMs: 60 * 60_000, limit: 5 },
     },
     jsonLimitBytes: 1024 * 1024,
+    trustProxyHops: env.TRUST_PROXY,
   };
 }
 

@@ -12,6 +12,8 @@ const EnvSchema = z
     MAIL_FROM: z.string().min(3).default('Mixwright <no-reply@mixwright.invalid>'),
     /** The address people reach the app at; used in e-mailed links and the origin check. */
     APP_URL: z.url().optional(),
+    /** How many reverse proxies stand in front of the app; their X-Forwarded-For is then believed. */
+    TRUST_PROXY: z.coerce.number().int().min(0).max(10).default(0),
   })
   .superRefine((env, ctx) => {
     if (env.NODE_ENV === 'production' && !env.SMTP_URL) {

@@ -9,6 +9,7 @@ import { openDatabase } from './db/client';
 import { runMigrations } from './db/migrate';
 import { describeSeededAccounts, isDatabaseEmpty, seedDemo } from './db/seed/seed-demo';
 import { readEnv } from './env';
+import { BIN_DAYS, purgeExpiredRobots } from './features/robot-bin/robot-bin.service';
 import { startFakeSmtp, type FakeSmtp } from './lib/mail/fake-smtp';
 import { createSmtpMailer } from './lib/mail/mailer';
 
@@ -22,6 +23,20 @@ if (isDatabaseEmpty(database.db)) {
   const accounts = await seedDemo(database.db, { passwordCost: config.passwordCost });
   console.log(`\n${describeSeededAccounts(accounts, config.appUrl)}\n`);
 }
+
+// Robots past their days in the bin are removed at start and then every six hours.
+const PURGE_EVERY_MS = 6 * 60 * 60_000;
+async function purgeBin(): Promise<void> {
+  try {
+    const removed = await purgeExpiredRobots(database.db, env.DATA_DIR);
+    if (removed > 0) console.log(`Removed ${removed} robot(s) deleted more than ${BIN_DAYS} days ago`);
+  } catch (error) {
+    console.error('Emptying the robot bin failed:', error);
+  }
+}
+await purgeBin();
+const purgeTimer = setInterval(() => void purgeBin(), PURGE_EVERY_MS);
+purgeTimer.unref();
 
 let fakeSmtp: FakeSmtp | null = null;
 if (!env.SMTP_URL) {
@@ -50,6 +65,7 @@ async function stop(signal: string): Promise<void> {
   if (stopping) return;
   stopping = true;
   console.log(`\n${signal}: stopping`);
+  clearInterval(purgeTimer);
   httpServer.closeAllConnections();
   await new Promise<void>((resolve) => httpServer.close(() => resolve()));
   await client.close();

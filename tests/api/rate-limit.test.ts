@@ -36,3 +36,30 @@ describe('rate limits', () => {
     expect(statuses).toEqual([202, 202, 429]);
   });
 });
+
+describe('rate limits behind a reverse proxy', () => {
+  const tightLimits = { rateLimits: { signIn: { windowMs: 60_000, limit: 3 }, passwordReset: { windowMs: 60_000, limit: 1 } } };
+  const resetFrom = (app: TestContext, address: string) =>
+    client(app).post('/api/auth/password-reset').set('X-Forwarded-For', address).send({ email: uniqueEmail() });
+
+  it('counts each forwarded client address on its own when one proxy hop is trusted', async () => {
+    const proxied = await createTestContext({ ...tightLimits, trustProxyHops: 1 });
+    try {
+      expect((await resetFrom(proxied, '203.0.113.7')).status).toBe(202);
+      expect((await resetFrom(proxied, '203.0.113.8')).status).toBe(202);
+      expect((await resetFrom(proxied, '203.0.113.7')).status).toBe(429);
+    } finally {
+      await proxied.close();
+    }
+  });
+
+  it('ignores a forwarded address when no proxy is trusted, so a client cannot dodge the limit', async () => {
+    const direct = await createTestContext(tightLimits);
+    try {
+      expect((await resetFrom(direct, '203.0.113.7')).status).toBe(202);
+      expect((await resetFrom(direct, '203.0.113.8')).status).toBe(429);
+    } finally {
+      await direct.close();
+    }
+  });
+});

@@ -1,5 +1,9 @@
+import { existsSync, readdirSync } from 'node:fs';
+import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { listTeamEvents } from '@server/features/audit/audit.repository';
+import { purgeExpiredRobots } from '@server/features/robot-bin/robot-bin.service';
+import { pngImage } from '../factories/images';
 import { makeTeamScenario, type TeamScenario } from './support/factories';
 import { rowCounts } from './support/row-counts';
 import { clientAs, createTestContext, type TestContext } from './support/test-app';
@@ -89,5 +93,44 @@ describe('restoring a deleted robot', () => {
     await (await clientAs(ctx, other.owner.id)).delete(`/api/robots/${other.robot.id}`);
     const response = await (await clientAs(ctx, s.owner.id)).post(`/api/teams/${s.team.id}/robot-bin/${other.robot.id}/restore`);
     expect(response.status).toBe(404);
+  });
+});
+
+describe('emptying the bin', () => {
+  const photoFiles = () => {
+    const folder = join(ctx.config.dataDir, 'photos');
+    return existsSync(folder) ? readdirSync(folder) : [];
+  };
+  const count = (sql: string, id: string) => (ctx.database.sqlite.prepare(sql).get(id) as { n: number }).n;
+
+  it('removes a robot deleted more than 30 days ago with its revisions, flash log and photo file', async () => {
+    const s = await makeTeamScenario(ctx);
+    const owner = await clientAs(ctx, s.owner.id);
+    expect((await owner.put(`/api/robots/${s.robot.id}/photo`).attach('photo', pngImage(), 'p.png')).status).toBe(200);
+    expect((await owner.post(`/api/robots/${s.robot.id}/flashes`).send({ revision: 1, note: 'bench' })).status).toBe(201);
+    const photo = (ctx.database.sqlite.prepare('select file_name as f from robot_photos where robot_id = ?').get(s.robot.id) as { f: string }).f;
+    await owner.delete(`/api/robots/${s.robot.id}`);
+    deletedDaysAgo(s, 31);
+
+    expect(await purgeExpiredRobots(ctx.db, ctx.config.dataDir)).toBeGreaterThanOrEqual(1);
+
+    expect(count('select count(*) as n from robots where id = ?', s.robot.id)).toBe(0);
+    expect(count('select count(*) as n from revisions where robot_id = ?', s.robot.id)).toBe(0);
+    expect(count('select count(*) as n from flashes where robot_id = ?', s.robot.id)).toBe(0);
+    expect(photoFiles()).not.toContain(photo);
+    expect(listTeamEvents(ctx.db, s.team.id, 1)[0]).toMatchObject({ action: 'robot.purged', actorName: null, detail: { name: s.robot.name } });
+  });
+
+  it('keeps a robot still within its 30 days, and every robot not deleted', async () => {
+    const binned = await makeTeamScenario(ctx);
+    const live = await makeTeamScenario(ctx);
+    await (await clientAs(ctx, binned.owner.id)).delete(`/api/robots/${binned.robot.id}`);
+    deletedDaysAgo(binned, 29);
+
+    await purgeExpiredRobots(ctx.db, ctx.config.dataDir);
+
+    expect(count('select count(*) as n from robots where id = ?', binned.robot.id)).toBe(1);
+    expect(count('select count(*) as n from robots where id = ?', live.robot.id)).toBe(1);
+    expect((await binAndRestore(binned)).status).toBe(200);
   });
 });

@@ -1,11 +1,13 @@
 import type { AppContext } from '@server/config';
+import type { Db } from '@server/db/client';
 import { recordEvent } from '@server/features/audit/audit.repository';
+import { removePhotoFile } from '@server/features/photos/photo-store';
 import { findLiveRobot, robotSummary } from '@server/features/robots/robots.repository';
 import { HttpError } from '@server/lib/http-error';
 import type { CurrentUser } from '@shared/schemas/auth';
 import type { BinnedRobot } from '@shared/schemas/history';
 import type { RobotSummary } from '@shared/schemas/robots';
-import { clearDeleted, findDeletedRobot, listDeletedSince, markDeleted } from './robot-bin.repository';
+import { clearDeleted, findDeletedRobot, listDeletedBefore, listDeletedSince, markDeleted, removeRobot } from './robot-bin.repository';
 
 /** How long a deleted robot can still be restored. */
 export const BIN_DAYS = 30;
@@ -44,4 +46,21 @@ export function restoreRobot(ctx: AppContext, user: CurrentUser, teamId: string,
     recordEvent(tx, { teamId, actorId: user.id, action: 'robot.restored', target: `robot:${robotId}`, detail: { name: robot.name } });
   });
   return robotSummary(ctx.db, robotId)!;
+}
+
+/**
+ * Empties the bin of robots whose 30 days have passed: the robot, its revisions, flash log and
+ * photo are removed for good, and the team's audit log keeps a line saying so. Returns how many.
+ */
+export async function purgeExpiredRobots(db: Db, dataDir: string, now = new Date()): Promise<number> {
+  const expired = listDeletedBefore(db, new Date(now.getTime() - BIN_MS));
+  for (const robot of expired) {
+    db.transaction((tx) => {
+      removeRobot(tx, robot.id);
+      recordEvent(tx, { teamId: robot.teamId, actorId: null, action: 'robot.purged', target: `robot:${robot.id}`, detail: { name: robot.name, afterDays: BIN_DAYS } });
+    });
+    // The file goes after the row, so a failed removal leaves an orphan file, never a dangling row.
+    if (robot.photoFileName) await removePhotoFile(dataDir, robot.photoFileName);
+  }
+  return expired.length;
 }

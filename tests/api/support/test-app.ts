@@ -28,6 +28,7 @@ export function testConfig(overrides: Partial<AppConfig> = {}): AppConfig {
       passwordReset: { windowMs: 60_000, limit: 1000 },
     },
     jsonLimitBytes: 1024 * 1024,
+    trustProxyHops: 0,
     ...overrides,
   };
 }

@@ -39,4 +39,10 @@ describe('the audit log', () => {
     await waitFor(() => expect(calls.at(-1)?.url).toBe('/api/teams/team-1/audit?kind=sign-ins&limit=50'));
     expect(await screen.findByText('Nothing of this kind yet')).toBeTruthy();
   });
+
+  it('says the bin was emptied by Mixwright itself, not by a person', () => {
+    renderScreen(<ActivityList events={[{ ...event(5, 'robot.purged', { name: 'Old Kiwi', afterDays: 30 }), actorName: null }]} />);
+    expect(screen.getByText('Mixwright')).toBeTruthy();
+    expect(screen.getByText('removed the robot Old Kiwi for good, 30 days after it was deleted', { exact: false })).toBeTruthy();
+  });
 });

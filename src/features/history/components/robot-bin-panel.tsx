@@ -13,7 +13,7 @@ export function DeletedRobotsPanel({ teamId }: { teamId: string }) {
   const restore = useRestoreBinnedRobot(teamId);
   if (bin.isPending || (bin.data && bin.data.length === 0)) return null;
   return (
-    <Panel title="Deleted robots" titleId="robot-bin-title" description="Restorable for 30 days after deletion, with all their revisions.">
+    <Panel title="Deleted robots" titleId="robot-bin-title" description="Restorable for 30 days after deletion, with all their revisions; after that they are removed for good.">
       {bin.isError && <ErrorState message={errorMessage(bin.error)} onRetry={() => bin.refetch()} />}
       {bin.data && (
         <ul className="divide-y divide-rule">

@@ -39,6 +39,8 @@ export function describeActivity(event: TeamActivity): string {
       return `moved the robot ${text(d.name)} to the bin`;
     case 'robot.restored':
       return `restored the robot ${text(d.name)} from the bin`;
+    case 'robot.purged':
+      return `removed the robot ${text(d.name)} for good, ${text(d.afterDays)} days after it was deleted`;
     case 'flash.recorded':
       return `flashed revision ${text(d.number)} onto ${text(d.name) || 'a robot'}${text(d.note) ? `: “${text(d.note)}”` : ''}`;
     case 'photo.uploaded':
@@ -58,7 +60,7 @@ export function ActivityList({ events }: { events: TeamActivity[] }) {
       {events.map((event) => (
         <li key={event.id} className="flex flex-wrap items-baseline justify-between gap-x-4 gap-y-0.5 py-2.5">
           <span>
-            <span className="font-semibold">{event.actorName ?? 'Someone'}</span> {describeActivity(event)}
+            <span className="font-semibold">{event.actorName ?? (event.action === 'robot.purged' ? 'Mixwright' : 'Someone')}</span> {describeActivity(event)}
           </span>
           <time dateTime={event.createdAt} title={formatDateTime(event.createdAt)} className="text-sm text-ink-muted">
             {formatAgo(event.createdAt)}
