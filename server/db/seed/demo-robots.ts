@@ -57,6 +57,8 @@ function greenhouseCart(): RobotConfigInput {
         wheel('Rear left', 'Motor RL', at(120, 30), spec),
       ],
     },
+    // Left as a club would have built it: 6 V gear motors on a six-cell NiMH pack and stalls above
+    // the TB6612's continuous rating, so the demo shows what power warnings look like.
     motors: ['Motor F', 'Motor RR', 'Motor RL'].map((name) => ({ name, startThreshold: 0.08, stallCurrentA: 1.6, ratedVoltage: 6 })),
     controls: {
       source: 'ppm',
