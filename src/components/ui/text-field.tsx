@@ -1,4 +1,4 @@
-import { useId, type InputHTMLAttributes, type ReactNode, type Ref } from 'react';
+import { useId, type InputHTMLAttributes, type ReactNode, type Ref, type TextareaHTMLAttributes } from 'react';
 import { cx } from './cx';
 
 export const inputClasses =
@@ -57,6 +57,29 @@ export function TextField({ label, hint, error, className, ...input }: TextField
           aria-describedby={describedBy}
           className={cx(inputClasses, error ? 'border-error' : 'border-rule-strong')}
           {...input}
+        />
+      )}
+    </FieldShell>
+  );
+}
+
+export interface TextAreaFieldProps extends TextareaHTMLAttributes<HTMLTextAreaElement> {
+  label: string;
+  hint?: ReactNode;
+  error?: string;
+  ref?: Ref<HTMLTextAreaElement>;
+}
+
+export function TextAreaField({ label, hint, error, className, ...textarea }: TextAreaFieldProps) {
+  return (
+    <FieldShell label={label} hint={hint} error={error} className={className}>
+      {({ inputId, describedBy }) => (
+        <textarea
+          id={inputId}
+          aria-invalid={error ? true : undefined}
+          aria-describedby={describedBy}
+          className={cx(inputClasses, error ? 'border-error' : 'border-rule-strong')}
+          {...textarea}
         />
       )}
     </FieldShell>
