@@ -47,18 +47,20 @@ export interface TextFieldProps extends InputHTMLAttributes<HTMLInputElement> {
   ref?: Ref<HTMLInputElement>;
 }
 
+/** What every control inside a FieldShell carries: its id, the error state and the description. */
+export function controlAttributes({ inputId, describedBy }: { inputId: string; describedBy: string | undefined }, error: string | undefined, extraClass?: string) {
+  return {
+    id: inputId,
+    'aria-invalid': error ? true : undefined,
+    'aria-describedby': describedBy,
+    className: cx(inputClasses, extraClass, error ? 'border-error' : 'border-rule-strong'),
+  };
+}
+
 export function TextField({ label, hint, error, className, ...input }: TextFieldProps) {
   return (
     <FieldShell label={label} hint={hint} error={error} className={className}>
-      {({ inputId, describedBy }) => (
-        <input
-          id={inputId}
-          aria-invalid={error ? true : undefined}
-          aria-describedby={describedBy}
-          className={cx(inputClasses, error ? 'border-error' : 'border-rule-strong')}
-          {...input}
-        />
-      )}
+      {(ids) => <input {...controlAttributes(ids, error)} {...input} />}
     </FieldShell>
   );
 }
@@ -73,15 +75,7 @@ export interface TextAreaFieldProps extends TextareaHTMLAttributes<HTMLTextAreaE
 export function TextAreaField({ label, hint, error, className, ...textarea }: TextAreaFieldProps) {
   return (
     <FieldShell label={label} hint={hint} error={error} className={className}>
-      {({ inputId, describedBy }) => (
-        <textarea
-          id={inputId}
-          aria-invalid={error ? true : undefined}
-          aria-describedby={describedBy}
-          className={cx(inputClasses, error ? 'border-error' : 'border-rule-strong')}
-          {...textarea}
-        />
-      )}
+      {(ids) => <textarea {...controlAttributes(ids, error)} {...textarea} />}
     </FieldShell>
   );
 }

@@ -7,7 +7,7 @@ import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { Panel } from '@/components/ui/panel';
 import { TextAreaField } from '@/components/ui/text-field';
-import { showServerErrors } from '@/lib/form-errors';
+import { submitWithServerErrors } from '@/lib/form-errors';
 import { BootLineInputSchema, type TeamBootLineAnswer } from '@shared/schemas/history';
 import { useLookUpTeamBootLine } from '../api/look-up-team-boot-line';
 
@@ -75,13 +75,7 @@ export function WhichRobotPanel({ teamId }: { teamId: string }) {
   });
   const { errors } = form.formState;
 
-  const onSubmit = form.handleSubmit(async (values) => {
-    try {
-      await lookUp.mutateAsync(values);
-    } catch (error) {
-      showServerErrors(error, form.setError, ['line']);
-    }
-  });
+  const onSubmit = submitWithServerErrors(form, ['line'], (values) => lookUp.mutateAsync(values));
 
   return (
     <Panel title="Which robot is this?" titleId="which-robot-title" description="Paste the line a robot prints on the serial monitor at start-up.">
