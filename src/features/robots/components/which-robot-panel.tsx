@@ -39,11 +39,13 @@ function Answer({ teamId, result }: { teamId: string; result: TeamBootLineAnswer
   const tone = settled ? (answer.match!.isHead ? 'border-accent/40 bg-accent-soft' : 'border-warn/40 bg-warn-soft') : 'border-error/30 bg-error-soft';
   return (
     <div role="status" className={`space-y-1.5 rounded-md border px-3 py-2 ${tone}`}>
+      <p className="text-xs font-semibold tracking-wide text-ink-muted uppercase">{result.foundBy === 'hash' ? 'Found by configuration hash' : 'Found by name only'}</p>
       <p>
         <Link to={historyPath(teamId, robot.id)} className={linkClasses}>
           {robot.name}
+          <span className="sr-only"> — history</span>
+          <span aria-hidden="true"> →</span>
         </Link>
-        <span className="text-sm text-ink-muted"> — history</span>
       </p>
       <RevisionLine answer={answer} />
       {result.foundBy === 'name' && <p className="text-sm text-ink-soft">{result.verdict}</p>}
@@ -83,7 +85,7 @@ export function WhichRobotPanel({ teamId }: { teamId: string }) {
         <FormError message={errors.root?.server?.message} />
         <TextAreaField
           label="Boot line"
-          rows={3}
+          rows={4}
           spellCheck={false}
           placeholder={'boot robot="…" revision=3 hash=1a2b3c4d …'}
           className="[&_textarea]:font-mono [&_textarea]:text-sm"

@@ -49,8 +49,9 @@ describe('the which-robot panel', () => {
     const user = renderPanel();
     await pasteAndAsk(user, LINE);
     const status = await screen.findByRole('status');
-    expect(within(status).getByRole('link', { name: 'Garden Hauler' }).getAttribute('href')).toBe('/teams/team-1/robots/robot-7/history');
+    expect(within(status).getByRole('link', { name: 'Garden Hauler — history' }).getAttribute('href')).toBe('/teams/team-1/robots/robot-7/history');
     expect(status.textContent).toContain('revision 2');
+    expect(status.textContent).toContain('Found by configuration hash');
     expect(within(status).getByText('behind head r5')).toBeTruthy();
     expect(calls[0].url).toBe('/api/teams/team-1/boot-line');
     expect(JSON.parse(String(calls[0].init?.body))).toEqual({ line: LINE });
