@@ -106,6 +106,21 @@ export interface BootLineAnswer {
   nameMatches: boolean;
 }
 
+/** Which of a team's robots a pasted boot line belongs to. */
+export interface TeamBootLineAnswer {
+  parsed: BootLineAnswer['parsed'];
+  /** The robot the line belongs to, or null when no robot in the team matches. */
+  robot: { id: string; name: string } | null;
+  /** How the robot was found: a revision with the printed hash, or only the printed name. */
+  foundBy: 'hash' | 'name' | null;
+  /** The same answer the robot's own lookup gives, or null with no robot. */
+  answer: BootLineAnswer | null;
+  /** Other robots of the team with a revision of the same configuration (a copied robot). */
+  otherRobots: { id: string; name: string }[];
+  /** One sentence on how the robot was found, or why none was. */
+  verdict: string;
+}
+
 export interface ImportAnswer {
   robotId: string;
   revision: number;

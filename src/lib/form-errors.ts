@@ -1,4 +1,4 @@
-import type { FieldValues, Path, UseFormSetError } from 'react-hook-form';
+import type { FieldValues, Path, UseFormReturn, UseFormSetError } from 'react-hook-form';
 import { errorMessage, isApiError } from './api-client';
 
 /**
@@ -18,4 +18,22 @@ export function showServerErrors<T extends FieldValues>(error: unknown, setError
   if (placed === 0 || (isApiError(error) && placed < Object.keys(error.fields).length)) {
     setError('root.server', { type: 'server', message: errorMessage(error) });
   }
+}
+
+/**
+ * The form's submit handler: checks the fields with the form's schema, runs the request, and
+ * on failure puts the server's reasons beside the named fields.
+ */
+export function submitWithServerErrors<T extends FieldValues, Out>(
+  form: UseFormReturn<T, unknown, Out>,
+  fields: readonly Path<T>[],
+  action: (values: Out) => Promise<unknown>,
+) {
+  return form.handleSubmit(async (values) => {
+    try {
+      await action(values);
+    } catch (error) {
+      showServerErrors(error, form.setError, fields);
+    }
+  });
 }

@@ -1,10 +1,10 @@
 import { Router } from 'express';
 import type { AppContext } from '@server/config';
 import { currentUser, requireUser } from '@server/middleware/session';
-import { requireRobotRole } from '@server/middleware/team-access';
+import { grantedAccess, requireRobotRole, requireTeamRole } from '@server/middleware/team-access';
 import { validateBody } from '@server/middleware/validate';
 import { BootLineInputSchema, RecordFlashInputSchema } from '@shared/schemas/history';
-import { lookUpBootLine } from './boot-line.service';
+import { lookUpBootLine, lookUpTeamBootLine } from './boot-line.service';
 import { flashLog, recordFlash } from './flashes.service';
 
 export function flashesRoutes(ctx: AppContext): Router {
@@ -23,6 +23,11 @@ export function flashesRoutes(ctx: AppContext): Router {
   // Reading a boot line changes nothing, so viewers may ask too.
   router.post('/robots/:robotId/boot-line', requireUser, viewer, validateBody(BootLineInputSchema), (req, res) => {
     res.json(lookUpBootLine(ctx, String(req.params.robotId), req.body.line));
+  });
+
+  // For someone plugged into one of the team's robots without knowing which.
+  router.post('/teams/:teamId/boot-line', requireUser, requireTeamRole(ctx, 'viewer'), validateBody(BootLineInputSchema), (req, res) => {
+    res.json(lookUpTeamBootLine(ctx, grantedAccess(req).teamId, req.body.line));
   });
 
   return router;

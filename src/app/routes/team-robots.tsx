@@ -9,13 +9,14 @@ import { DeletedRobotsPanel } from '@/features/history/components/robot-bin-pane
 import { ImportRobotDialog } from '@/features/history/components/import-robot-dialog';
 import { useTeamRobots } from '@/features/robots/api/get-team-robots';
 import { RobotTable } from '@/features/robots/components/robot-table';
+import { WhichRobotPanel } from '@/features/robots/components/which-robot-panel';
 import { errorMessage } from '@/lib/api-client';
 import type { TeamDetail } from '@shared/schemas/teams';
 
 // The form carries the starter layouts and the pin plan: loaded when someone opens it.
 const NewRobotForm = lazy(async () => ({ default: (await import('@/features/robots/components/new-robot-form')).NewRobotForm }));
 
-/** The team dashboard: its robots, and the cautions everyone sees before driving one. */
+/** The team dashboard: its robots, which one a boot line belongs to, and the cautions everyone sees before driving one. */
 export function TeamRobotsRoute() {
   const team = useOutletContext<TeamDetail>();
   const robots = useTeamRobots(team.id);
@@ -49,7 +50,10 @@ export function TeamRobotsRoute() {
         </Panel>
         {team.role === 'owner' && <DeletedRobotsPanel teamId={team.id} />}
       </div>
-      <Cautions />
+      <div className="grid gap-6">
+        <WhichRobotPanel teamId={team.id} />
+        <Cautions />
+      </div>
       <Dialog
         open={creating}
         onClose={() => setCreating(false)}

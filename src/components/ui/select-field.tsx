@@ -1,6 +1,5 @@
 import type { ReactNode, Ref, SelectHTMLAttributes } from 'react';
-import { cx } from './cx';
-import { FieldShell, inputClasses } from './text-field';
+import { controlAttributes, FieldShell } from './text-field';
 
 export interface SelectFieldProps extends SelectHTMLAttributes<HTMLSelectElement> {
   label: string;
@@ -13,14 +12,8 @@ export interface SelectFieldProps extends SelectHTMLAttributes<HTMLSelectElement
 export function SelectField({ label, hint, error, options, className, ...select }: SelectFieldProps) {
   return (
     <FieldShell label={label} hint={hint} error={error} className={className}>
-      {({ inputId, describedBy }) => (
-        <select
-          id={inputId}
-          aria-invalid={error ? true : undefined}
-          aria-describedby={describedBy}
-          className={cx(inputClasses, 'pr-8', error ? 'border-error' : 'border-rule-strong')}
-          {...select}
-        >
+      {(ids) => (
+        <select {...controlAttributes(ids, error, 'pr-8')} {...select}>
           {options.map((o) => (
             <option key={o.value} value={o.value}>
               {o.label}

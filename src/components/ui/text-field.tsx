@@ -1,4 +1,4 @@
-import { useId, type InputHTMLAttributes, type ReactNode, type Ref } from 'react';
+import { useId, type InputHTMLAttributes, type ReactNode, type Ref, type TextareaHTMLAttributes } from 'react';
 import { cx } from './cx';
 
 export const inputClasses =
@@ -47,18 +47,35 @@ export interface TextFieldProps extends InputHTMLAttributes<HTMLInputElement> {
   ref?: Ref<HTMLInputElement>;
 }
 
+/** What every control inside a FieldShell carries: its id, the error state and the description. */
+export function controlAttributes({ inputId, describedBy }: { inputId: string; describedBy: string | undefined }, error: string | undefined, extraClass?: string) {
+  return {
+    id: inputId,
+    'aria-invalid': error ? true : undefined,
+    'aria-describedby': describedBy,
+    className: cx(inputClasses, extraClass, error ? 'border-error' : 'border-rule-strong'),
+  };
+}
+
 export function TextField({ label, hint, error, className, ...input }: TextFieldProps) {
   return (
     <FieldShell label={label} hint={hint} error={error} className={className}>
-      {({ inputId, describedBy }) => (
-        <input
-          id={inputId}
-          aria-invalid={error ? true : undefined}
-          aria-describedby={describedBy}
-          className={cx(inputClasses, error ? 'border-error' : 'border-rule-strong')}
-          {...input}
-        />
-      )}
+      {(ids) => <input {...controlAttributes(ids, error)} {...input} />}
+    </FieldShell>
+  );
+}
+
+export interface TextAreaFieldProps extends TextareaHTMLAttributes<HTMLTextAreaElement> {
+  label: string;
+  hint?: ReactNode;
+  error?: string;
+  ref?: Ref<HTMLTextAreaElement>;
+}
+
+export function TextAreaField({ label, hint, error, className, ...textarea }: TextAreaFieldProps) {
+  return (
+    <FieldShell label={label} hint={hint} error={error} className={className}>
+      {(ids) => <textarea {...controlAttributes(ids, error)} {...textarea} />}
     </FieldShell>
   );
 }

@@ -131,6 +131,10 @@ export const TEAM_ROUTES: Record<string, { request: (s: TeamScenario) => RouteRe
     request: (s) => ({ path: `/api/robots/${s.robot.id}/flashes`, body: { revision: 1, note: 'Matrix flash' } }),
     expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 201, owner: 201 },
   },
+  'POST /api/teams/:teamId/boot-line': {
+    request: (s) => ({ path: `/api/teams/${s.team.id}/boot-line`, body: { line: 'boot robot="Matrix" revision=1 hash=00000000' } }),
+    expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
+  },
   'POST /api/robots/:robotId/boot-line': {
     request: (s) => ({ path: `/api/robots/${s.robot.id}/boot-line`, body: { line: 'boot robot="Matrix" revision=1 hash=00000000' } }),
     expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },

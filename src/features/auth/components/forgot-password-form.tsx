@@ -4,7 +4,7 @@ import type { z } from 'zod';
 import { Button } from '@/components/ui/button';
 import { FormError, FormNotice } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
-import { showServerErrors } from '@/lib/form-errors';
+import { submitWithServerErrors } from '@/lib/form-errors';
 import { PasswordResetRequestSchema } from '@shared/schemas/auth';
 import { useRequestPasswordReset } from '../api/request-password-reset';
 
@@ -18,13 +18,7 @@ export function ForgotPasswordForm() {
   });
   const { errors } = form.formState;
 
-  const onSubmit = form.handleSubmit(async (values) => {
-    try {
-      await request.mutateAsync(values);
-    } catch (error) {
-      showServerErrors(error, form.setError, ['email']);
-    }
-  });
+  const onSubmit = submitWithServerErrors(form, ['email'], (values) => request.mutateAsync(values));
 
   if (request.isSuccess) {
     return (

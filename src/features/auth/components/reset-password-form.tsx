@@ -4,7 +4,7 @@ import { z } from 'zod';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
-import { showServerErrors } from '@/lib/form-errors';
+import { submitWithServerErrors } from '@/lib/form-errors';
 import { NewPasswordSchema } from '@shared/schemas/auth';
 import { useResetPassword } from '../api/reset-password';
 
@@ -18,13 +18,9 @@ export function ResetPasswordForm({ token, onDone }: { token: string; onDone: ()
   const form = useForm<Values>({ resolver: zodResolver(FormSchema), defaultValues: { password: '', repeat: '' } });
   const { errors } = form.formState;
 
-  const onSubmit = form.handleSubmit(async (values) => {
-    try {
-      await reset.mutateAsync({ token, password: values.password });
-      onDone();
-    } catch (error) {
-      showServerErrors(error, form.setError, ['password']);
-    }
+  const onSubmit = submitWithServerErrors(form, ['password'], async (values) => {
+    await reset.mutateAsync({ token, password: values.password });
+    onDone();
   });
 
   return (

@@ -5,7 +5,7 @@ import type { z } from 'zod';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
-import { showServerErrors } from '@/lib/form-errors';
+import { submitWithServerErrors } from '@/lib/form-errors';
 import { SignInInputSchema, type CurrentUser } from '@shared/schemas/auth';
 import { useSignIn } from '../api/sign-in';
 
@@ -19,13 +19,8 @@ export function SignInForm({ defaultEmail = '', onSignedIn }: { defaultEmail?: s
   });
   const { errors } = form.formState;
 
-  const onSubmit = form.handleSubmit(async (values) => {
-    try {
-      const { user } = await signIn.mutateAsync(values);
-      onSignedIn(user);
-    } catch (error) {
-      showServerErrors(error, form.setError, ['email', 'password']);
-    }
+  const onSubmit = submitWithServerErrors(form, ['email', 'password'], async (values) => {
+    onSignedIn((await signIn.mutateAsync(values)).user);
   });
 
   return (

@@ -4,7 +4,7 @@ import type { z } from 'zod';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
-import { showServerErrors } from '@/lib/form-errors';
+import { submitWithServerErrors } from '@/lib/form-errors';
 import { SignUpInputSchema, type CurrentUser } from '@shared/schemas/auth';
 import { useSignUp } from '../api/sign-up';
 
@@ -18,13 +18,8 @@ export function SignUpForm({ defaultEmail = '', onSignedUp }: { defaultEmail?: s
   });
   const { errors } = form.formState;
 
-  const onSubmit = form.handleSubmit(async (values) => {
-    try {
-      const { user } = await signUp.mutateAsync(values);
-      onSignedUp(user);
-    } catch (error) {
-      showServerErrors(error, form.setError, ['name', 'email', 'password']);
-    }
+  const onSubmit = submitWithServerErrors(form, ['name', 'email', 'password'], async (values) => {
+    onSignedUp((await signUp.mutateAsync(values)).user);
   });
 
   return (

@@ -5,7 +5,7 @@ import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
-import { showServerErrors } from '@/lib/form-errors';
+import { submitWithServerErrors } from '@/lib/form-errors';
 import { BOARDS } from '@shared/boards/boards';
 import { DRIVER_KINDS } from '@shared/drivers/driver-kinds';
 import { INPUT_SOURCES } from '@shared/inputs/input-sources';
@@ -28,13 +28,9 @@ export function NewRobotForm({ teamId, onCreated, onCancel }: { teamId: string; 
   const [layout, board, input, driver] = useWatch({ control: form.control, name: ['layout', 'board', 'input', 'driver'] });
   const preview = useMemo(() => starterRobot({ layout, board, input, driver }), [layout, board, input, driver]);
 
-  const onSubmit = form.handleSubmit(async (values) => {
+  const onSubmit = submitWithServerErrors(form, ['name'], async (values) => {
     const starter = starterRobot(values);
-    try {
-      onCreated(await create.mutateAsync({ name: values.name, config: { ...starter.config, name: values.name }, message: starter.message }));
-    } catch (error) {
-      showServerErrors(error, form.setError, ['name']);
-    }
+    onCreated(await create.mutateAsync({ name: values.name, config: { ...starter.config, name: values.name }, message: starter.message }));
   });
 
   return (

@@ -4,7 +4,7 @@ import type { z } from 'zod';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
-import { showServerErrors } from '@/lib/form-errors';
+import { submitWithServerErrors } from '@/lib/form-errors';
 import { CreateTeamInputSchema, type TeamDetail } from '@shared/schemas/teams';
 import { useCreateTeam } from '../api/create-team';
 
@@ -18,13 +18,9 @@ export function CreateTeamForm({ onCreated }: { onCreated: (team: TeamDetail) =>
   });
   const { errors } = form.formState;
 
-  const onSubmit = form.handleSubmit(async (values) => {
-    try {
-      onCreated(await createTeam.mutateAsync(values));
-      form.reset();
-    } catch (error) {
-      showServerErrors(error, form.setError, ['name']);
-    }
+  const onSubmit = submitWithServerErrors(form, ['name'], async (values) => {
+    onCreated(await createTeam.mutateAsync(values));
+    form.reset();
   });
 
   return (

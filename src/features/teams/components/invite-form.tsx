@@ -6,7 +6,7 @@ import { Button } from '@/components/ui/button';
 import { FormError, FormNotice } from '@/components/ui/form-error';
 import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
-import { showServerErrors } from '@/lib/form-errors';
+import { submitWithServerErrors } from '@/lib/form-errors';
 import { InviteMemberInputSchema, ROLES, ROLE_SUMMARIES } from '@shared/schemas/teams';
 import { useInviteMember } from '../api/invite-member';
 
@@ -23,15 +23,11 @@ export function InviteForm({ teamId }: { teamId: string }) {
   });
   const { errors } = form.formState;
 
-  const onSubmit = form.handleSubmit(async (values) => {
+  const onSubmit = submitWithServerErrors(form, ['email', 'role'], async (values) => {
     setSentTo(null);
-    try {
-      const invitation = await invite.mutateAsync(values);
-      setSentTo(invitation.email);
-      form.reset({ email: '', role: values.role });
-    } catch (error) {
-      showServerErrors(error, form.setError, ['email', 'role']);
-    }
+    const invitation = await invite.mutateAsync(values);
+    setSentTo(invitation.email);
+    form.reset({ email: '', role: values.role });
   });
 
   return (
