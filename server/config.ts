@@ -25,6 +25,8 @@ export interface AppConfig {
     signIn: RateLimitSetting;
     /** Per address: reset e-mails requested. */
     passwordReset: RateLimitSetting;
+    /** Per address: accounts created; also slows probing which e-mails already have one. */
+    signUp: RateLimitSetting;
   };
   /** Largest JSON body accepted, in bytes. */
   jsonLimitBytes: number;
@@ -47,6 +49,8 @@ export function configFromEnv(env: Env): AppConfig {
     rateLimits: {
       signIn: { windowMs: 15 * 60_000, limit: 10 },
       passwordReset: { windowMs: 60 * 60_000, limit: 5 },
+      // A classroom signing up together shares one address: room for a class, not for a script.
+      signUp: { windowMs: 60 * 60_000, limit: 40 },
     },
     jsonLimitBytes: 1024 * 1024,
     trustProxyHops: env.TRUST_PROXY,

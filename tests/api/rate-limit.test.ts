@@ -5,7 +5,7 @@ import { client, createTestContext, type TestContext } from './support/test-app'
 let ctx: TestContext;
 beforeAll(async () => {
   ctx = await createTestContext({
-    rateLimits: { signIn: { windowMs: 60_000, limit: 3 }, passwordReset: { windowMs: 60_000, limit: 2 } },
+    rateLimits: { signIn: { windowMs: 60_000, limit: 3 }, passwordReset: { windowMs: 60_000, limit: 2 }, signUp: { windowMs: 60_000, limit: 2 } },
   });
 });
 afterAll(() => ctx.close());
@@ -35,10 +35,18 @@ describe('rate limits', () => {
     }
     expect(statuses).toEqual([202, 202, 429]);
   });
+
+  it('stops sign-ups from one address after the limit, so taken e-mails cannot be probed at speed', async () => {
+    const statuses: number[] = [];
+    for (let i = 0; i < 3; i += 1) {
+      statuses.push((await client(ctx).post('/api/auth/sign-up').send({ email: uniqueEmail(), name: 'New Builder', password: 'a long enough password' })).status);
+    }
+    expect(statuses).toEqual([201, 201, 429]);
+  });
 });
 
 describe('rate limits behind a reverse proxy', () => {
-  const tightLimits = { rateLimits: { signIn: { windowMs: 60_000, limit: 3 }, passwordReset: { windowMs: 60_000, limit: 1 } } };
+  const tightLimits = { rateLimits: { signIn: { windowMs: 60_000, limit: 3 }, passwordReset: { windowMs: 60_000, limit: 1 }, signUp: { windowMs: 60_000, limit: 1 } } };
   const resetFrom = (app: TestContext, address: string) =>
     client(app).post('/api/auth/password-reset').set('X-Forwarded-For', address).send({ email: uniqueEmail() });
 

@@ -16,8 +16,9 @@ export function authRoutes(ctx: AppContext): Router {
   const signInLimit = attemptLimit(ctx.config.rateLimits.signIn, { perEmail: true, what: 'sign-in attempts' });
   const resetLimit = attemptLimit(ctx.config.rateLimits.passwordReset, { perEmail: false, what: 'reset requests' });
   const confirmLimit = attemptLimit(ctx.config.rateLimits.passwordReset, { perEmail: false, what: 'reset attempts' });
+  const signUpLimit = attemptLimit(ctx.config.rateLimits.signUp, { perEmail: false, what: 'sign-ups from this address' });
 
-  router.post('/auth/sign-up', validateBody(SignUpInputSchema), async (req, res) => {
+  router.post('/auth/sign-up', signUpLimit, validateBody(SignUpInputSchema), async (req, res) => {
     const user = await signUp(ctx, req.body);
     res.append('Set-Cookie', await ctx.auth.startSession(user.id));
     res.status(201).json({ user });

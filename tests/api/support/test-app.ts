@@ -26,6 +26,7 @@ export function testConfig(overrides: Partial<AppConfig> = {}): AppConfig {
     rateLimits: {
       signIn: { windowMs: 60_000, limit: 1000 },
       passwordReset: { windowMs: 60_000, limit: 1000 },
+      signUp: { windowMs: 60_000, limit: 1000 },
     },
     jsonLimitBytes: 1024 * 1024,
     trustProxyHops: 0,
