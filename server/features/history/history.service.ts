@@ -1,7 +1,6 @@
 import type { AppContext } from '@server/config';
-import { recordEvent } from '@server/features/audit/audit.repository';
-import { findLiveRobot, insertRevision } from '@server/features/robots/robots.repository';
-import { getRevision, revisionConflict } from '@server/features/robots/robots.service';
+import { findLiveRobot } from '@server/features/robots/robots.repository';
+import { appendRevision, getRevision } from '@server/features/robots/robots.service';
 import { HttpError } from '@server/lib/http-error';
 import { filesDiff } from '@shared/history/file-diff';
 import { settingChanges } from '@shared/history/setting-changes';
@@ -92,24 +91,22 @@ export function restoreRevision(
   number: number,
   input: { baseRevision: number; note?: string },
 ): RevisionDetail {
-  const next = ctx.db.transaction((tx) => {
-    const robot = findLiveRobot(tx, robotId);
-    if (!robot) throw new HttpError(404, 'Robot not found');
-    const source = findStoredRevision(tx, robotId, number);
-    if (!source) throw new HttpError(404, `Revision ${number} not found`);
-    const message = restoreMessage(number, input.note);
-    const { config } = revisionFacts(source);
-    if (input.baseRevision !== robot.headRevision) throw revisionConflict(tx, robot, input.baseRevision, { message, config });
-    const created = robot.headRevision + 1;
-    insertRevision(tx, { robotId, number: created, config, message, authorId: user.id });
-    recordEvent(tx, {
-      teamId: robot.teamId,
-      actorId: user.id,
-      action: 'revision.restored',
-      target: `robot:${robotId}`,
-      detail: { name: robot.name, number: created, from: number, note: input.note ?? '' },
-    });
-    return created;
-  });
+  const { number: next } = ctx.db.transaction((tx) =>
+    appendRevision(
+      tx,
+      user,
+      robotId,
+      {
+        baseRevision: input.baseRevision,
+        message: restoreMessage(number, input.note),
+        config: () => {
+          const source = findStoredRevision(tx, robotId, number);
+          if (!source) throw new HttpError(404, `Revision ${number} not found`);
+          return revisionFacts(source).config;
+        },
+      },
+      { action: 'revision.restored', detail: (robot, created) => ({ name: robot.name, number: created, from: number, note: input.note ?? '' }) },
+    ),
+  );
   return getRevision(ctx, robotId, next);
 }

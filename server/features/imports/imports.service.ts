@@ -3,7 +3,7 @@ import { recordEvent } from '@server/features/audit/audit.repository';
 import { findStoredRevision } from '@server/features/history/history.repository';
 import { revisionFacts } from '@server/features/history/revision-facts';
 import { findLiveRobot, insertRevision, insertRobot, robotSummary } from '@server/features/robots/robots.repository';
-import { revisionConflict } from '@server/features/robots/robots.service';
+import { appendRevision } from '@server/features/robots/robots.service';
 import { HttpError } from '@server/lib/http-error';
 import { zodFields, zodMessage } from '@server/middleware/error-handler';
 import { configFileName } from '@shared/history/file-names';
@@ -101,24 +101,21 @@ export function importAsRevision(
   const read = readUploadedConfig(file);
   const fileName = displayName(file.originalName);
   const message = fields.message || `Imported from ${fileName}`;
-  const { number, robotName: name } = ctx.db.transaction((tx) => {
-    const robot = findLiveRobot(tx, robotId);
-    if (!robot) throw new HttpError(404, 'Robot not found');
-    // The revision belongs to this robot, whatever the file called it.
-    const config = { ...read.config, name: robot.name };
-    if (fields.baseRevision !== robot.headRevision) throw revisionConflict(tx, robot, fields.baseRevision, { message, config });
-    const next = robot.headRevision + 1;
-    insertRevision(tx, { robotId, number: next, config, message, authorId: user.id });
-    recordEvent(tx, {
-      teamId: robot.teamId,
-      actorId: user.id,
-      action: 'revision.imported',
-      target: `robot:${robotId}`,
-      detail: { name: robot.name, number: next, file: fileName, fromVersion: read.fromVersion },
-    });
-    return { number: next, robotName: robot.name };
-  });
-  const notes = name === read.config.name ? read.notes : [...read.notes, `The file's robot name “${read.config.name}” became “${name}”.`];
+  const { number, robot } = ctx.db.transaction((tx) =>
+    appendRevision(
+      tx,
+      user,
+      robotId,
+      {
+        baseRevision: fields.baseRevision,
+        message,
+        // The revision belongs to this robot, whatever the file called it.
+        config: (found) => ({ ...read.config, name: found.name }),
+      },
+      { action: 'revision.imported', detail: (robot, next) => ({ name: robot.name, number: next, file: fileName, fromVersion: read.fromVersion }) },
+    ),
+  );
+  const notes = robot.name === read.config.name ? read.notes : [...read.notes, `The file's robot name “${read.config.name}” became “${robot.name}”.`];
   return { robotId, revision: number, fromVersion: read.fromVersion, notes };
 }
 

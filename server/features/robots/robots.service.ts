@@ -1,4 +1,6 @@
 import type { AppContext } from '@server/config';
+import type { Db } from '@server/db/client';
+import type { RobotRow } from '@server/db/schema';
 import { recordEvent } from '@server/features/audit/audit.repository';
 import { HttpError } from '@server/lib/http-error';
 import type { CurrentUser } from '@shared/schemas/auth';
@@ -63,6 +65,33 @@ export function revisionConflict(
 }
 
 /**
+ * Every way a revision is added on top of the head (save, restore, import), inside the caller's
+ * transaction: the robot must exist, the person must have started from the head (else 409 with
+ * the newer head and the unsaved draft, and nothing is written), and the audit log says what
+ * happened. `config` may look at the robot (an import takes its name) or throw (a restore whose
+ * source revision is missing) before the head is compared. Returns the new revision's number
+ * and the robot as it was found.
+ */
+export function appendRevision(
+  tx: Db,
+  user: CurrentUser,
+  robotId: string,
+  draft: { baseRevision: number; message: string; config: (robot: RobotRow) => RobotConfig },
+  event: { action: string; detail: (robot: RobotRow, number: number) => Record<string, unknown> },
+): { number: number; robot: RobotRow } {
+  const robot = findLiveRobot(tx, robotId);
+  if (!robot) throw new HttpError(404, 'Robot not found');
+  const config = draft.config(robot);
+  if (draft.baseRevision !== robot.headRevision) {
+    throw revisionConflict(tx, robot, draft.baseRevision, { message: draft.message, config });
+  }
+  const next = robot.headRevision + 1;
+  insertRevision(tx, { robotId, number: next, config, message: draft.message, authorId: user.id });
+  recordEvent(tx, { teamId: robot.teamId, actorId: user.id, action: event.action, target: `robot:${robotId}`, detail: event.detail(robot, next) });
+  return { number: next, robot };
+}
+
+/**
  * Saves a new revision on top of `baseRevision`. If someone saved after that revision, nothing
  * is written and the answer is 409 with the newer head and the unsaved draft.
  */
@@ -72,23 +101,15 @@ export function saveRevision(
   robotId: string,
   input: { baseRevision: number; message: string; config: RobotConfig },
 ): RevisionDetail {
-  const number = ctx.db.transaction((tx) => {
-    const robot = findLiveRobot(tx, robotId);
-    if (!robot) throw new HttpError(404, 'Robot not found');
-    if (input.baseRevision !== robot.headRevision) {
-      throw revisionConflict(tx, robot, input.baseRevision, { message: input.message, config: input.config });
-    }
-    const next = robot.headRevision + 1;
-    insertRevision(tx, { robotId, number: next, config: input.config, message: input.message, authorId: user.id });
-    recordEvent(tx, {
-      teamId: robot.teamId,
-      actorId: user.id,
-      action: 'revision.saved',
-      target: `robot:${robotId}`,
-      detail: { name: robot.name, number: next, message: input.message },
-    });
-    return next;
-  });
+  const { number } = ctx.db.transaction((tx) =>
+    appendRevision(
+      tx,
+      user,
+      robotId,
+      { baseRevision: input.baseRevision, message: input.message, config: () => input.config },
+      { action: 'revision.saved', detail: (robot, next) => ({ name: robot.name, number: next, message: input.message }) },
+    ),
+  );
   return getRevision(ctx, robotId, number);
 }
 
