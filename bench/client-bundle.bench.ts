@@ -16,13 +16,21 @@ const gzipped = (file: string) => gzipSync(readFileSync(file), { level: 9 }).len
 
 /** The scripts index.html loads at once: its module entry and its modulepreload links. */
 function initialScripts(html: string): string[] {
-  const found = [...html.matchAll(/<script[^>]*type="module"[^>]*src="([^"]+)"/g), ...html.matchAll(/<link[^>]*rel="modulepreload"[^>]*href="([^"]+)"/g)];
+  const found = [
+    ...html.matchAll(/<script[^>]*type="module"[^>]*src="([^"]+)"/g),
+    ...html.matchAll(/<link[^>]*rel="modulepreload"[^>]*href="([^"]+)"/g),
+  ];
   return [...new Set(found.map((m) => m[1]))];
 }
 
 export async function run(): Promise<void> {
   rmSync(outDir, { recursive: true, force: true });
-  await build({ root, configFile: join(root, 'vite.config.ts'), logLevel: 'silent', build: { outDir, emptyOutDir: true } });
+  await build({
+    root,
+    configFile: join(root, 'vite.config.ts'),
+    logLevel: 'silent',
+    build: { outDir, emptyOutDir: true },
+  });
   const html = readFileSync(join(outDir, 'index.html'), 'utf8');
   const initial = initialScripts(html);
   let total = 0;
@@ -38,7 +46,9 @@ export async function run(): Promise<void> {
     .filter((f) => f.endsWith('.js') && !initial.some((src) => src.endsWith(f)))
     .map((f) => ({ f, raw: statSync(join(assets, f)).size, gz: gzipped(join(assets, f)) }))
     .sort((a, b) => b.gz - a.gz);
-  console.log(`loaded on demand: ${lazy.length} chunks, ${kb(lazy.reduce((s, c) => s + c.gz, 0)).trim()} gzipped; largest:`);
+  console.log(
+    `loaded on demand: ${lazy.length} chunks, ${kb(lazy.reduce((s, c) => s + c.gz, 0)).trim()} gzipped; largest:`,
+  );
   for (const c of lazy.slice(0, 8)) console.log(`  ${kb(c.gz)}  ${c.f}`);
   rmSync(outDir, { recursive: true, force: true });
 }

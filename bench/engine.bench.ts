@@ -17,7 +17,11 @@ function time(mixing: ReturnType<typeof computeMixing>, sticks: Float64Array, mo
   let checksum = 0;
   const start = performance.now();
   for (let i = 0; i < SAMPLES; i += 1) {
-    const commands = mixSticks(mixing, { forward: sticks[3 * i], strafe: sticks[3 * i + 1], yaw: sticks[3 * i + 2] }, mode);
+    const commands = mixSticks(
+      mixing,
+      { forward: sticks[3 * i], strafe: sticks[3 * i + 1], yaw: sticks[3 * i + 2] },
+      mode,
+    );
     checksum += commands[0];
   }
   const ms = performance.now() - start;

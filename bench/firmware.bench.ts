@@ -42,13 +42,16 @@ async function renderAndZip(): Promise<void> {
       if (i >= 5) times.push(performance.now() - start);
     }
     times.sort((a, b) => a - b);
-    console.log(`  ${layout.padEnd(13)} median ${times[25].toFixed(2)} ms, max ${times[times.length - 1].toFixed(2)} ms`);
+    console.log(
+      `  ${layout.padEnd(13)} median ${times[25].toFixed(2)} ms, max ${times[times.length - 1].toFixed(2)} ms`,
+    );
   }
 }
 
 function stepCycles(marks: [number, number][]): number[] {
   const steps: number[] = [];
-  for (let i = 0; i + 1 < marks.length; i++) if (marks[i][1] === 1 && marks[i + 1][1] === 2) steps.push(marks[i + 1][0] - marks[i][0]);
+  for (let i = 0; i + 1 < marks.length; i++)
+    if (marks[i][1] === 1 && marks[i + 1][1] === 2) steps.push(marks[i + 1][0] - marks[i][0]);
   return steps.sort((a, b) => a - b);
 }
 
@@ -59,7 +62,9 @@ function summary(steps: number[]): string {
 
 async function controlStepCycles(): Promise<void> {
   console.log('cycles per control step on a simulated 16 MHz ATmega328P (300 random stick positions, iBUS input)');
-  console.log('  first the step alone (interrupts held off while it runs), then as it runs (receiver and timer interrupts included)');
+  console.log(
+    '  first the step alone (interrupts held off while it runs), then as it runs (receiver and timer interrupts included)',
+  );
   for (const layout of DRIVE_LAYOUT_IDS) {
     const config = unoWiredConfig(layout, 'ibus', 'pwm-in1-in2-stby', (c) => {
       c.controls.armingSwitch.channel = null;
@@ -75,7 +80,13 @@ async function controlStepCycles(): Promise<void> {
     const runs: string[] = [];
     for (const marks of ['MW_SIM_MARKS_ATOMIC', 'MW_SIM_MARKS']) {
       const build = await buildForSimulator(config, 1, marks);
-      const result = await simulate(build.elfPath, { mcu: 'atmega328p', limitCycles: ms * cyclesPerMs, registers: unoRegisters(), markAddress: GPIOR0, events: t.events });
+      const result = await simulate(build.elfPath, {
+        mcu: 'atmega328p',
+        limitCycles: ms * cyclesPerMs,
+        registers: unoRegisters(),
+        markAddress: GPIOR0,
+        events: t.events,
+      });
       runs.push(summary(stepCycles(result.marks)));
     }
     console.log(`  ${layout.padEnd(13)} ${config.motors.length} motors  alone: ${runs[0]}`);

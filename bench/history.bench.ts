@@ -50,7 +50,11 @@ export async function run(): Promise<void> {
   time('diff of two revisions with generated files', () => revisionDiff(ctx, robot.id, 1, REVISIONS, renderBundle), 5);
   const zip = await zipBundle(renderBundle(base, { revision: 1 }));
   console.log(`bundle zip: ${zip.length} bytes`);
-  time('reading config.json from the bundle zip (checks, inflate, migrate, validate)', () => readUploadedConfig({ data: zip, originalName: 'b.zip' }), 20);
+  time(
+    'reading config.json from the bundle zip (checks, inflate, migrate, validate)',
+    () => readUploadedConfig({ data: zip, originalName: 'b.zip' }),
+    20,
+  );
   database.close();
   rmSync(dir, { recursive: true, force: true });
 }

@@ -12,5 +12,7 @@ export async function run(): Promise<void> {
   const verifyMs = performance.now() - verifyStarted;
   const { log2N, r, p } = DEFAULT_PASSWORD_COST;
   const memoryMiB = (128 * 2 ** log2N * r) / 2 ** 20;
-  console.log(`scrypt N=2^${log2N} r=${r} p=${p} (${memoryMiB} MiB): hash ${hashMs.toFixed(0)} ms, verify ${verifyMs.toFixed(0)} ms`);
+  console.log(
+    `scrypt N=2^${log2N} r=${r} p=${p} (${memoryMiB} MiB): hash ${hashMs.toFixed(0)} ms, verify ${verifyMs.toFixed(0)} ms`,
+  );
 }

@@ -40,6 +40,9 @@ export async function run(): Promise<void> {
   // The starter configuration carries the rate switch and the arming switch on the remote.
   const config = buildStarterConfig({ layout: 'quad-mecanum', board: 'mega2560', input: 'nrf24', driver: 'dual-pwm' });
   benchCase('Mega 2560, 4 dual half-bridges (8 PWM), transceiver, rate + arming switch, default PWM', config);
-  const quiet = RobotConfigSchema.parse({ ...config, wiring: { ...config.wiring, drivers: config.wiring.drivers.map((d) => ({ ...d, pwmFrequencyHz: 20000 })) } });
+  const quiet = RobotConfigSchema.parse({
+    ...config,
+    wiring: { ...config.wiring, drivers: config.wiring.drivers.map((d) => ({ ...d, pwmFrequencyHz: 20000 })) },
+  });
   benchCase('Same at 20 kHz (16-bit timers only)', quiet);
 }

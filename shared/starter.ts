@@ -49,8 +49,16 @@ export function buildStarterConfig(options: StarterOptions): RobotConfig {
     controls,
     wiring: {
       board,
-      drivers: starterDrivers(driver, motors.map((m) => m.name)),
-      inputPins: Object.fromEntries(inputPinRoles(input, controls.channels.map((c) => c.number)).map((r) => [r.id, unassigned()])),
+      drivers: starterDrivers(
+        driver,
+        motors.map((m) => m.name),
+      ),
+      inputPins: Object.fromEntries(
+        inputPinRoles(
+          input,
+          controls.channels.map((c) => c.number),
+        ).map((r) => [r.id, unassigned()]),
+      ),
     },
     // Motors stay off until the arming switch is on, whenever there is one.
     safety: { armingRequired: controls.armingSwitch.channel !== null },

@@ -6,17 +6,39 @@ type Command = { summary: string; load: () => Promise<{ run: (args: string[]) =>
 
 // Each command lives in its own file under ./commands and exports `run(args)` returning the exit code.
 const commands: Record<string, Command> = {
-  starter: { summary: 'starter <layout> [--board ID] [--input ID] [--driver ID]  a complete starter configuration', load: () => import('./commands/starter') },
-  matrix: { summary: 'matrix <config.json>  mixing matrix, rank and motion envelope', load: () => import('./commands/matrix') },
-  mix: { summary: 'mix <config.json> --forward F --strafe S --yaw Y  motor commands', load: () => import('./commands/mix') },
-  shape: { summary: 'shape <config.json> --channel N --raw V  a channel value after shaping', load: () => import('./commands/shape') },
-  check: { summary: 'check <config.json>  pin plan and configuration problems', load: () => import('./commands/check') },
+  starter: {
+    summary: 'starter <layout> [--board ID] [--input ID] [--driver ID]  a complete starter configuration',
+    load: () => import('./commands/starter'),
+  },
+  matrix: {
+    summary: 'matrix <config.json>  mixing matrix, rank and motion envelope',
+    load: () => import('./commands/matrix'),
+  },
+  mix: {
+    summary: 'mix <config.json> --forward F --strafe S --yaw Y  motor commands',
+    load: () => import('./commands/mix'),
+  },
+  shape: {
+    summary: 'shape <config.json> --channel N --raw V  a channel value after shaping',
+    load: () => import('./commands/shape'),
+  },
+  check: {
+    summary: 'check <config.json>  pin plan and configuration problems',
+    load: () => import('./commands/check'),
+  },
   assign: { summary: 'assign <config.json>  fill every unlocked pin', load: () => import('./commands/assign') },
-  bundle: { summary: 'bundle <config.json> (-o out.zip | --dir out/)  the firmware bundle', load: () => import('./commands/bundle') },
+  bundle: {
+    summary: 'bundle <config.json> (-o out.zip | --dir out/)  the firmware bundle',
+    load: () => import('./commands/bundle'),
+  },
 };
 
 function usage(): string {
-  return ['Usage: npm run cli -- <command> [arguments]', '', ...Object.values(commands).map((c) => `  ${c.summary}`)].join('\n');
+  return [
+    'Usage: npm run cli -- <command> [arguments]',
+    '',
+    ...Object.values(commands).map((c) => `  ${c.summary}`),
+  ].join('\n');
 }
 
 async function main(argv: string[]): Promise<number> {

@@ -39,7 +39,9 @@ export function parseConfig(json: unknown, source = 'configuration'): RobotConfi
 }
 
 export function formatIssues(error: z.ZodError): string {
-  return error.issues.map((issue) => `  ${issue.path.length ? issue.path.join('.') : '(root)'}: ${issue.message}`).join('\n');
+  return error.issues
+    .map((issue) => `  ${issue.path.length ? issue.path.join('.') : '(root)'}: ${issue.message}`)
+    .join('\n');
 }
 
 export function printJson(value: unknown): void {

@@ -27,7 +27,9 @@ function deriveKey(password: string, salt: Buffer, cost: PasswordCost): Promise<
   // Node refuses to use more than `maxmem`; allow the 128·N·r the setting needs plus headroom.
   const options: ScryptOptions = { N, r: cost.r, p: cost.p, maxmem: 128 * N * cost.r * 2 };
   return new Promise((resolve, reject) => {
-    scrypt(password.normalize('NFKC'), salt, KEY_LENGTH, options, (error, key) => (error ? reject(error) : resolve(key)));
+    scrypt(password.normalize('NFKC'), salt, KEY_LENGTH, options, (error, key) =>
+      error ? reject(error) : resolve(key),
+    );
   });
 }
 

@@ -32,7 +32,8 @@ function walk(stack: Layer[], prefix: string): string[] {
     }
     if (layer.handle?.stack) {
       if (layer.slash) return walk(layer.handle.stack, prefix);
-      if (typeof layer.rawPath !== 'string') throw new Error(`A router under ${prefix} is mounted on a pattern, not a path`);
+      if (typeof layer.rawPath !== 'string')
+        throw new Error(`A router under ${prefix} is mounted on a pattern, not a path`);
       return walk(layer.handle.stack, `${prefix}${layer.rawPath}`);
     }
     return [];

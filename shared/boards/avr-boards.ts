@@ -23,7 +23,9 @@ function timer(id: number, bits: 8 | 16, pins: string[], libraries: AvrTimer['li
     pins,
     prescalers: id === 2 ? TIMER2_PRESCALERS : PRESCALERS,
     defaultHz: isZero ? FAST_HZ : PHASE_CORRECT_HZ,
-    defaultFormula: isZero ? '16 MHz / 64 / 256 = 976.6 Hz (fast PWM)' : '16 MHz / 64 / 510 = 490.2 Hz (phase-correct PWM)',
+    defaultFormula: isZero
+      ? '16 MHz / 64 / 256 = 976.6 Hz (fast PWM)'
+      : '16 MHz / 64 / 510 = 490.2 Hz (phase-correct PWM)',
     coreUse: isZero ? 'millis(), micros() and delay()' : null,
     libraries,
   };
@@ -118,7 +120,12 @@ const ATMEGA328P_COMMON: Omit<BoardProfile, 'id' | 'name' | 'shortName' | 'fqbn'
   i2c: { sda: 'A4', scl: 'A5' },
   uarts: [{ port: 'Serial', rx: 'D0', tx: 'D1', usb: true, remappable: false }],
   // Arduino board pages: input voltage (recommended) 7–12 V on VIN.
-  supplyInput: { pin: 'VIN', minVolts: 7, maxVolts: 12, note: 'VIN feeds the on-board 5 V regulator (recommended 7–12 V)' },
+  supplyInput: {
+    pin: 'VIN',
+    minVolts: 7,
+    maxVolts: 12,
+    note: 'VIN feeds the on-board 5 V regulator (recommended 7–12 V)',
+  },
 };
 
 export const UNO: BoardProfile = {
@@ -213,5 +220,10 @@ export const MEGA2560: BoardProfile = {
     { port: 'Serial3', rx: 'D15', tx: 'D14', usb: false, remappable: false },
   ],
   pins: megaPins(),
-  supplyInput: { pin: 'VIN', minVolts: 7, maxVolts: 12, note: 'VIN feeds the on-board 5 V regulator (recommended 7–12 V)' },
+  supplyInput: {
+    pin: 'VIN',
+    minVolts: 7,
+    maxVolts: 12,
+    note: 'VIN feeds the on-board 5 V regulator (recommended 7–12 V)',
+  },
 };

@@ -2,9 +2,7 @@ import type { BoardId } from '../schemas/ids';
 
 /** How a pin makes PWM: an AVR timer output, any ESP32 LEDC channel, or an RP2040 slice channel. */
 export type PinPwm =
-  | { timer: number; channel: 'A' | 'B' | 'C' }
-  | { ledc: true }
-  | { slice: number; channel: 'A' | 'B' };
+  { timer: number; channel: 'A' | 'B' | 'C' } | { ledc: true } | { slice: number; channel: 'A' | 'B' };
 
 export interface PinUart {
   /** The Arduino object that owns the port: 'Serial', 'Serial1'… */
@@ -104,7 +102,10 @@ export interface BoardProfile {
   /** The order in which the Servo library takes timers, 12 servos per timer (AVR). */
   servoTimerOrder: number[];
   /** PWM hardware limits outside AVR: ESP32 LEDC channels, RP2040 slices. */
-  pwmUnits: { kind: 'avr-timers' } | { kind: 'ledc'; channels: number; timers: number; clockHz: number; maxBits: number } | { kind: 'rp2040-slices'; slices: number };
+  pwmUnits:
+    | { kind: 'avr-timers' }
+    | { kind: 'ledc'; channels: number; timers: number; clockHz: number; maxBits: number }
+    | { kind: 'rp2040-slices'; slices: number };
   spi: BoardSpi;
   i2c: { sda: string; scl: string };
   uarts: BoardUart[];

@@ -7,12 +7,25 @@ import type { BoardPin, BoardProfile } from './board-types';
 // Header labels and the core's default pins (Serial2 on 16/17, SPI on 18/19/23/5, I²C on
 // 21/22, analogWrite at 1 kHz) are from memory of the board and of the Arduino ESP32 core.
 
-const HEADER_GPIOS = [0, 1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12, 13, 14, 15, 16, 17, 18, 19, 21, 22, 23, 25, 26, 27, 32, 33, 34, 35, 36, 39];
+const HEADER_GPIOS = [
+  0, 1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12, 13, 14, 15, 16, 17, 18, 19, 21, 22, 23, 25, 26, 27, 32, 33, 34, 35, 36, 39,
+];
 const STRAPPING = new Set([0, 2, 5, 12, 15]);
 const FLASH = new Set([6, 7, 8, 9, 10, 11]);
 /** ADC1 (32–39) and ADC2 (0, 2, 4, 12–15, 25–27; unusable while Wi-Fi runs). */
 const ANALOG = new Set([0, 2, 4, 12, 13, 14, 15, 25, 26, 27, 32, 33, 34, 35, 36, 39]);
-const LABELS: Record<number, string> = { 1: 'TX', 3: 'RX', 6: 'CLK', 7: 'SD0', 8: 'SD1', 9: 'SD2', 10: 'SD3', 11: 'CMD', 36: 'VP', 39: 'VN' };
+const LABELS: Record<number, string> = {
+  1: 'TX',
+  3: 'RX',
+  6: 'CLK',
+  7: 'SD0',
+  8: 'SD1',
+  9: 'SD2',
+  10: 'SD3',
+  11: 'CMD',
+  36: 'VP',
+  39: 'VN',
+};
 const SPI: Record<number, BoardPin['spi']> = { 18: 'sck', 19: 'miso', 23: 'mosi', 5: 'ss' };
 const UART: Record<number, BoardPin['uart']> = {
   1: [{ port: 'Serial', role: 'tx' }],
@@ -74,5 +87,10 @@ export const ESP32_DEVKITC: BoardProfile = {
   ],
   pins: HEADER_GPIOS.map(esp32Pin),
   // The 5V pin's role and the ±5 % window are from memory.
-  supplyInput: { pin: '5V', minVolts: 4.75, maxVolts: 5.25, note: 'the 5V pin feeds the 3.3 V regulator and expects a regulated 5 V' },
+  supplyInput: {
+    pin: '5V',
+    minVolts: 4.75,
+    maxVolts: 5.25,
+    note: 'the 5V pin feeds the 3.3 V regulator and expects a regulated 5 V',
+  },
 };

@@ -116,19 +116,40 @@ export function rp2040PwmSetting(cpuHz: number, f: number): { divider: number; w
  * The setting a pin gets for a requested frequency (null = the board's default), never above
  * `ceilingHz` where the hardware allows a lower one. Null for a pin without PWM.
  */
-export function pwmSettingForPin(board: BoardProfile, pin: BoardPin, requestedHz: number | null, ceilingHz = Infinity): PwmSetting | null {
+export function pwmSettingForPin(
+  board: BoardProfile,
+  pin: BoardPin,
+  requestedHz: number | null,
+  ceilingHz = Infinity,
+): PwmSetting | null {
   if (!pin.pwm) return null;
   const fallback = defaultPwmHz(board, pin) ?? 1000;
   const timer = timerOfPin(board, pin);
   if (timer) {
-    if (requestedHz === null || timer.id === 0) return { ...avrDefault(board, timer), requestedHz, exact: requestedHz === null || Math.abs(timer.defaultHz - requestedHz) / requestedHz <= EXACT_TOLERANCE };
-    return timer.bits === 16 ? (avr16(board, timer, requestedHz, ceilingHz) ?? avrDefault(board, timer)) : avr8(board, timer, requestedHz, ceilingHz);
+    if (requestedHz === null || timer.id === 0)
+      return {
+        ...avrDefault(board, timer),
+        requestedHz,
+        exact: requestedHz === null || Math.abs(timer.defaultHz - requestedHz) / requestedHz <= EXACT_TOLERANCE,
+      };
+    return timer.bits === 16
+      ? (avr16(board, timer, requestedHz, ceilingHz) ?? avrDefault(board, timer))
+      : avr8(board, timer, requestedHz, ceilingHz);
   }
   const f = requestedHz ?? fallback;
   const units = board.pwmUnits;
   if (units.kind === 'ledc') {
     const bits = ledcResolutionBits(units.clockHz, f, units.maxBits);
-    return { requestedHz, actualHz: f, steps: 2 ** bits, exact: true, changeable: true, keepsAllChannels: true, ledc: { bits }, formula: `floor(log2(${mhz(units.clockHz)} / ${hz(f)})) = ${bits} bits` };
+    return {
+      requestedHz,
+      actualHz: f,
+      steps: 2 ** bits,
+      exact: true,
+      changeable: true,
+      keepsAllChannels: true,
+      ledc: { bits },
+      formula: `floor(log2(${mhz(units.clockHz)} / ${hz(f)})) = ${bits} bits`,
+    };
   }
   const s = rp2040PwmSetting(board.cpuHz, f);
   return {

@@ -68,5 +68,10 @@ export const RP2040_PICO: BoardProfile = {
   ],
   pins: [...HEADER_GPIOS, 25].sort((a, b) => a - b).map(picoPin),
   // Pico datasheet: VSYS accepts 1.8–5.5 V (from memory).
-  supplyInput: { pin: 'VSYS', minVolts: 1.8, maxVolts: 5.5, note: 'VSYS feeds the on-board buck-boost regulator (1.8–5.5 V)' },
+  supplyInput: {
+    pin: 'VSYS',
+    minVolts: 1.8,
+    maxVolts: 5.5,
+    note: 'VSYS feeds the on-board buck-boost regulator (1.8–5.5 V)',
+  },
 };

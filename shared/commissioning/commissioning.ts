@@ -69,8 +69,7 @@ export function swapMotors(config: RobotConfig, a: string, b: string): RobotConf
 }
 
 export type CommissioningResult =
-  | { ok: true; config: RobotConfig; actions: string[]; message: string | null }
-  | { ok: false; reason: string };
+  { ok: true; config: RobotConfig; actions: string[]; message: string | null } | { ok: false; reason: string };
 
 /**
  * Applies a whole bench test's findings: first the channels are relabelled so each drives the
@@ -81,7 +80,10 @@ export function applyFindings(config: RobotConfig, findings: readonly BenchFindi
   const names = config.motors.map((m) => m.name);
   const silent = findings.filter((f) => f.turned === null).map((f) => f.motor);
   if (silent.length > 0) {
-    return { ok: false, reason: `Nothing turned for ${quoteList(silent)}: check that motor's power, driver and pins before the configuration can help.` };
+    return {
+      ok: false,
+      reason: `Nothing turned for ${quoteList(silent)}: check that motor's power, driver and pins before the configuration can help.`,
+    };
   }
   const missing = names.filter((n) => !findings.some((f) => f.motor === n));
   if (missing.length > 0) return { ok: false, reason: `Answer the check for ${quoteList(missing)} first.` };
@@ -90,7 +92,10 @@ export function applyFindings(config: RobotConfig, findings: readonly BenchFindi
   const mapping = Object.fromEntries(findings.map((f) => [f.motor, f.turned as string]));
   const twice = names.filter((n) => findings.filter((f) => f.turned === n).length > 1);
   if (twice.length > 0) {
-    return { ok: false, reason: `Two motors were said to turn the wheels of ${quoteList(twice)}; run the bench test again and watch each motor closely.` };
+    return {
+      ok: false,
+      reason: `Two motors were said to turn the wheels of ${quoteList(twice)}; run the bench test again and watch each motor closely.`,
+    };
   }
   const actions = cycleWords(mapping);
   let next = actions.length > 0 ? relabelDriverMotors(config, mapping) : config;

@@ -73,9 +73,21 @@ export const DRIVER_KINDS: Record<DriverKindId, DriverKind> = {
     // 74HC244 buffer powered at 5 V on common modules: 74HC high threshold 0.7 × VCC = 3.5 V (from memory).
     maxPwmHz: 25_000,
     maxPwmSource: 'half-bridge datasheet, PWM up to 25 kHz',
-    ratings: { continuousA: 10, peakA: 43, motorVolts: { min: 6, max: 27 }, source: 'typical module listing: 43 A limit, about 10 A continuous with cooling, 6–27 V' },
-    logic: { minHigh: { volts: 3.5 }, supplyVolts: { min: 4.5, max: 5.5 }, note: 'inputs pass a 74HC buffer powered at 5 V on common modules; 3.3 V is below its 3.5 V high threshold' },
-    stopModes: { brake: 'both PWM inputs low: both low-side switches short the motor', coast: 'enable low: both halves switched off (needs the enable pin)' },
+    ratings: {
+      continuousA: 10,
+      peakA: 43,
+      motorVolts: { min: 6, max: 27 },
+      source: 'typical module listing: 43 A limit, about 10 A continuous with cooling, 6–27 V',
+    },
+    logic: {
+      minHigh: { volts: 3.5 },
+      supplyVolts: { min: 4.5, max: 5.5 },
+      note: 'inputs pass a 74HC buffer powered at 5 V on common modules; 3.3 V is below its 3.5 V high threshold',
+    },
+    stopModes: {
+      brake: 'both PWM inputs low: both low-side switches short the motor',
+      coast: 'enable low: both halves switched off (needs the enable pin)',
+    },
     regulator: null,
     bridgeDropVolts: null,
     channels: 1,
@@ -93,7 +105,12 @@ export const DRIVER_KINDS: Record<DriverKindId, DriverKind> = {
     // the logic levels and the brake behaviour are from memory.
     maxPwmHz: 20_000,
     maxPwmSource: 'typical PWM + direction module, up to 20 kHz; check your module',
-    ratings: { continuousA: 10, peakA: 30, motorVolts: { min: 6, max: 30 }, source: 'typical 10 A PWM + direction module; enter your module’s ratings' },
+    ratings: {
+      continuousA: 10,
+      peakA: 30,
+      motorVolts: { min: 6, max: 30 },
+      source: 'typical 10 A PWM + direction module; enter your module’s ratings',
+    },
     logic: { minHigh: { volts: 3 }, supplyVolts: null, note: 'typical modules accept 3.3 V and 5 V logic' },
     stopModes: { brake: 'PWM low: most modules short the motor through the low side', coast: null },
     regulator: null,
@@ -114,10 +131,23 @@ export const DRIVER_KINDS: Record<DriverKindId, DriverKind> = {
     // Brake and coast truth table from memory (REFERENCES §7).
     maxPwmHz: 25_000,
     maxPwmSource: 'L298 datasheet, commutation frequency 25 kHz typical',
-    ratings: { continuousA: 2, peakA: 3, motorVolts: { min: 4.8, max: 46 }, source: 'L298 datasheet: 2 A DC per channel, 3 A non-repetitive peak, VS up to 46 V' },
-    logic: { minHigh: { volts: 2.3 }, supplyVolts: { min: 4.5, max: 7 }, note: 'TTL inputs, high from 2.3 V (L298 datasheet)' },
+    ratings: {
+      continuousA: 2,
+      peakA: 3,
+      motorVolts: { min: 4.8, max: 46 },
+      source: 'L298 datasheet: 2 A DC per channel, 3 A non-repetitive peak, VS up to 46 V',
+    },
+    logic: {
+      minHigh: { volts: 2.3 },
+      supplyVolts: { min: 4.5, max: 7 },
+      note: 'TTL inputs, high from 2.3 V (L298 datasheet)',
+    },
     stopModes: { brake: 'enable high, both inputs equal', coast: 'enable low' },
-    regulator: { outputVolts: 5, maxInputVolts: 12, note: 'the module’s 5 V regulator, used with its jumper fitted, for motor supplies up to 12 V' },
+    regulator: {
+      outputVolts: 5,
+      maxInputVolts: 12,
+      note: 'the module’s 5 V regulator, used with its jumper fitted, for motor supplies up to 12 V',
+    },
     bridgeDropVolts: 2.5,
     channels: 2,
     channelRoles: [
@@ -136,8 +166,17 @@ export const DRIVER_KINDS: Record<DriverKindId, DriverKind> = {
     // Brake with both inputs high, coast with both low: from memory (REFERENCES §7).
     maxPwmHz: 100_000,
     maxPwmSource: 'TB6612FNG datasheet, PWM input up to 100 kHz',
-    ratings: { continuousA: 1.2, peakA: 3.2, motorVolts: { min: 2.5, max: 13.5 }, source: 'TB6612FNG datasheet: 1.2 A average, 3.2 A peak, VM 2.5–13.5 V' },
-    logic: { minHigh: { fractionOfVcc: 0.7 }, supplyVolts: { min: 2.7, max: 5.5 }, note: 'inputs read high from 0.7 × VCC: feed VCC from the board’s logic supply' },
+    ratings: {
+      continuousA: 1.2,
+      peakA: 3.2,
+      motorVolts: { min: 2.5, max: 13.5 },
+      source: 'TB6612FNG datasheet: 1.2 A average, 3.2 A peak, VM 2.5–13.5 V',
+    },
+    logic: {
+      minHigh: { fractionOfVcc: 0.7 },
+      supplyVolts: { min: 2.7, max: 5.5 },
+      note: 'inputs read high from 0.7 × VCC: feed VCC from the board’s logic supply',
+    },
     stopModes: { brake: 'both inputs high: short brake', coast: 'both inputs low: outputs off' },
     regulator: null,
     bridgeDropVolts: null,
@@ -156,7 +195,12 @@ export const DRIVER_KINDS: Record<DriverKindId, DriverKind> = {
     // Input threshold, top PWM frequency and the brake/coast truth table from memory (REFERENCES §7).
     maxPwmHz: 50_000,
     maxPwmSource: 'DRV8833-class bridge, typically up to 50 kHz',
-    ratings: { continuousA: 1.5, peakA: 2, motorVolts: { min: 2.7, max: 10.8 }, source: 'DRV8833 datasheet: 1.5 A RMS, 2 A peak per bridge, VM 2.7–10.8 V' },
+    ratings: {
+      continuousA: 1.5,
+      peakA: 2,
+      motorVolts: { min: 2.7, max: 10.8 },
+      source: 'DRV8833 datasheet: 1.5 A RMS, 2 A peak per bridge, VM 2.7–10.8 V',
+    },
     logic: { minHigh: { volts: 2 }, supplyVolts: null, note: 'inputs read high from about 2 V and take 3.3 V or 5 V' },
     stopModes: { brake: 'both inputs high', coast: 'both inputs low' },
     regulator: null,
@@ -177,8 +221,15 @@ export const DRIVER_KINDS: Record<DriverKindId, DriverKind> = {
     maxPwmSource: 'servo pulses at 50 Hz; the ESC makes its own PWM',
     ratings: { continuousA: null, peakA: null, motorVolts: null, source: 'the ESC’s own label' },
     logic: { minHigh: { volts: 2.5 }, supplyVolts: null, note: 'most ESC signal inputs read 3.3 V pulses' },
-    stopModes: { brake: 'centre pulse; the ESC’s own brake setting decides', coast: 'centre pulse; the ESC’s own brake setting decides' },
-    regulator: { outputVolts: 5, maxInputVolts: 12, note: 'an ESC with a BEC can feed the board 5 V (check the ESC’s label)' },
+    stopModes: {
+      brake: 'centre pulse; the ESC’s own brake setting decides',
+      coast: 'centre pulse; the ESC’s own brake setting decides',
+    },
+    regulator: {
+      outputVolts: 5,
+      maxInputVolts: 12,
+      note: 'an ESC with a BEC can feed the board 5 V (check the ESC’s label)',
+    },
     bridgeDropVolts: null,
     channels: 1,
     channelRoles: [{ key: 'signal', label: 'Signal (servo pulse)', need: 'servo-pulse', optional: false }],

@@ -30,7 +30,10 @@ function pairs(text: string): Record<string, string> {
 export function parseBootLine(pasted: string): BootLineResult {
   const line = pasted.split(/\r?\n/).find((l) => START.test(l));
   if (!line) {
-    return { ok: false, reason: 'No boot line found: paste the line the robot prints at start-up, beginning with boot robot="' };
+    return {
+      ok: false,
+      reason: 'No boot line found: paste the line the robot prints at start-up, beginning with boot robot="',
+    };
   }
   const start = START.exec(line)!;
   const rest = line.slice(start.index + start[0].length);
@@ -44,7 +47,10 @@ export function parseBootLine(pasted: string): BootLineResult {
   }
   const hash = (fields.hash ?? '').toLowerCase();
   if (!new RegExp(`^[0-9a-f]{${CONFIG_HASH_LENGTH}}$`).test(hash)) {
-    return { ok: false, reason: `The boot line's hash must be ${CONFIG_HASH_LENGTH} hexadecimal digits, got "${fields.hash ?? ''}"` };
+    return {
+      ok: false,
+      reason: `The boot line's hash must be ${CONFIG_HASH_LENGTH} hexadecimal digits, got "${fields.hash ?? ''}"`,
+    };
   }
   const { revision: _r, hash: _h, ...extra } = fields;
   return {

@@ -64,7 +64,8 @@ function objectChanges(a: Record<string, unknown>, b: Record<string, unknown>, p
   const keys = [...Object.keys(a), ...Object.keys(b).filter((k) => !(k in a))];
   return keys.flatMap((key) => {
     // A key on one side only is one change of its whole value (a pin role, a layout parameter).
-    if (!(key in b) || !(key in a)) return deepEqual(a[key], b[key]) ? [] : [{ path: [...path, key], before: a[key], after: b[key] }];
+    if (!(key in b) || !(key in a))
+      return deepEqual(a[key], b[key]) ? [] : [{ path: [...path, key], before: a[key], after: b[key] }];
     return fieldChanges(a[key], b[key], [...path, key]);
   });
 }
@@ -83,7 +84,9 @@ export function fieldChanges(a: unknown, b: unknown, path: FieldPath = []): Fiel
   if (Array.isArray(a) && Array.isArray(b) && ![...a, ...b].every(isPrimitive)) {
     const length = Math.max(a.length, b.length);
     return Array.from({ length }, (_, i) =>
-      i < a.length && i < b.length ? fieldChanges(a[i], b[i], [...path, i]) : [{ path: [...path, i], before: a[i], after: b[i] }],
+      i < a.length && i < b.length
+        ? fieldChanges(a[i], b[i], [...path, i])
+        : [{ path: [...path, i], before: a[i], after: b[i] }],
     ).flat();
   }
   return [{ path, before: a, after: b }];

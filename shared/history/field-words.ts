@@ -52,8 +52,14 @@ export function plainWords(value: unknown): string {
 }
 
 const boardNames = Object.fromEntries(Object.entries(BOARDS).map(([id, b]) => [id, b.name])) as Record<BoardId, string>;
-const sourceNames = Object.fromEntries(Object.entries(INPUT_SOURCES).map(([id, s]) => [id, s.name])) as Record<InputSourceId, string>;
-const kindNames = Object.fromEntries(Object.entries(DRIVER_KINDS).map(([id, k]) => [id, k.name])) as Record<DriverKindId, string>;
+const sourceNames = Object.fromEntries(Object.entries(INPUT_SOURCES).map(([id, s]) => [id, s.name])) as Record<
+  InputSourceId,
+  string
+>;
+const kindNames = Object.fromEntries(Object.entries(DRIVER_KINDS).map(([id, k]) => [id, k.name])) as Record<
+  DriverKindId,
+  string
+>;
 const layoutNames: Record<DriveLayoutId | 'custom', string> = { ...LAYOUT_LABELS, custom: 'Custom wheel table' };
 
 /** Field key → its name in words and how its values read; values of keys not listed read plainly. */

@@ -68,7 +68,8 @@ function allRows(oldText: string, newText: string): DiffRow[] {
     else if (change.added) flush(change.value);
     else {
       flush([]);
-      for (const text of change.value) rows.push({ kind: 'same', left: { number: l++, text }, right: { number: r++, text } });
+      for (const text of change.value)
+        rows.push({ kind: 'same', left: { number: l++, text }, right: { number: r++, text } });
     }
   }
   flush([]);
@@ -99,7 +100,8 @@ function withContext(rows: DiffRow[], context: number): DiffRow[] {
 export function fileDiff(path: string, oldText: string | null, newText: string | null, context = 3): FileDiff {
   const rows = allRows(oldText ?? '', newText ?? '');
   const status = oldText === null ? 'added' : newText === null ? 'removed' : 'changed';
-  const count = (side: 'left' | 'right') => rows.filter((row) => row.kind !== 'same' && row.kind !== 'skip' && row[side]).length;
+  const count = (side: 'left' | 'right') =>
+    rows.filter((row) => row.kind !== 'same' && row.kind !== 'skip' && row[side]).length;
   return { path, status, added: count('right'), removed: count('left'), rows: withContext(rows, context) };
 }
 
@@ -118,7 +120,9 @@ export function restamp(text: string, from: RevisionStamp, to: RevisionStamp): s
   return text
     .split(from.hash)
     .join(to.hash)
-    .replace(/(revision[\s=":]*)(\d+)/gi, (whole, lead: string, n: string) => (Number(n) === from.revision ? `${lead}${to.revision}` : whole));
+    .replace(/(revision[\s=":]*)(\d+)/gi, (whole, lead: string, n: string) =>
+      Number(n) === from.revision ? `${lead}${to.revision}` : whole,
+    );
 }
 
 export interface FilesDiff {
@@ -146,7 +150,8 @@ export function filesDiff(
     const a = old.get(path) ?? null;
     const b = now.get(path) ?? null;
     if (a === b) result.unchanged.push(path);
-    else if (a !== null && b !== null && stamps && restamp(a, stamps.from, stamps.to) === b) result.stampOnly.push(path);
+    else if (a !== null && b !== null && stamps && restamp(a, stamps.from, stamps.to) === b)
+      result.stampOnly.push(path);
     else result.changed.push(fileDiff(path, a, b, options.context));
   }
   return result;

@@ -45,7 +45,12 @@ function withMine<T>(root: T, path: FieldPath, value: unknown): T {
   const listPath = path.slice(0, -1);
   const list = valueAt(root, listPath);
   if (!Array.isArray(list) || typeof index !== 'number') return withValueAt(root, path, value);
-  if (value === undefined) return withValueAt(root, listPath, list.filter((_, i) => i !== index));
+  if (value === undefined)
+    return withValueAt(
+      root,
+      listPath,
+      list.filter((_, i) => i !== index),
+    );
   return index < list.length ? withValueAt(root, path, value) : withValueAt(root, listPath, [...list, value]);
 }
 
@@ -54,10 +59,15 @@ function withMine<T>(root: T, path: FieldPath, value: unknown): T {
  * Lists differ only at their ends (items past the shorter list are rows of their own), so my
  * changes are applied first, in order, and my removals last, from the end, keeping indexes true.
  */
-export function rebaseDraft<T>(theirs: T, rows: readonly RebaseRow[], choices: Readonly<Record<string, 'theirs' | 'mine'>>): T {
+export function rebaseDraft<T>(
+  theirs: T,
+  rows: readonly RebaseRow[],
+  choices: Readonly<Record<string, 'theirs' | 'mine'>>,
+): T {
   const chosen = rows.filter((row) => (choices[row.key] ?? row.suggested) === 'mine');
   const removals = chosen.filter((row) => row.mine === undefined).reverse();
   let next = structuredClone(theirs);
-  for (const row of [...chosen.filter((r) => r.mine !== undefined), ...removals]) next = withMine(next, row.path, structuredClone(row.mine));
+  for (const row of [...chosen.filter((r) => r.mine !== undefined), ...removals])
+    next = withMine(next, row.path, structuredClone(row.mine));
   return next;
 }

@@ -50,7 +50,9 @@ function roleLabel(roles: { id: string; label: string }[], id: string): string {
   return roles.find((r) => r.id === id)?.label ?? id;
 }
 
-const pinKey = (rest: FieldPath): Pick<Located, 'key' | 'prefix'> => ({ key: rest.length ? String(rest[rest.length - 1]) : null });
+const pinKey = (rest: FieldPath): Pick<Located, 'key' | 'prefix'> => ({
+  key: rest.length ? String(rest[rest.length - 1]) : null,
+});
 
 function locateWiring(path: FieldPath, a: Side, b: Side): Located {
   const [, part, index, sub, role, ...rest] = path;
@@ -65,8 +67,18 @@ function locateWiring(path: FieldPath, a: Side, b: Side): Located {
   }
   if (part === 'inputPins' && index !== undefined) {
     const source = pick(a, b, (c) => c.controls);
-    const roles = source ? inputPinRoles(source.source, source.channels.map((ch: { number: number }) => ch.number)) : [];
-    return { section: 'Wiring', subject: 'Input', ...pinKey([sub, role, ...rest].filter((x) => x !== undefined) as FieldPath), prefix: `${roleLabel(roles, String(index))} pin` };
+    const roles = source
+      ? inputPinRoles(
+          source.source,
+          source.channels.map((ch: { number: number }) => ch.number),
+        )
+      : [];
+    return {
+      section: 'Wiring',
+      subject: 'Input',
+      ...pinKey([sub, role, ...rest].filter((x) => x !== undefined) as FieldPath),
+      prefix: `${roleLabel(roles, String(index))} pin`,
+    };
   }
   if (part === 'statusLed' || part === 'benchTestPin') {
     const subject = part === 'statusLed' ? 'Status LED' : 'Bench test switch';
@@ -84,10 +96,18 @@ function locateControls(path: FieldPath, a: Side, b: Side): Located {
   }
   if (part === 'axes' && index !== undefined) {
     const axis = String(index);
-    return { section: 'Controls', subject: `${axis[0].toUpperCase()}${axis.slice(1)} axis`, key: key === undefined ? null : String(key) };
+    return {
+      section: 'Controls',
+      subject: `${axis[0].toUpperCase()}${axis.slice(1)} axis`,
+      key: key === undefined ? null : String(key),
+    };
   }
   if (part === 'rateSwitch' || part === 'armingSwitch') {
-    return { section: 'Controls', subject: part === 'rateSwitch' ? 'Rate switch' : 'Arming switch', key: index === undefined ? null : String(index) };
+    return {
+      section: 'Controls',
+      subject: part === 'rateSwitch' ? 'Rate switch' : 'Arming switch',
+      key: index === undefined ? null : String(index),
+    };
   }
   if (part === 'link') {
     if (index === 'remotePins' && key !== undefined) {
@@ -106,9 +126,19 @@ function locate(path: FieldPath, a: Side, b: Side): Located {
     case 'chassis': {
       if (part === 'wheels' && typeof index === 'number') {
         const wheel = pick(a, b, (c) => c.chassis?.wheels?.[index]);
-        return { section: 'Chassis', subject: itemLabel(wheel?.name, 'wheel', index, ['track']), key: key === undefined ? null : String(key) };
+        return {
+          section: 'Chassis',
+          subject: itemLabel(wheel?.name, 'wheel', index, ['track']),
+          key: key === undefined ? null : String(key),
+        };
       }
-      if (part === 'params') return { section: 'Chassis', subject: 'Chassis', key: index === undefined ? 'params' : String(index), prefix: 'layout' };
+      if (part === 'params')
+        return {
+          section: 'Chassis',
+          subject: 'Chassis',
+          key: index === undefined ? 'params' : String(index),
+          prefix: 'layout',
+        };
       return { section: 'Chassis', subject: 'Chassis', key: part === undefined ? null : String(part) };
     }
     case 'motors': {
@@ -135,7 +165,8 @@ function locate(path: FieldPath, a: Side, b: Side): Located {
 function sentence(change: Omit<SettingChange, 'text' | 'path' | 'section'>): string {
   if (change.field === '') return `${change.subject} ${change.kind}`;
   if (change.kind === 'added') return `${change.subject}: ${change.field} added${change.to ? ` (${change.to})` : ''}`;
-  if (change.kind === 'removed') return `${change.subject}: ${change.field} removed${change.from ? ` (was ${change.from})` : ''}`;
+  if (change.kind === 'removed')
+    return `${change.subject}: ${change.field} removed${change.from ? ` (was ${change.from})` : ''}`;
   return `${change.subject}: ${change.field} ${change.from} → ${change.to}`;
 }
 
@@ -143,7 +174,8 @@ function sentence(change: Omit<SettingChange, 'text' | 'path' | 'section'>): str
 function placeWords(path: FieldPath, a: Side, b: Side): Located & { field: string } {
   const where = locate(path, a, b);
   // A pin's own field reads as the role's pin ("A PWM pin"), not "A PWM pin pin".
-  const keyName = where.key === null || (where.prefix?.endsWith(' pin') && where.key === 'pin') ? '' : fieldName(where.key);
+  const keyName =
+    where.key === null || (where.prefix?.endsWith(' pin') && where.key === 'pin') ? '' : fieldName(where.key);
   return { ...where, field: [where.prefix, keyName].filter(Boolean).join(' ') };
 }
 
@@ -179,12 +211,20 @@ export function settingChanges(from: unknown, to: unknown): SettingChange[] {
   return fieldChanges(from, to).map(({ path, before, after }) => {
     const where = placeWords(path, side(from), side(to));
     const kind = before === undefined ? 'added' : after === undefined ? 'removed' : 'changed';
-    const change = { subject: where.subject, field: where.field, kind, from: valueIn(where, before), to: valueIn(where, after) } as const;
+    const change = {
+      subject: where.subject,
+      field: where.field,
+      kind,
+      from: valueIn(where, before),
+      to: valueIn(where, after),
+    } as const;
     return { path, section: where.section, ...change, text: sentence(change) };
   });
 }
 
 /** A change's place on one line, for lists without section headings: "Chassis › Front left wheel › reversed". */
 export function changeLabel(change: Pick<SettingChange, 'section' | 'subject' | 'field'>): string {
-  return [change.section === change.subject ? null : change.section, change.subject, change.field].filter(Boolean).join(' › ');
+  return [change.section === change.subject ? null : change.section, change.subject, change.field]
+    .filter(Boolean)
+    .join(' › ');
 }

@@ -31,8 +31,22 @@ export interface InputSource {
 
 export const INPUT_SOURCES: Record<InputSourceId, InputSource> = {
   // Servo pulses 1000–2000 µs, centre 1500 µs (Arduino reference, Servo.writeMicroseconds).
-  'rc-pwm': { id: 'rc-pwm', name: 'RC receiver, one wire per channel', unit: 'µs', defaultCalibration: { low: 1000, centre: 1500, high: 2000 }, maxChannels: 8, usesSpi: false },
-  ppm: { id: 'ppm', name: 'PPM sum signal', unit: 'µs', defaultCalibration: { low: 1000, centre: 1500, high: 2000 }, maxChannels: 8, usesSpi: false },
+  'rc-pwm': {
+    id: 'rc-pwm',
+    name: 'RC receiver, one wire per channel',
+    unit: 'µs',
+    defaultCalibration: { low: 1000, centre: 1500, high: 2000 },
+    maxChannels: 8,
+    usesSpi: false,
+  },
+  ppm: {
+    id: 'ppm',
+    name: 'PPM sum signal',
+    unit: 'µs',
+    defaultCalibration: { low: 1000, centre: 1500, high: 2000 },
+    maxChannels: 8,
+    usesSpi: false,
+  },
   // SBUS counts 172–1811 for ±100 %, centre 992 (open SBUS descriptions).
   // SBUS: 100000 baud, 8E2, inverted (REFERENCES §5). ATmega UARTs cannot invert their input;
   // the ESP32 UART and the RP2040 GPIO input can (ESP32 TRM UART chapter, RP2040 datasheet
@@ -45,7 +59,11 @@ export const INPUT_SOURCES: Record<InputSourceId, InputSource> = {
     maxChannels: 16,
     usesSpi: false,
     serial: { baud: 100_000, format: '8E2', inverted: true },
-    needsPart: { families: ['avr'], part: 'a signal inverter (one NPN transistor and two resistors, or a 74HC14 gate)', reason: 'SBUS is sent inverted and the ATmega serial port cannot invert its input' },
+    needsPart: {
+      families: ['avr'],
+      part: 'a signal inverter (one NPN transistor and two resistors, or a 74HC14 gate)',
+      reason: 'SBUS is sent inverted and the ATmega serial port cannot invert its input',
+    },
   },
   // iBUS: 115200 baud, not inverted (REFERENCES §5).
   ibus: {
@@ -58,7 +76,14 @@ export const INPUT_SOURCES: Record<InputSourceId, InputSource> = {
     serial: { baud: 115_200, format: '8N1', inverted: false },
   },
   // The home-made link sends each stick as a 10-bit reading (0–1023), as the remote's ADC reads it.
-  nrf24: { id: 'nrf24', name: 'Home-made 2.4 GHz link (nRF24L01+)', unit: 'counts', defaultCalibration: { low: 0, centre: 512, high: 1023 }, maxChannels: 8, usesSpi: true },
+  nrf24: {
+    id: 'nrf24',
+    name: 'Home-made 2.4 GHz link (nRF24L01+)',
+    unit: 'counts',
+    defaultCalibration: { low: 0, centre: 512, high: 1023 },
+    maxChannels: 8,
+    usesSpi: true,
+  },
 };
 
 /** The pins an input source needs for the given channel numbers. */
@@ -86,7 +111,9 @@ export function inputPinRoles(source: InputSourceId, channelNumbers: number[]): 
  * potentiometer or stick axis.
  */
 export function remotePinRoles(controls: Pick<Controls, 'channels' | 'rateSwitch' | 'armingSwitch'>): InputPinRole[] {
-  const switches = new Set([controls.rateSwitch.channel, controls.armingSwitch.channel].filter((c): c is number => c !== null));
+  const switches = new Set(
+    [controls.rateSwitch.channel, controls.armingSwitch.channel].filter((c): c is number => c !== null),
+  );
   const channels = [...controls.channels].sort((a, b) => a.number - b.number);
   return [
     { id: 'ce', label: 'Transceiver CE', need: 'digital-out' },

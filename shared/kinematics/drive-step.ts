@@ -65,7 +65,9 @@ export function driveStep(config: DriveStepInput, sticks: Sticks, options: Drive
     }),
   ) as Sticks;
   const targets = mixSticks(mixing, shapedSticks, controls.desaturation);
-  const ramped = options.ramp ? rampToward(options.ramp.previous, targets, safety.rampPerSecond * options.ramp.dtS) : [...targets];
+  const ramped = options.ramp
+    ? rampToward(options.ramp.previous, targets, safety.rampPerSecond * options.ramp.dtS)
+    : [...targets];
   const limit = safety.outputLimitPercent / 100;
   const limited = ramped.map((c) => c * limit);
   const thresholds = mixing.motors.map((name) => config.motors.find((m) => m.name === name)?.startThreshold ?? 0);

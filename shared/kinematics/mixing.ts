@@ -63,7 +63,11 @@ export function computeMixing(input: MixingInput): Mixing {
   };
   const axisScale = { forwardMps: scaleOf(1), strafeMps: scaleOf(2), yawRadps: scaleOf(0) };
   // Stick columns: forward = +vx, strafe (right) = −vy, yaw (clockwise) = −ω.
-  const natural = twistMatrix.map((row) => [row[1] * axisScale.forwardMps, -row[2] * axisScale.strafeMps, -row[0] * axisScale.yawRadps]);
+  const natural = twistMatrix.map((row) => [
+    row[1] * axisScale.forwardMps,
+    -row[2] * axisScale.strafeMps,
+    -row[0] * axisScale.yawRadps,
+  ]);
   const { inverse, rank } = pseudoInverse(natural, 3);
   const projection = multiply(inverse, natural);
   const scales = [axisScale.forwardMps, axisScale.strafeMps, axisScale.yawRadps];
@@ -101,7 +105,8 @@ const AXIS_WORDS: Record<StickAxis, { noun: string; cannot: string }> = {
 };
 
 function degeneracyNotes(mixing: Mixing, natural: Matrix): string[] {
-  if (mixing.rank === 0) return ['No motor can move this robot: check the wheel positions, driving directions and motors.'];
+  if (mixing.rank === 0)
+    return ['No motor can move this robot: check the wheel positions, driving directions and motors.'];
   const can = { forward: mixing.canDrive, strafe: mixing.canStrafe, yaw: mixing.canTurn };
   return STICK_AXES.filter((axis) => !can[axis]).map((axis) => {
     const k = STICK_AXES.indexOf(axis);
@@ -179,7 +184,10 @@ const GERUND: Record<StickAxis, string> = {
 };
 
 /** What each full stick would do if `motorName` turned the other way ("spins instead of strafing"). */
-export function whatIfReversed(input: MixingInput, motorName: string): { motor: string; cases: ReversalCase[]; summary: string } {
+export function whatIfReversed(
+  input: MixingInput,
+  motorName: string,
+): { motor: string; cases: ReversalCase[]; summary: string } {
   const mixing = computeMixing(input);
   const index = mixing.motors.indexOf(motorName);
   if (index < 0) throw new Error(`No motor is named "${motorName}"`);

@@ -20,7 +20,8 @@ const percent = (fraction: number) => `${Math.round(Math.abs(fraction) * 100)} %
 export function describeMotion(m: MotionFractions): string {
   const parts: string[] = [];
   const moves = Math.abs(m.forward) >= NOTICEABLE || Math.abs(m.strafe) >= NOTICEABLE;
-  if (Math.abs(m.forward) >= NOTICEABLE) parts.push(`drives ${m.forward > 0 ? 'forward' : 'backward'} at ${percent(m.forward)}`);
+  if (Math.abs(m.forward) >= NOTICEABLE)
+    parts.push(`drives ${m.forward > 0 ? 'forward' : 'backward'} at ${percent(m.forward)}`);
   if (Math.abs(m.strafe) >= NOTICEABLE) parts.push(`slides ${m.strafe > 0 ? 'right' : 'left'} at ${percent(m.strafe)}`);
   if (Math.abs(m.yaw) >= NOTICEABLE) {
     const way = m.yaw > 0 ? 'right (clockwise)' : 'left (counter-clockwise)';

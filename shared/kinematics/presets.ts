@@ -8,10 +8,20 @@ import { MotorSchema, type Chassis, type Motor, type Wheel } from '../schemas/ro
 // Defaults are ordinary hobby sizes, chosen for the starter, not measured from any build.
 
 const length = (label: string, fallback: number, min = 20, max = 2000) =>
-  z.number().min(min, `${label} must be at least ${min} mm`).max(max, `${label} must be at most ${max} mm`).default(fallback).describe(`${label} (mm)`);
+  z
+    .number()
+    .min(min, `${label} must be at least ${min} mm`)
+    .max(max, `${label} must be at most ${max} mm`)
+    .default(fallback)
+    .describe(`${label} (mm)`);
 const wheelRadius = (fallback: number) => length('Wheel radius', fallback, 5, 500);
 const maxRpm = (fallback: number) =>
-  z.number().positive('Max speed must be more than 0 rpm').max(100000).default(fallback).describe('Wheel top speed (rpm)');
+  z
+    .number()
+    .positive('Max speed must be more than 0 rpm')
+    .max(100000)
+    .default(fallback)
+    .describe('Wheel top speed (rpm)');
 
 export const PRESET_PARAM_SCHEMAS = {
   'trio-omni': z.object({
@@ -42,7 +52,10 @@ export const PRESET_PARAM_SCHEMAS = {
     maxRpm: maxRpm(150),
   }),
   'skid-steer': z.object({
-    motorsPerSide: z.union([z.literal(1), z.literal(2)]).default(2).describe('Motors per side'),
+    motorsPerSide: z
+      .union([z.literal(1), z.literal(2)])
+      .default(2)
+      .describe('Motors per side'),
     wheelbaseMm: length('Wheelbase (front to rear axle)', 160),
     trackWidthMm: length('Track width (left to right wheel)', 200),
     wheelRadiusMm: wheelRadius(35),
@@ -69,7 +82,10 @@ export const LAYOUT_LABELS: Record<DriveLayoutId, string> = {
 };
 
 /** A starter chassis: the layout, its filled-in parameters and the wheel table built from them. */
-export function presetChassis<L extends DriveLayoutId>(layout: L, params: PresetParamsInput<L> = {} as PresetParamsInput<L>): Chassis {
+export function presetChassis<L extends DriveLayoutId>(
+  layout: L,
+  params: PresetParamsInput<L> = {} as PresetParamsInput<L>,
+): Chassis {
   const schema = PRESET_PARAM_SCHEMAS[layout] as z.ZodObject;
   const filled = schema.parse(params) as Record<string, number | string>;
   const wheels = BUILDERS[layout](filled as never).map(tidyWheel);
@@ -90,7 +106,9 @@ const BUILDERS: { [L in DriveLayoutId]: Builder<L> } = {
     const kind = p.element === 'omni-tracks' ? 'omni-track' : 'omni';
     // Order and driving directions as Lynch & Park §13.2.1: wheel i at angle φ, β = φ − 90°,
     // so the layout with the lone wheel on the left is the book's three-omni example.
-    return [lone, lone - 120, lone + 120].map((phi) => ringWheel(phi, p.centreDistanceMm, kind, p.wheelRadiusMm, p.maxRpm));
+    return [lone, lone - 120, lone + 120].map((phi) =>
+      ringWheel(phi, p.centreDistanceMm, kind, p.wheelRadiusMm, p.maxRpm),
+    );
   },
   'quad-omni-x': (p) =>
     [45, -45, -135, 135].map((phi) => ringWheel(phi, p.centreDistanceMm, 'omni', p.wheelRadiusMm, p.maxRpm)),
@@ -146,7 +164,17 @@ function ringWheel(phiDeg: number, distance: number, kind: Wheel['kind'], radius
   const phi = normalizeDeg(phiDeg);
   const rad = (phi * Math.PI) / 180;
   const name = nameAt(Math.cos(rad), Math.sin(rad));
-  return wheel(name, name, kind, distance * Math.cos(rad), distance * Math.sin(rad), normalizeDeg(phi - 90), 0, radiusMm, rpm);
+  return wheel(
+    name,
+    name,
+    kind,
+    distance * Math.cos(rad),
+    distance * Math.sin(rad),
+    normalizeDeg(phi - 90),
+    0,
+    radiusMm,
+    rpm,
+  );
 }
 
 function wheel(

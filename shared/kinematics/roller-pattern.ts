@@ -38,7 +38,9 @@ export type RollerPattern = 'x' | 'o' | 'mixed';
  * four lines draw an X), 'o' when every one leans the other way (a ring), 'mixed' otherwise;
  * null without mecanum wheels. Angles of lines are compared mod 180° by the sign of sin 2α.
  */
-export function rollerPattern(wheels: Pick<Wheel, 'kind' | 'xMm' | 'yMm' | 'driveAngleDeg' | 'rollerAngleDeg'>[]): RollerPattern | null {
+export function rollerPattern(
+  wheels: Pick<Wheel, 'kind' | 'xMm' | 'yMm' | 'driveAngleDeg' | 'rollerAngleDeg'>[],
+): RollerPattern | null {
   const mecanum = wheels.filter((w) => w.kind === 'mecanum');
   if (mecanum.length === 0) return null;
   const lean = (lineDeg: number, driveDeg: number) => Math.sin((2 * (lineDeg - driveDeg) * Math.PI) / 180);

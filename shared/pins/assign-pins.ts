@@ -16,7 +16,13 @@ export type AssignResult = { ok: true; config: RobotConfig } | { ok: false; reas
 /** Placements tried before giving up; ordinary layouts need a few dozen. */
 const NODE_LIMIT = 200_000;
 
-const CONFIG_LEVEL_CODES = new Set(['motor-not-on-driver', 'motor-on-two-drivers', 'driver-motor-unknown', 'driver-too-many-motors', 'pwm-frequency-above-driver-max']);
+const CONFIG_LEVEL_CODES = new Set([
+  'motor-not-on-driver',
+  'motor-on-two-drivers',
+  'driver-motor-unknown',
+  'driver-too-many-motors',
+  'pwm-frequency-above-driver-max',
+]);
 
 function sentence(problem: Problem, tail: string): string {
   return `${problem.message.replace(/\.$/, '')}; ${tail}.`;
@@ -25,7 +31,9 @@ function sentence(problem: Problem, tail: string): string {
 /** Errors among the locked pins alone: nothing the assignment may change can fix them. */
 function lockedError(ctx: PlanContext, locked: PinDemand[]): string | null {
   const only = { ...ctx, demands: locked };
-  const problem = [...checkPinRoles(only), ...checkPwmHardware(only)].find((p) => p.severity === 'error' && p.code !== 'too-few-pwm-pins');
+  const problem = [...checkPinRoles(only), ...checkPwmHardware(only)].find(
+    (p) => p.severity === 'error' && p.code !== 'too-few-pwm-pins',
+  );
   return problem ? sentence(problem, 'unlock or move that pin') : null;
 }
 
@@ -35,17 +43,31 @@ function assignSide(ctx: PlanContext): { placed: Map<string, string> } | { reaso
   const lockedProblem = lockedError(ctx, locked);
   if (lockedProblem) return { reason: lockedProblem };
   const open = ctx.demands.filter((d) => !(d.locked && d.pin !== null));
-  const shortage = shortageReason(ctx, locked, open.filter((d) => d.required));
+  const shortage = shortageReason(
+    ctx,
+    locked,
+    open.filter((d) => d.required),
+  );
   if (shortage) return { reason: shortage };
   for (const strict of [true, false]) {
     const state = new PlanState(ctx);
     for (const d of locked) state.apply(d, findPin(ctx.board, d.pin!)!, 1);
-    const outcome = searchPlacement(ctx, state, open.filter((d) => d.required), { strict, nodeLimit: NODE_LIMIT });
+    const outcome = searchPlacement(
+      ctx,
+      state,
+      open.filter((d) => d.required),
+      { strict, nodeLimit: NODE_LIMIT },
+    );
     if (!outcome.placed) {
       if (!strict) return { reason: failureReason(ctx, outcome.culprit, outcome.exhausted) };
       continue;
     }
-    placeOptional(ctx, state, open.filter((d) => !d.required), outcome.placed);
+    placeOptional(
+      ctx,
+      state,
+      open.filter((d) => !d.required),
+      outcome.placed,
+    );
     return { placed: outcome.placed };
   }
   return { reason: failureReason(ctx, null, false) };
@@ -59,7 +81,9 @@ function placeOptional(ctx: PlanContext, state: PlanState, optional: PinDemand[]
     // bench-test switch held low at reset would change the boot mode, so it never goes there.
     const pin =
       rankedPins(ctx, demand, true).find((p) => state.allows(demand, p, true)) ??
-      (demand.owner === 'status-led' ? rankedPins(ctx, demand, false).find((p) => state.allows(demand, p, false) && !p.usbSerial) : undefined);
+      (demand.owner === 'status-led'
+        ? rankedPins(ctx, demand, false).find((p) => state.allows(demand, p, false) && !p.usbSerial)
+        : undefined);
     if (!pin) continue;
     state.apply(demand, pin, 1);
     placed.set(demand.key, pin.id);
@@ -67,7 +91,8 @@ function placeOptional(ctx: PlanContext, state: PlanState, optional: PinDemand[]
 }
 
 function failureReason(ctx: PlanContext, culprit: PinDemand | null, exhausted: boolean): string {
-  if (exhausted) return `no pin plan was found for ${boardWords(ctx)} within ${NODE_LIMIT.toLocaleString('en')} tries; lock a few pins to narrow the search`;
+  if (exhausted)
+    return `no pin plan was found for ${boardWords(ctx)} within ${NODE_LIMIT.toLocaleString('en')} tries; lock a few pins to narrow the search`;
   if (!culprit) return `no pin plan fits ${boardWords(ctx)} with the pins locked as they are`;
   return `no pin is left on ${boardWords(ctx)} for ${culprit.label}, which needs ${NEED_WORDS[culprit.need]}, once the other roles and their timers are placed`;
 }
@@ -76,8 +101,15 @@ function failureReason(ctx: PlanContext, culprit: PinDemand | null, exhausted: b
 function writePins(config: RobotConfig, demands: PinDemand[], placed: Map<string, string>): RobotConfig {
   const next: RobotConfig = {
     ...config,
-    wiring: { ...config.wiring, drivers: config.wiring.drivers.map((d) => ({ ...d, pins: { ...d.pins } })), inputPins: { ...config.wiring.inputPins } },
-    controls: { ...config.controls, link: { ...config.controls.link, remotePins: { ...config.controls.link.remotePins } } },
+    wiring: {
+      ...config.wiring,
+      drivers: config.wiring.drivers.map((d) => ({ ...d, pins: { ...d.pins } })),
+      inputPins: { ...config.wiring.inputPins },
+    },
+    controls: {
+      ...config.controls,
+      link: { ...config.controls.link, remotePins: { ...config.controls.link.remotePins } },
+    },
   };
   // Unlocked pins kept under roles that no longer exist (another kind or source before) go.
   for (const { driverIndex, roleId } of strayDriverRoles(config)) {

@@ -6,7 +6,17 @@ import { pwmBudget, pwmBudgetSentence } from './pwm-budget';
 // Counting arguments that show at once that no plan exists, phrased for the builder:
 // "the Uno has 6 PWM pins, this layout needs 8".
 
-const NEED_ORDER: PinNeed[] = ['pwm', 'external-interrupt', 'uart-rx', 'interrupt', 'analog-in', 'switch-in', 'servo-pulse', 'digital-out', 'led'];
+const NEED_ORDER: PinNeed[] = [
+  'pwm',
+  'external-interrupt',
+  'uart-rx',
+  'interrupt',
+  'analog-in',
+  'switch-in',
+  'servo-pulse',
+  'digital-out',
+  'led',
+];
 
 function plural(n: number, word: string): string {
   return `${n} ${word}${n === 1 ? '' : 's'}`;
@@ -39,6 +49,7 @@ export function shortageReason(ctx: PlanContext, locked: PinDemand[], open: PinD
   }
   const usable = free.filter((p) => open.some((d) => pinFits(ctx, d, p, false)));
   const needed = lone.length + shared.size;
-  if (usable.length < needed) return `${boardWords(ctx)} has ${plural(usable.length, 'usable pin')} for these roles, this layout needs ${needed}`;
+  if (usable.length < needed)
+    return `${boardWords(ctx)} has ${plural(usable.length, 'usable pin')} for these roles, this layout needs ${needed}`;
   return null;
 }

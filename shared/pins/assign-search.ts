@@ -140,7 +140,11 @@ interface Variable {
  * pigeonhole test: roles outside share groups need that many distinct pins, and the PWM ones
  * that many distinct PWM units.
  */
-function survey(state: PlanState, open: Variable[], strict: boolean): { pick: Variable; count: number; pigeonholeOk: boolean } {
+function survey(
+  state: PlanState,
+  open: Variable[],
+  strict: boolean,
+): { pick: Variable; count: number; pigeonholeOk: boolean } {
   let pick = open[0];
   let pickCount = Infinity;
   const pins = new Set<string>();
@@ -169,7 +173,12 @@ function survey(state: PlanState, open: Variable[], strict: boolean): { pick: Va
   return { pick, count: pickCount, pigeonholeOk: pins.size >= lone && units.size >= pwmLone };
 }
 
-export function searchPlacement(ctx: PlanContext, state: PlanState, demands: PinDemand[], options: SearchOptions): SearchOutcome {
+export function searchPlacement(
+  ctx: PlanContext,
+  state: PlanState,
+  demands: PinDemand[],
+  options: SearchOptions,
+): SearchOutcome {
   const variables: Variable[] = demands.map((demand) => {
     const ranked = rankedPinCosts(ctx, demand, options.strict);
     return { demand, domain: ranked.map((r) => r.pin), ranked: new Map(ranked.map((r) => [r.pin, r])) };
@@ -193,7 +202,9 @@ export function searchPlacement(ctx: PlanContext, state: PlanState, demands: Pin
     if (!pigeonholeOk) return false;
     const rest = open.filter((v) => v !== pick);
     const score = (p: BoardPin) => pick.ranked.get(p)!.cost + state.bonus(pick.demand, p);
-    const values = pick.domain.filter((p) => state.allows(pick.demand, p, options.strict)).sort((a, b) => score(a) - score(b) || pick.ranked.get(a)!.order - pick.ranked.get(b)!.order);
+    const values = pick.domain
+      .filter((p) => state.allows(pick.demand, p, options.strict))
+      .sort((a, b) => score(a) - score(b) || pick.ranked.get(a)!.order - pick.ranked.get(b)!.order);
     for (const pin of values) {
       nodes += 1;
       state.apply(pick.demand, pin, 1);

@@ -13,6 +13,9 @@ import { planContexts } from './plan-context';
  */
 export function checkPinPlan(config: RobotConfig): Problem[] {
   const contexts = planContexts(config, collectDemands(config));
-  const problems = [...checkDrivers(config), ...contexts.flatMap((ctx) => [...checkPinRoles(ctx), ...checkPwmHardware(ctx)])];
+  const problems = [
+    ...checkDrivers(config),
+    ...contexts.flatMap((ctx) => [...checkPinRoles(ctx), ...checkPwmHardware(ctx)]),
+  ];
   return [...problems.filter((p) => p.severity === 'error'), ...problems.filter((p) => p.severity === 'warning')];
 }

@@ -31,7 +31,13 @@ function groupBy<T>(items: T[], key: (item: T) => string): Map<string, T[]> {
   return map;
 }
 
-function usersProblem(severity: Problem['severity'], code: string, users: PwmUser[], message: string, hint: string): Problem {
+function usersProblem(
+  severity: Problem['severity'],
+  code: string,
+  users: PwmUser[],
+  message: string,
+  hint: string,
+): Problem {
   return {
     severity,
     code,
@@ -54,16 +60,40 @@ function checkAvrTimers(ctx: PlanContext): Problem[] {
     const timer = timerOfPin(ctx.board, u.pin);
     if (!timer) continue;
     if (ctx.servoTimerIds.includes(timer.id)) {
-      problems.push(usersProblem('error', 'servo-timer-pwm', [u], `${u.pin.id} is on timer ${timer.id}, which the servo pulses for the ESCs take: ${u.demand.label} gets no PWM there.`, `Move it to a pin on a timer the servo pulses leave alone.`));
+      problems.push(
+        usersProblem(
+          'error',
+          'servo-timer-pwm',
+          [u],
+          `${u.pin.id} is on timer ${timer.id}, which the servo pulses for the ESCs take: ${u.demand.label} gets no PWM there.`,
+          `Move it to a pin on a timer the servo pulses leave alone.`,
+        ),
+      );
       continue;
     }
     const requested = u.demand.requestedHz;
     const setting = pwmSettingForPin(ctx.board, u.pin, requested, u.demand.ceilingHz);
     if (requested === null || !setting || setting.exact) continue;
     if (timer.id === 0) {
-      problems.push(usersProblem('error', 'timer0-millis', [u], `${u.pin.id} is on timer 0, which runs ${timer.coreUse}: it stays at ${formatHz(timer.defaultHz)}, so ${driverName(ctx, u.demand)}’s ${formatHz(requested)} cannot be set there.`, 'Move it to a pin on another timer, or leave the driver at the board’s default frequency.'));
+      problems.push(
+        usersProblem(
+          'error',
+          'timer0-millis',
+          [u],
+          `${u.pin.id} is on timer 0, which runs ${timer.coreUse}: it stays at ${formatHz(timer.defaultHz)}, so ${driverName(ctx, u.demand)}’s ${formatHz(requested)} cannot be set there.`,
+          'Move it to a pin on another timer, or leave the driver at the board’s default frequency.',
+        ),
+      );
     } else {
-      problems.push(usersProblem('warning', 'pwm-frequency-not-exact', [u], `${u.pin.id} is on timer ${timer.id}, which cannot make ${formatHz(requested)} on both its outputs: it will run at ${formatHz(setting.actualHz)} (${setting.formula}).`, 'Accept that frequency, or use a pin on a 16-bit timer, which can run it exactly.'));
+      problems.push(
+        usersProblem(
+          'warning',
+          'pwm-frequency-not-exact',
+          [u],
+          `${u.pin.id} is on timer ${timer.id}, which cannot make ${formatHz(requested)} on both its outputs: it will run at ${formatHz(setting.actualHz)} (${setting.formula}).`,
+          'Accept that frequency, or use a pin on a 16-bit timer, which can run it exactly.',
+        ),
+      );
     }
   }
   for (const [timerId, group] of groupBy(users, (u) => String(timerOfPin(ctx.board, u.pin)?.id ?? 'none'))) {
@@ -77,15 +107,37 @@ function checkTimerGroup(ctx: PlanContext, timerId: number, group: PwmUser[]): P
   const asked = [...new Set(group.map((u) => u.demand.requestedHz).filter((f): f is number => f !== null))];
   const pins = listWords([...new Set(group.map((u) => u.pin.id))]);
   if (asked.length > 1) {
-    const who = listWords(asked.map((f) => `${driverName(ctx, group.find((u) => u.demand.requestedHz === f)!.demand)} asks for ${formatHz(f)}`));
-    return [usersProblem('error', 'timer-frequency-clash', group, `Timer ${timerId} drives ${pins} at one frequency, but ${who}.`, 'Give these drivers the same PWM frequency, or move one to a pin on another timer.')];
+    const who = listWords(
+      asked.map(
+        (f) => `${driverName(ctx, group.find((u) => u.demand.requestedHz === f)!.demand)} asks for ${formatHz(f)}`,
+      ),
+    );
+    return [
+      usersProblem(
+        'error',
+        'timer-frequency-clash',
+        group,
+        `Timer ${timerId} drives ${pins} at one frequency, but ${who}.`,
+        'Give these drivers the same PWM frequency, or move one to a pin on another timer.',
+      ),
+    ];
   }
   if (asked.length === 1) {
     const changer = group.find((u) => u.demand.requestedHz !== null)!;
-    const others = group.filter((u) => u.demand.requestedHz === null && u.demand.driverIndex !== changer.demand.driverIndex);
+    const others = group.filter(
+      (u) => u.demand.requestedHz === null && u.demand.driverIndex !== changer.demand.driverIndex,
+    );
     if (others.length > 0) {
       const defaultHz = ctx.board.timers.find((t) => t.id === timerId)!.defaultHz;
-      return [usersProblem('warning', 'timer-frequency-changes-others', [changer, ...others], `${capitalize(driverName(ctx, changer.demand))}’s ${formatHz(asked[0])} on timer ${timerId} also changes ${listWords(others.map((u) => `${u.pin.id} (${u.demand.label})`))}, which expects the default ${formatHz(defaultHz)}.`, 'Set the same frequency on that driver too, or move it to a pin on another timer.')];
+      return [
+        usersProblem(
+          'warning',
+          'timer-frequency-changes-others',
+          [changer, ...others],
+          `${capitalize(driverName(ctx, changer.demand))}’s ${formatHz(asked[0])} on timer ${timerId} also changes ${listWords(others.map((u) => `${u.pin.id} (${u.demand.label})`))}, which expects the default ${formatHz(defaultHz)}.`,
+          'Set the same frequency on that driver too, or move it to a pin on another timer.',
+        ),
+      ];
     }
   }
   return [];
@@ -101,13 +153,29 @@ function checkSlices(ctx: PlanContext): Problem[] {
   const slice = (u: PwmUser) => (u.pin.pwm && 'slice' in u.pin.pwm ? u.pin.pwm : null);
   for (const [key, group] of groupBy(users, (u) => `${slice(u)?.slice}${slice(u)?.channel}`)) {
     if (new Set(group.map((u) => u.pin.id)).size < 2) continue;
-    problems.push(usersProblem('error', 'slice-channel-shared', group, `${listWords([...new Set(group.map((u) => u.pin.id))])} share PWM slice ${key.slice(0, -1)} channel ${key.slice(-1)}, so they always carry the same duty cycle.`, 'Move one of them to a GPIO on another slice channel (GPIO n and n + 16 share one).'));
+    problems.push(
+      usersProblem(
+        'error',
+        'slice-channel-shared',
+        group,
+        `${listWords([...new Set(group.map((u) => u.pin.id))])} share PWM slice ${key.slice(0, -1)} channel ${key.slice(-1)}, so they always carry the same duty cycle.`,
+        'Move one of them to a GPIO on another slice channel (GPIO n and n + 16 share one).',
+      ),
+    );
   }
   for (const [sliceId, group] of groupBy(users, (u) => String(slice(u)?.slice))) {
     const freqs = [...new Set(group.map((u) => effectiveHz(ctx, u)))];
     if (freqs.length < 2) continue;
     const who = listWords(group.map((u) => `${u.demand.label} ${formatHz(effectiveHz(ctx, u))}`));
-    problems.push(usersProblem('error', 'slice-frequency-clash', group, `PWM slice ${sliceId} runs both its channels at one frequency, but it is asked for ${who}.`, 'Move one role to a GPIO on another slice, or give both the same frequency.'));
+    problems.push(
+      usersProblem(
+        'error',
+        'slice-frequency-clash',
+        group,
+        `PWM slice ${sliceId} runs both its channels at one frequency, but it is asked for ${who}.`,
+        'Move one role to a GPIO on another slice, or give both the same frequency.',
+      ),
+    );
   }
   return problems;
 }
@@ -118,7 +186,15 @@ function checkLedc(ctx: PlanContext): Problem[] {
   const users = pwmUsers(ctx, true);
   const pins = new Set(users.map((u) => u.pin.id));
   if (pins.size <= units.channels) return [];
-  return [usersProblem('error', 'ledc-channels-exhausted', users, `${pins.size} pins need PWM, but the ${ctx.board.shortName} has ${units.channels} LEDC channels.`, 'Use drivers with fewer PWM inputs (PWM + direction needs one per motor).')];
+  return [
+    usersProblem(
+      'error',
+      'ledc-channels-exhausted',
+      users,
+      `${pins.size} pins need PWM, but the ${ctx.board.shortName} has ${units.channels} LEDC channels.`,
+      'Use drivers with fewer PWM inputs (PWM + direction needs one per motor).',
+    ),
+  ];
 }
 
 function checkBudget(ctx: PlanContext): Problem[] {
@@ -129,7 +205,9 @@ function checkBudget(ctx: PlanContext): Problem[] {
       severity: 'error',
       code: 'too-few-pwm-pins',
       pins: [],
-      roles: ctx.demands.filter((d) => d.need === 'pwm' || (d.need === 'servo-pulse' && ctx.board.family !== 'avr')).map((d) => d.roleName),
+      roles: ctx.demands
+        .filter((d) => d.need === 'pwm' || (d.need === 'servo-pulse' && ctx.board.family !== 'avr'))
+        .map((d) => d.roleName),
       message: `${capitalize(pwmBudgetSentence(ctx, budget))}.`,
       hint: 'Use drivers with fewer PWM inputs (PWM + direction and TB6612-class drivers need one per motor), or a board with more PWM outputs.',
       path: ['wiring', 'drivers'],

@@ -25,7 +25,9 @@ function needReason(board: BoardProfile, pin: BoardPin, need: PinNeed): string |
     case 'pwm':
       return pin.pwm ? null : 'has no PWM';
     case 'interrupt':
-      return pin.externalInterrupt !== undefined || pin.pinChange ? null : 'has neither an external nor a pin-change interrupt';
+      return pin.externalInterrupt !== undefined || pin.pinChange
+        ? null
+        : 'has neither an external nor a pin-change interrupt';
     case 'external-interrupt':
       return pin.externalInterrupt !== undefined ? null : 'has no external interrupt';
     case 'uart-rx':
@@ -43,7 +45,8 @@ function needReason(board: BoardProfile, pin: BoardPin, need: PinNeed): string |
 export function pinInability(board: BoardProfile, pin: BoardPin, need: PinNeed): Inability | null {
   if (pin.flash) return { code: 'pin-flash', reason: 'is wired to the flash memory' };
   if (pin.inputOnly && isOutputNeed(need)) return { code: 'pin-input-only', reason: 'is an input only' };
-  if (!pin.onHeader && !(need === 'led' && pin.builtinLed)) return { code: 'pin-cannot-do-role', reason: 'is not on the board’s header' };
+  if (!pin.onHeader && !(need === 'led' && pin.builtinLed))
+    return { code: 'pin-cannot-do-role', reason: 'is not on the board’s header' };
   if (!pin.digital && need !== 'analog-in') return { code: 'pin-cannot-do-role', reason: 'is an analog input only' };
   const reason = needReason(board, pin, need);
   return reason ? { code: 'pin-cannot-do-role', reason } : null;

@@ -166,12 +166,17 @@ export function collectDemands(config: RobotConfig): PinDemand[] {
 export function strayInputRoles(config: RobotConfig): { roleId: string; pin: string; remote: boolean }[] {
   const numbers = config.controls.channels.map((c) => c.number);
   const known = new Set(inputPinRoles(config.controls.source, numbers).map((r) => r.id));
-  const remoteKnown = new Set(config.controls.source === 'nrf24' ? remotePinRoles(config.controls).map((r) => r.id) : []);
+  const remoteKnown = new Set(
+    config.controls.source === 'nrf24' ? remotePinRoles(config.controls).map((r) => r.id) : [],
+  );
   const stray = (record: Record<string, PinAssignment>, keep: Set<string>, remote: boolean) =>
     Object.entries(record)
       .filter(([roleId, a]) => a.pin !== null && !keep.has(roleId))
       .map(([roleId, a]) => ({ roleId, pin: a.pin!, remote }));
-  return [...stray(config.wiring.inputPins, known, false), ...stray(config.controls.link.remotePins, remoteKnown, true)];
+  return [
+    ...stray(config.wiring.inputPins, known, false),
+    ...stray(config.controls.link.remotePins, remoteKnown, true),
+  ];
 }
 
 /** Role ids stored on a driver that its kind does not have (left over after a kind change). */

@@ -22,7 +22,8 @@ const STRAPPING_RISK: Record<string, number> = { '5': 30, '15': 30, '2': 50, '0'
 export function pinFits(ctx: PlanContext, demand: PinDemand, pin: BoardPin, strict: boolean): boolean {
   if (pinInability(ctx.board, pin, demand.need)) return false;
   if (busReason(ctx, pin)) return false;
-  if (ctx.spiInUse && ctx.board.spi.ssMustBeOutput && pin.id === ctx.board.spi.ss && !isOutputNeed(demand.need)) return false;
+  if (ctx.spiInUse && ctx.board.spi.ssMustBeOutput && pin.id === ctx.board.spi.ss && !isOutputNeed(demand.need))
+    return false;
   if (strict && (pin.strapping || pin.usbSerial)) return false;
   if (demand.need !== 'pwm') return true;
   const timer = timerOfPin(ctx.board, pin);
@@ -43,7 +44,8 @@ export function pinCost(ctx: PlanContext, demand: PinDemand, pin: BoardPin): num
   const need = demand.need;
   const avr = ctx.board.family === 'avr';
   let cost = 0;
-  if (avr && pin.externalInterrupt !== undefined && need !== 'external-interrupt') cost += need === 'interrupt' ? 12 : 30;
+  if (avr && pin.externalInterrupt !== undefined && need !== 'external-interrupt')
+    cost += need === 'interrupt' ? 12 : 30;
   if (avr && pin.pinChange && need !== 'interrupt') cost += 2;
   if (avr && pin.pwm && need !== 'pwm') cost += 20;
   if (pin.uart?.some((u) => u.port !== 'Serial') && need !== 'uart-rx') cost += 15;

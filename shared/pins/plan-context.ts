@@ -54,9 +54,15 @@ export function boardWords(ctx: Pick<PlanContext, 'side' | 'board'>): string {
 }
 
 /** Taken by a bus in use: the SPI data and clock lines, or the USB serial pins. */
-export function busReason(ctx: PlanContext, pin: BoardPin): { code: 'pin-on-spi-bus' | 'pin-on-usb-serial'; reason: string } | null {
+export function busReason(
+  ctx: PlanContext,
+  pin: BoardPin,
+): { code: 'pin-on-spi-bus' | 'pin-on-usb-serial'; reason: string } | null {
   if (ctx.spiInUse && pin.spi && pin.spi !== 'ss') {
-    return { code: 'pin-on-spi-bus', reason: `is the SPI bus ${pin.spi.toUpperCase()} line, which the transceiver uses` };
+    return {
+      code: 'pin-on-spi-bus',
+      reason: `is the SPI bus ${pin.spi.toUpperCase()} line, which the transceiver uses`,
+    };
   }
   if (ctx.usbSerialInUse && pin.usbSerial) {
     return { code: 'pin-on-usb-serial', reason: 'carries the USB serial port, which the firmware’s diagnostics use' };

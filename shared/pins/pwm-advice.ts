@@ -70,24 +70,48 @@ function quietPins(ctx: PlanContext, driverIndex: number, maxHz: number, suggest
   const taken = new Set(othersPlaced.map((o) => o.pin.id));
   const quiet: QuietPin[] = [];
   for (const pin of ctx.board.pins) {
-    if (!pin.pwm || !pin.onHeader || pin.inputOnly || pin.flash || pin.strapping || taken.has(pin.id) || busReason(ctx, pin)) continue;
+    if (
+      !pin.pwm ||
+      !pin.onHeader ||
+      pin.inputOnly ||
+      pin.flash ||
+      pin.strapping ||
+      taken.has(pin.id) ||
+      busReason(ctx, pin)
+    )
+      continue;
     const timer = timerOfPin(ctx.board, pin);
     if (timer && (timer.id === 0 || ctx.servoTimerIds.includes(timer.id))) continue;
     // The suggestion itself, else what an 8-bit timer gives flat out (timer 2: 31.4 kHz).
-    const setting = [pwmSettingForPin(ctx.board, pin, suggested, maxHz), pwmSettingForPin(ctx.board, pin, maxHz, maxHz)].find(
-      (s) => s && s.actualHz >= INAUDIBLE_HZ * 0.98 && s.actualHz <= maxHz,
-    );
+    const setting = [
+      pwmSettingForPin(ctx.board, pin, suggested, maxHz),
+      pwmSettingForPin(ctx.board, pin, maxHz, maxHz),
+    ].find((s) => s && s.actualHz >= INAUDIBLE_HZ * 0.98 && s.actualHz <= maxHz);
     if (!setting) continue;
-    const disturbs = othersPlaced.some(({ demand, pin: other }) => other.pwm && (demand.need === 'pwm' || (demand.need === 'servo-pulse' && ctx.board.family !== 'avr')) && sharesFrequency(pin, other) && demand.requestedHz !== setting.actualHz);
+    const disturbs = othersPlaced.some(
+      ({ demand, pin: other }) =>
+        other.pwm &&
+        (demand.need === 'pwm' || (demand.need === 'servo-pulse' && ctx.board.family !== 'avr')) &&
+        sharesFrequency(pin, other) &&
+        demand.requestedHz !== setting.actualHz,
+    );
     if (!disturbs) quiet.push({ pin: pin.id, hz: setting.actualHz, formula: setting.formula });
   }
   return quiet;
 }
 
-function suggestionText(board: BoardProfile, maxHz: number | null, suggested: number | null, quiet: QuietPin[]): string {
-  if (maxHz === null || suggested === null) return 'An ESC reads servo pulses at 50 Hz and makes its own PWM; there is nothing to set here.';
-  if (suggested < INAUDIBLE_HZ) return `This driver accepts at most ${formatHz(maxHz)}, below hearing’s upper limit: set ${formatHz(suggested)} for the least whine it allows.`;
-  if (quiet.length === 0) return `Set ${formatHz(suggested)} to stop the whine, but no free pin on the ${board.shortName} can run it without disturbing millis(), servo pulses or another driver.`;
+function suggestionText(
+  board: BoardProfile,
+  maxHz: number | null,
+  suggested: number | null,
+  quiet: QuietPin[],
+): string {
+  if (maxHz === null || suggested === null)
+    return 'An ESC reads servo pulses at 50 Hz and makes its own PWM; there is nothing to set here.';
+  if (suggested < INAUDIBLE_HZ)
+    return `This driver accepts at most ${formatHz(maxHz)}, below hearing’s upper limit: set ${formatHz(suggested)} for the least whine it allows.`;
+  if (quiet.length === 0)
+    return `Set ${formatHz(suggested)} to stop the whine, but no free pin on the ${board.shortName} can run it without disturbing millis(), servo pulses or another driver.`;
   const where = board.family === 'avr' ? ` on ${quiet.map((q) => q.pin).join(', ')}` : '';
   return `Set ${formatHz(suggested)}: above hearing and within the driver’s ${formatHz(maxHz)}; it runs cleanly${where}.`;
 }
@@ -98,13 +122,21 @@ export function pwmAdvice(config: RobotConfig): DriverPwmAdvice[] {
     const kind = DRIVER_KINDS[driver.kind];
     const maxHz = kind.maxPwmHz;
     const suggestedHz = maxHz === null ? null : Math.min(maxHz, INAUDIBLE_HZ);
-    const quiet = maxHz !== null && suggestedHz !== null && suggestedHz >= INAUDIBLE_HZ ? quietPins(ctx, driverIndex, maxHz, suggestedHz) : [];
+    const quiet =
+      maxHz !== null && suggestedHz !== null && suggestedHz >= INAUDIBLE_HZ
+        ? quietPins(ctx, driverIndex, maxHz, suggestedHz)
+        : [];
     const running = ctx.demands
       .filter((d) => d.driverIndex === driverIndex && d.need === 'pwm')
       .map((d): PinRunning => {
         const pin = d.pin ? findPin(ctx.board, d.pin) : undefined;
         const setting = pin ? pwmSettingForPin(ctx.board, pin, d.requestedHz, d.ceilingHz) : null;
-        return { roleId: d.roleId, pin: d.pin, actualHz: setting?.actualHz ?? (pin ? defaultPwmHz(ctx.board, pin) : null), formula: setting?.formula ?? null };
+        return {
+          roleId: d.roleId,
+          pin: d.pin,
+          actualHz: setting?.actualHz ?? (pin ? defaultPwmHz(ctx.board, pin) : null),
+          formula: setting?.formula ?? null,
+        };
       });
     return {
       driverIndex,

@@ -14,4 +14,5 @@ export const SAFETY_CAUTIONS: readonly string[] = [
   'A robot someone can ride on, or a heavy one, needs a proper engineering review that this tool does not give.',
 ];
 
-export const CAUTIONS_FOOTER = 'Local codes and licensed professional practice come before anything Mixwright suggests.';
+export const CAUTIONS_FOOTER =
+  'Local codes and licensed professional practice come before anything Mixwright suggests.';

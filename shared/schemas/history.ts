@@ -32,7 +32,11 @@ export const RecordFlashInputSchema = z.object({
 export type RecordFlashInput = z.input<typeof RecordFlashInputSchema>;
 
 export const BootLineInputSchema = z.object({
-  line: z.string({ error: 'Paste the boot line' }).trim().min(1, 'Paste the boot line').max(4000, 'At most 4000 characters'),
+  line: z
+    .string({ error: 'Paste the boot line' })
+    .trim()
+    .min(1, 'Paste the boot line')
+    .max(4000, 'At most 4000 characters'),
 });
 export type BootLineInput = z.input<typeof BootLineInputSchema>;
 

@@ -28,7 +28,8 @@ interface StepResult {
   notes: string[];
 }
 
-const isObject = (value: unknown): value is Json => typeof value === 'object' && value !== null && !Array.isArray(value);
+const isObject = (value: unknown): value is Json =>
+  typeof value === 'object' && value !== null && !Array.isArray(value);
 
 /** Version 1's defaults for the rate switch, needed to read what a version 1 file meant. */
 const V1_DEFAULT_POSITIONS = 2;
@@ -50,7 +51,10 @@ function rateSwitchV1ToV2(rateSwitch: Json): { rateSwitch: Json; notes: string[]
   const positions = rawPositions === undefined ? V1_DEFAULT_POSITIONS : rawPositions;
   if (positions !== 2 && positions !== 3) {
     // Version 1 refused this file too; the rates alone now decide, and the schema judges them.
-    return { rateSwitch: rest, notes: [`Rate switch: "positions" was ${JSON.stringify(positions)}, not 2 or 3; the rates now set the positions`] };
+    return {
+      rateSwitch: rest,
+      notes: [`Rate switch: "positions" was ${JSON.stringify(positions)}, not 2 or 3; the rates now set the positions`],
+    };
   }
   const given = Array.isArray(rest.rates) ? rest.rates : V1_DEFAULT_RATES;
   const rates = fitRates(given, positions);
@@ -59,7 +63,9 @@ function rateSwitchV1ToV2(rateSwitch: Json): { rateSwitch: Json; notes: string[]
     notes.push(`Rate switch: ${positions} positions but ${given.length} rates; kept the first ${positions}`);
   } else if (given.length < positions) {
     const what = Array.isArray(rest.rates) ? `${given.length} rates` : 'no rates (so the default two)';
-    notes.push(`Rate switch: ${positions} positions but ${what}; position ${positions} uses the last rate (${percent(rates[positions - 1])})`);
+    notes.push(
+      `Rate switch: ${positions} positions but ${what}; position ${positions} uses the last rate (${percent(rates[positions - 1])})`,
+    );
   }
   return { rateSwitch: { ...rest, rates }, notes };
 }
@@ -85,7 +91,8 @@ export interface MigratedConfig {
 function versionOf(json: unknown): number {
   if (!isObject(json)) throw new ConfigVersionError('A configuration must be a JSON object');
   const version = json.schemaVersion;
-  if (version === undefined) throw new ConfigVersionError('The file has no schemaVersion; it is not a Mixwright configuration');
+  if (version === undefined)
+    throw new ConfigVersionError('The file has no schemaVersion; it is not a Mixwright configuration');
   if (typeof version !== 'number' || !Number.isInteger(version) || version < 1) {
     throw new ConfigVersionError(`schemaVersion must be a whole number from 1, got ${JSON.stringify(version)}`);
   }

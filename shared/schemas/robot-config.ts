@@ -1,11 +1,5 @@
 import { z } from 'zod';
-import {
-  BoardIdSchema,
-  ChassisLayoutSchema,
-  DriverKindIdSchema,
-  InputSourceIdSchema,
-  WheelKindSchema,
-} from './ids';
+import { BoardIdSchema, ChassisLayoutSchema, DriverKindIdSchema, InputSourceIdSchema, WheelKindSchema } from './ids';
 
 /**
  * The whole robot, as saved in a revision, exported as config.json and read by the
@@ -36,7 +30,10 @@ export const WheelSchema = z.object({
   driveAngleDeg: finite('Driving direction').pipe(z.number().min(-360).max(360)),
   /** γ: angle of the free rollers; 0 for omni and fixed wheels, ±45 for mecanum. */
   rollerAngleDeg: finite('Roller angle').pipe(
-    z.number().min(-60, 'Roller angle must be between −60° and 60°').max(60, 'Roller angle must be between −60° and 60°'),
+    z
+      .number()
+      .min(-60, 'Roller angle must be between −60° and 60°')
+      .max(60, 'Roller angle must be between −60° and 60°'),
   ),
   radiusMm: finite('Radius').pipe(z.number().positive('Radius must be more than 0 mm').max(1000)),
   /** Name of the motor (in `motors`) that drives this wheel. */
@@ -206,7 +203,10 @@ export const FirmwareSchema = z.object({
   /** Arduino sketch folder name; null = derived from the robot name. */
   sketchName: z
     .string()
-    .regex(/^[A-Za-z0-9][A-Za-z0-9_.-]{0,62}$/, 'Letters, digits, _ . - only, starting with a letter or digit, up to 63')
+    .regex(
+      /^[A-Za-z0-9][A-Za-z0-9_.-]{0,62}$/,
+      'Letters, digits, _ . - only, starting with a letter or digit, up to 63',
+    )
     .nullable()
     .default(null),
   serialDiagnostics: z.boolean().default(true),
@@ -243,7 +243,11 @@ export const RobotConfigSchema = z
     const wheelNames = config.chassis.wheels.map((w) => w.name);
     for (const name of new Set(duplicates(wheelNames))) {
       const index = wheelNames.lastIndexOf(name);
-      ctx.addIssue({ code: 'custom', path: ['chassis', 'wheels', index, 'name'], message: `Two wheels are named "${name}"` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['chassis', 'wheels', index, 'name'],
+        message: `Two wheels are named "${name}"`,
+      });
     }
     config.chassis.wheels.forEach((wheel, index) => {
       if (!motorNames.includes(wheel.motor)) {
@@ -256,13 +260,21 @@ export const RobotConfigSchema = z
     });
     config.motors.forEach((motor, index) => {
       if (!config.chassis.wheels.some((w) => w.motor === motor.name)) {
-        ctx.addIssue({ code: 'custom', path: ['motors', index, 'name'], message: `Motor "${motor.name}" drives no wheel` });
+        ctx.addIssue({
+          code: 'custom',
+          path: ['motors', index, 'name'],
+          message: `Motor "${motor.name}" drives no wheel`,
+        });
       }
     });
     const channelNumbers = config.controls.channels.map((c) => c.number);
     for (const number of new Set(duplicates(channelNumbers.map(String)))) {
       const index = channelNumbers.lastIndexOf(Number(number));
-      ctx.addIssue({ code: 'custom', path: ['controls', 'channels', index, 'number'], message: `Channel ${number} is listed twice` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['controls', 'channels', index, 'number'],
+        message: `Channel ${number} is listed twice`,
+      });
     }
     const channelRefs: [string[], number | null][] = [
       [['axes', 'forward', 'channel'], config.controls.axes.forward.channel],
@@ -273,13 +285,21 @@ export const RobotConfigSchema = z
     ];
     for (const [path, channel] of channelRefs) {
       if (channel !== null && !channelNumbers.includes(channel)) {
-        ctx.addIssue({ code: 'custom', path: ['controls', ...path], message: `Channel ${channel} is not in the channel table` });
+        ctx.addIssue({
+          code: 'custom',
+          path: ['controls', ...path],
+          message: `Channel ${channel} is not in the channel table`,
+        });
       }
     }
     const driverNames = config.wiring.drivers.map((d) => d.name);
     for (const name of new Set(duplicates(driverNames))) {
       const index = driverNames.lastIndexOf(name);
-      ctx.addIssue({ code: 'custom', path: ['wiring', 'drivers', index, 'name'], message: `Two drivers are named "${name}"` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['wiring', 'drivers', index, 'name'],
+        message: `Two drivers are named "${name}"`,
+      });
     }
   });
 

@@ -45,7 +45,12 @@ export function applyRate(x: number, rate: number): number {
  * One stick axis: calibration → reverse → deadband → expo → rate (× the rate switch's scale).
  * The result is in −1..1.
  */
-export function shapeAxis(raw: number, calibration: Calibration, axis: Pick<AxisMap, 'reverse' | 'deadband' | 'expo' | 'rate'>, rateScale = 1): number {
+export function shapeAxis(
+  raw: number,
+  calibration: Calibration,
+  axis: Pick<AxisMap, 'reverse' | 'deadband' | 'expo' | 'rate'>,
+  rateScale = 1,
+): number {
   let x = calibrate(raw, calibration);
   if (axis.reverse) x = -x;
   x = applyDeadband(x, axis.deadband);

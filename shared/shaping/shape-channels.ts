@@ -32,7 +32,10 @@ function readChannel(config: ShapingInput, number: number | null, raw: RawByChan
 export function sticksFromChannels(config: ShapingInput, raw: RawByChannel): ShapedControls {
   const { controls } = config;
   const rateValue = readChannel(config, controls.rateSwitch.channel, raw);
-  const ratePosition = controls.rateSwitch.channel === null ? null : switchPosition(rateValue ?? -1, rateSwitchPositions(controls.rateSwitch));
+  const ratePosition =
+    controls.rateSwitch.channel === null
+      ? null
+      : switchPosition(rateValue ?? -1, rateSwitchPositions(controls.rateSwitch));
   const rateScale = rateSwitchScale(controls.rateSwitch, ratePosition);
   const sticks = Object.fromEntries(
     STICK_AXES.map((axis) => {
@@ -45,7 +48,12 @@ export function sticksFromChannels(config: ShapingInput, raw: RawByChannel): Sha
     }),
   ) as Sticks;
   const armingValue = readChannel(config, controls.armingSwitch.channel, raw);
-  return { sticks, ratePosition, rateScale, armed: isArmed(controls.armingSwitch, config.safety.armingRequired, armingValue) };
+  return {
+    sticks,
+    ratePosition,
+    rateScale,
+    armed: isArmed(controls.armingSwitch, config.safety.armingRequired, armingValue),
+  };
 }
 
 export type ChannelRole = StickAxis | 'rate-switch' | 'arming-switch' | 'unused';
@@ -62,10 +70,15 @@ export class UnknownChannelError extends Error {
  * - the arming switch: 1 when armed, 0 when not;
  * - an unused channel: the calibrated value, −1..1.
  */
-export function shapeChannel(config: ShapingInput, channelNumber: number, raw: number): { value: number; role: ChannelRole } {
+export function shapeChannel(
+  config: ShapingInput,
+  channelNumber: number,
+  raw: number,
+): { value: number; role: ChannelRole } {
   const { controls } = config;
   const channel = channelOf(config, channelNumber);
-  if (!channel) throw new UnknownChannelError(`Channel ${channelNumber} is not in the channel table (controls.channels)`);
+  if (!channel)
+    throw new UnknownChannelError(`Channel ${channelNumber} is not in the channel table (controls.channels)`);
   const axis = STICK_AXES.find((a) => controls.axes[a].channel === channelNumber);
   if (axis) return { value: shapeAxis(raw, channel, controls.axes[axis]), role: axis };
   const calibrated = calibrate(raw, channel);
@@ -73,7 +86,10 @@ export function shapeChannel(config: ShapingInput, channelNumber: number, raw: n
     return { value: switchPosition(calibrated, rateSwitchPositions(controls.rateSwitch)), role: 'rate-switch' };
   }
   if (controls.armingSwitch.channel === channelNumber) {
-    return { value: isArmed(controls.armingSwitch, config.safety.armingRequired, calibrated) ? 1 : 0, role: 'arming-switch' };
+    return {
+      value: isArmed(controls.armingSwitch, config.safety.armingRequired, calibrated) ? 1 : 0,
+      role: 'arming-switch',
+    };
   }
   return { value: calibrated, role: 'unused' };
 }

@@ -28,7 +28,11 @@ export function rateSwitchScale(rateSwitch: Controls['rateSwitch'], position: nu
  * channel the robot is armed unless arming is required (then it can never arm, which the
  * engine reports as an error). A missing reading counts as disarmed.
  */
-export function isArmed(armingSwitch: Controls['armingSwitch'], armingRequired: boolean, value: number | null): boolean {
+export function isArmed(
+  armingSwitch: Controls['armingSwitch'],
+  armingRequired: boolean,
+  value: number | null,
+): boolean {
   if (armingSwitch.channel === null) return !armingRequired;
   if (value === null) return false;
   return armingSwitch.armedWhen === 'high' ? value > 0.5 : value < -0.5;

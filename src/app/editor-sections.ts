@@ -7,11 +7,25 @@ import type { SectionRegistry } from '@/features/robot-editor/lib/editor-section
  * Firmware, History), whatever the order here; a section joins with one line.
  */
 export const EDITOR_SECTIONS: SectionRegistry = {
-  chassis: lazy(async () => ({ default: (await import('@/features/robot-editor/sections/chassis-section')).ChassisSection })),
-  controls: lazy(async () => ({ default: (await import('@/features/robot-editor/sections/controls-section')).ControlsSection })),
-  wiring: lazy(async () => ({ default: (await import('@/features/robot-editor/sections/wiring-section')).WiringSection })),
-  safety: lazy(async () => ({ default: (await import('@/features/robot-editor/sections/safety-section')).SafetySection })),
-  commissioning: lazy(async () => ({ default: (await import('@/features/robot-editor/sections/commissioning-section')).CommissioningSection })),
-  firmware: lazy(async () => ({ default: (await import('@/features/firmware/components/firmware-section')).FirmwareSection })),
-  history: lazy(async () => ({ default: (await import('@/features/history/components/history-section')).HistorySection })),
+  chassis: lazy(async () => ({
+    default: (await import('@/features/robot-editor/sections/chassis-section')).ChassisSection,
+  })),
+  controls: lazy(async () => ({
+    default: (await import('@/features/robot-editor/sections/controls-section')).ControlsSection,
+  })),
+  wiring: lazy(async () => ({
+    default: (await import('@/features/robot-editor/sections/wiring-section')).WiringSection,
+  })),
+  safety: lazy(async () => ({
+    default: (await import('@/features/robot-editor/sections/safety-section')).SafetySection,
+  })),
+  commissioning: lazy(async () => ({
+    default: (await import('@/features/robot-editor/sections/commissioning-section')).CommissioningSection,
+  })),
+  firmware: lazy(async () => ({
+    default: (await import('@/features/firmware/components/firmware-section')).FirmwareSection,
+  })),
+  history: lazy(async () => ({
+    default: (await import('@/features/history/components/history-section')).HistorySection,
+  })),
 };

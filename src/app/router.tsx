@@ -30,9 +30,18 @@ export function createAppRouter(queryClient: QueryClient) {
               loader: redirectIfSignedIn(queryClient),
               lazy: async () => ({ Component: (await import('./routes/sign-up')).SignUpRoute }),
             },
-            { path: 'forgot-password', lazy: async () => ({ Component: (await import('./routes/forgot-password')).ForgotPasswordRoute }) },
-            { path: 'reset-password', lazy: async () => ({ Component: (await import('./routes/reset-password')).ResetPasswordRoute }) },
-            { path: 'invitations/:token', lazy: async () => ({ Component: (await import('./routes/accept-invitation')).AcceptInvitationRoute }) },
+            {
+              path: 'forgot-password',
+              lazy: async () => ({ Component: (await import('./routes/forgot-password')).ForgotPasswordRoute }),
+            },
+            {
+              path: 'reset-password',
+              lazy: async () => ({ Component: (await import('./routes/reset-password')).ResetPasswordRoute }),
+            },
+            {
+              path: 'invitations/:token',
+              lazy: async () => ({ Component: (await import('./routes/accept-invitation')).AcceptInvitationRoute }),
+            },
           ],
         },
         {
@@ -50,9 +59,18 @@ export function createAppRouter(queryClient: QueryClient) {
               path: 'teams/:teamId',
               lazy: async () => ({ Component: (await import('./routes/team-layout')).TeamLayout }),
               children: [
-                { index: true, lazy: async () => ({ Component: (await import('./routes/team-robots')).TeamRobotsRoute }) },
-                { path: 'people', lazy: async () => ({ Component: (await import('./routes/team-people')).TeamPeopleRoute }) },
-                { path: 'activity', lazy: async () => ({ Component: (await import('./routes/team-activity')).TeamActivityRoute }) },
+                {
+                  index: true,
+                  lazy: async () => ({ Component: (await import('./routes/team-robots')).TeamRobotsRoute }),
+                },
+                {
+                  path: 'people',
+                  lazy: async () => ({ Component: (await import('./routes/team-people')).TeamPeopleRoute }),
+                },
+                {
+                  path: 'activity',
+                  lazy: async () => ({ Component: (await import('./routes/team-activity')).TeamActivityRoute }),
+                },
               ],
             },
             {

@@ -31,7 +31,9 @@ export async function apiRequest<T>(path: string, options: RequestOptions = {}):
   const sendsJson = options.body !== undefined && !form;
   const response = await fetch(`/api${path}`, {
     method: options.method ?? 'GET',
-    headers: sendsJson ? { Accept: 'application/json', 'Content-Type': 'application/json' } : { Accept: 'application/json' },
+    headers: sendsJson
+      ? { Accept: 'application/json', 'Content-Type': 'application/json' }
+      : { Accept: 'application/json' },
     body: form ? (options.body as FormData) : sendsJson ? JSON.stringify(options.body) : undefined,
     credentials: 'same-origin',
     signal: options.signal,
@@ -40,7 +42,10 @@ export async function apiRequest<T>(path: string, options: RequestOptions = {}):
   const json = parseJson(await response.text());
   if (!response.ok) {
     const body = (json as Partial<ApiErrorBody> | undefined)?.error;
-    throw new ApiError(response.status, body ?? { code: 'http_error', message: `The server answered ${response.status}` });
+    throw new ApiError(
+      response.status,
+      body ?? { code: 'http_error', message: `The server answered ${response.status}` },
+    );
   }
   return json as T;
 }

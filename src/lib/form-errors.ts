@@ -5,7 +5,11 @@ import { errorMessage, isApiError } from './api-client';
  * Puts the server's per-field reasons beside the matching inputs; when the server named no
  * shown field, its message becomes the form's own error.
  */
-export function showServerErrors<T extends FieldValues>(error: unknown, setError: UseFormSetError<T>, fields: readonly Path<T>[]): void {
+export function showServerErrors<T extends FieldValues>(
+  error: unknown,
+  setError: UseFormSetError<T>,
+  fields: readonly Path<T>[],
+): void {
   let placed = 0;
   if (isApiError(error)) {
     for (const [path, message] of Object.entries(error.fields)) {

@@ -16,7 +16,10 @@ interface Event {
   detail: Record<string, unknown>;
 }
 
-async function auditLog(s: { team: { id: string }; owner: { id: string } }, query = ''): Promise<{ events: Event[]; nextBefore: number | null }> {
+async function auditLog(
+  s: { team: { id: string }; owner: { id: string } },
+  query = '',
+): Promise<{ events: Event[]; nextBefore: number | null }> {
   const response = await (await clientAs(ctx, s.owner.id)).get(`/api/teams/${s.team.id}/audit${query}`);
   expect(response.status).toBe(200);
   return response.body;
@@ -35,8 +38,13 @@ describe('the team audit log', () => {
     await editor.post(`${robotPath}/revisions`).send({ baseRevision: 1, message: 'Tuned', config: robotConfigInput() });
     await editor.post(`${robotPath}/revisions/1/restore`).send({ baseRevision: 2 });
     await editor.post(`${robotPath}/flashes`).send({ revision: 3, note: 'on the bench' });
-    await editor.post(`/api/teams/${s.team.id}/robots/import`).attach('file', Buffer.from(JSON.stringify(robotConfigInput())), 'copy.json');
-    await editor.post(`${robotPath}/revisions/import`).field('baseRevision', '3').attach('file', Buffer.from(JSON.stringify(robotConfigInput())), 'again.json');
+    await editor
+      .post(`/api/teams/${s.team.id}/robots/import`)
+      .attach('file', Buffer.from(JSON.stringify(robotConfigInput())), 'copy.json');
+    await editor
+      .post(`${robotPath}/revisions/import`)
+      .field('baseRevision', '3')
+      .attach('file', Buffer.from(JSON.stringify(robotConfigInput())), 'again.json');
     await owner.delete(robotPath);
 
     const { events } = await auditLog(s);
@@ -62,7 +70,9 @@ describe('the team audit log', () => {
     await client(ctx).post('/api/auth/sign-in').send({ email: s.outsider.email, password: s.outsider.password });
     // The outsider joins a minute after signing in: that earlier sign-in stays out of this team's log.
     addMember(ctx, s.team.id, s.outsider, 'viewer');
-    ctx.database.sqlite.prepare('update memberships set created_at = created_at + 60000 where user_id = ?').run(s.outsider.id);
+    ctx.database.sqlite
+      .prepare('update memberships set created_at = created_at + 60000 where user_id = ?')
+      .run(s.outsider.id);
     await client(ctx).post('/api/auth/sign-in').send({ email: s.editor.email, password: s.editor.password });
     const { events } = await auditLog(s, '?kind=sign-ins');
     expect(events.map((e) => e.actorName)).toEqual(['Editor']);
@@ -78,7 +88,8 @@ describe('the team audit log', () => {
   it('pages back through older events', async () => {
     const s = await makeTeamScenario(ctx);
     const editor = await clientAs(ctx, s.editor.id);
-    for (let i = 0; i < 3; i++) await editor.post(`/api/robots/${s.robot.id}/flashes`).send({ revision: 1, note: `flash ${i}` });
+    for (let i = 0; i < 3; i++)
+      await editor.post(`/api/robots/${s.robot.id}/flashes`).send({ revision: 1, note: `flash ${i}` });
     const first = await auditLog(s, '?kind=flashes&limit=2');
     expect(first.events.map((e) => e.detail.note)).toEqual(['flash 2', 'flash 1']);
     const second = await auditLog(s, `?kind=flashes&limit=2&before=${first.nextBefore}`);
@@ -90,7 +101,9 @@ describe('the team audit log', () => {
     const s = await makeTeamScenario(ctx);
     const response = await (await clientAs(ctx, s.owner.id)).get(`/api/teams/${s.team.id}/audit?kind=everything`);
     expect(response.status).toBe(400);
-    expect(response.body.error.fields.kind).toBe('kind must be one of all, sign-ins, people, robots, revisions, flashes');
+    expect(response.body.error.fields.kind).toBe(
+      'kind must be one of all, sign-ins, people, robots, revisions, flashes',
+    );
   });
 
   it('is for owners only', async () => {

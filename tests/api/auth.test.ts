@@ -9,13 +9,16 @@ beforeAll(async () => {
 });
 afterAll(() => ctx.close());
 
-const cookieOf = (setCookie: string[] | string | undefined) => [setCookie ?? []].flat().find((c) => c.startsWith('mixwright_session='));
+const cookieOf = (setCookie: string[] | string | undefined) =>
+  [setCookie ?? []].flat().find((c) => c.startsWith('mixwright_session='));
 
 describe('sign-up', () => {
   it('creates the account, signs the person in and sets an httpOnly SameSite=Lax cookie', async () => {
     const email = uniqueEmail('new');
     const agent = client(ctx);
-    const response = await agent.post('/api/auth/sign-up').send({ name: ' Ada Tinker ', email: email.toUpperCase(), password: 'a long enough password' });
+    const response = await agent
+      .post('/api/auth/sign-up')
+      .send({ name: ' Ada Tinker ', email: email.toUpperCase(), password: 'a long enough password' });
     expect(response.status).toBe(201);
     expect(response.body.user).toMatchObject({ name: 'Ada Tinker', email });
     const cookie = cookieOf(response.headers['set-cookie']);
@@ -28,21 +31,30 @@ describe('sign-up', () => {
 
   it('refuses an e-mail that already has an account, naming the field', async () => {
     const existing = await makeUser(ctx);
-    const response = await client(ctx).post('/api/auth/sign-up').send({ name: 'Twin', email: existing.email, password: 'another long password' });
+    const response = await client(ctx)
+      .post('/api/auth/sign-up')
+      .send({ name: 'Twin', email: existing.email, password: 'another long password' });
     expect(response.status).toBe(409);
     expect(response.body.error.fields).toEqual({ email: expect.stringContaining('already exists') });
   });
 
   it('refuses a short password with a reason beside the password field', async () => {
-    const response = await client(ctx).post('/api/auth/sign-up').send({ name: 'Short', email: uniqueEmail(), password: 'short' });
+    const response = await client(ctx)
+      .post('/api/auth/sign-up')
+      .send({ name: 'Short', email: uniqueEmail(), password: 'short' });
     expect(response.status).toBe(400);
-    expect(response.body.error).toMatchObject({ code: 'invalid_input', fields: { password: 'Use at least 10 characters' } });
+    expect(response.body.error).toMatchObject({
+      code: 'invalid_input',
+      fields: { password: 'Use at least 10 characters' },
+    });
   });
 
   it('stores the password hashed with scrypt, never as typed', async () => {
     const email = uniqueEmail();
     await client(ctx).post('/api/auth/sign-up').send({ name: 'Hash', email, password: 'plain text password' });
-    const row = ctx.database.sqlite.prepare('select password_hash from users where email = ?').get(email) as { password_hash: string };
+    const row = ctx.database.sqlite.prepare('select password_hash from users where email = ?').get(email) as {
+      password_hash: string;
+    };
     expect(row.password_hash).toMatch(/^scrypt\$/);
     expect(row.password_hash).not.toContain('plain text password');
   });
@@ -62,7 +74,9 @@ describe('sign-in', () => {
   it('gives the same answer for a wrong password and an unknown e-mail', async () => {
     const user = await makeUser(ctx);
     const wrong = await client(ctx).post('/api/auth/sign-in').send({ email: user.email, password: 'not the password' });
-    const unknown = await client(ctx).post('/api/auth/sign-in').send({ email: uniqueEmail('nobody'), password: 'not the password' });
+    const unknown = await client(ctx)
+      .post('/api/auth/sign-in')
+      .send({ email: uniqueEmail('nobody'), password: 'not the password' });
     expect(wrong.status).toBe(401);
     expect(unknown.status).toBe(401);
     expect(unknown.body).toEqual(wrong.body);

@@ -17,13 +17,18 @@ describe('API errors', () => {
   });
 
   it('answers a body that is not JSON with 400', async () => {
-    const response = await client(ctx).post('/api/auth/sign-in').set('Content-Type', 'application/json').send('{"email": ');
+    const response = await client(ctx)
+      .post('/api/auth/sign-in')
+      .set('Content-Type', 'application/json')
+      .send('{"email": ');
     expect(response.status).toBe(400);
     expect(response.body.error.code).toBe('malformed_json');
   });
 
   it('refuses a body above the size limit with 413', async () => {
-    const response = await client(ctx).post('/api/auth/sign-in').send({ email: 'a@example.org', password: 'x'.repeat(4096) });
+    const response = await client(ctx)
+      .post('/api/auth/sign-in')
+      .send({ email: 'a@example.org', password: 'x'.repeat(4096) });
     expect(response.status).toBe(413);
     expect(response.body.error.code).toBe('too_large');
   });

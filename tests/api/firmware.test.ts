@@ -38,7 +38,13 @@ describe('the files of a revision', () => {
     const response = await viewer.get(`/api/robots/${s.robot.id}/revisions/2/files`);
     expect(response.status).toBe(200);
     const body = response.body as FirmwareFiles;
-    expect(body).toMatchObject({ revision: 2, draft: false, sketchFolder: 'greenhouse_cart', remoteFolder: null, hash: configHash(revision.config) });
+    expect(body).toMatchObject({
+      revision: 2,
+      draft: false,
+      sketchFolder: 'greenhouse_cart',
+      remoteFolder: null,
+      hash: configHash(revision.config),
+    });
     const ino = body.files.find((f) => f.path === 'greenhouse_cart/greenhouse_cart.ino')!;
     expect(ino).toMatchObject({ language: 'cpp', size: Buffer.byteLength(ino.content) });
     expect(body.files.find((f) => f.path === 'manifest.json')!.language).toBe('json');
@@ -48,7 +54,9 @@ describe('the files of a revision', () => {
   it('gives the boot line the firmware prints, with the revision and the configuration hash', async () => {
     const { s, revision, viewer } = await viewerOf();
     const body = (await viewer.get(`/api/robots/${s.robot.id}/revisions/2/files`)).body as FirmwareFiles;
-    expect(body.bootLine).toBe(`boot robot="Greenhouse Cart" revision=2 hash=${configHash(revision.config)} generator=0.1.0 board=uno input=rc-pwm`);
+    expect(body.bootLine).toBe(
+      `boot robot="Greenhouse Cart" revision=2 hash=${configHash(revision.config)} generator=0.1.0 board=uno input=rc-pwm`,
+    );
   });
 
   it("names the remote's sketch folder when the link is home-made", async () => {
@@ -64,8 +72,13 @@ describe('the files of a revision', () => {
     expect(response.status).toBe(422);
     expect(response.body.error.code).toBe('firmware_blocked');
     expect(response.body.error.message).toMatch(/^The firmware cannot be generated: .+ has no pin\. \(and \d+ more\)$/);
-    expect(response.body.error.fields).toMatchObject({ 'wiring.drivers.0.pins.a.en.pin': 'Bridge A Enable (PWM) has no pin.' });
-    expect(response.body.error.issues).toContainEqual({ path: ['wiring', 'drivers', 0, 'pins', 'a.en', 'pin'], message: 'Bridge A Enable (PWM) has no pin.' });
+    expect(response.body.error.fields).toMatchObject({
+      'wiring.drivers.0.pins.a.en.pin': 'Bridge A Enable (PWM) has no pin.',
+    });
+    expect(response.body.error.issues).toContainEqual({
+      path: ['wiring', 'drivers', 0, 'pins', 'a.en', 'pin'],
+      message: 'Bridge A Enable (PWM) has no pin.',
+    });
   });
 
   it('answers 404 for a revision the robot does not have', async () => {
@@ -142,7 +155,10 @@ describe('the compile check', { timeout: 180_000 }, () => {
     const second = await viewerOf();
     const a = await first.viewer.post(`/api/robots/${first.s.robot.id}/revisions/2/verify`);
     // A full queue would refuse a new compile, so this answer can only come from the cache.
-    const cached = await verifyRevision(ctx.appContext, second.s.robot.id, 2, { stepTimeoutMs: 60_000, queue: createSerialQueue(0) });
+    const cached = await verifyRevision(ctx.appContext, second.s.robot.id, 2, {
+      stepTimeoutMs: 60_000,
+      queue: createSerialQueue(0),
+    });
     expect(cached).toEqual(a.body);
   });
 
@@ -165,8 +181,15 @@ describe('the compile check', { timeout: 180_000 }, () => {
   it('stops a compile at its time limit, says so, and does not keep that answer', async () => {
     const s = await makeTeamScenario(ctx);
     saveWiredRevision(ctx, s, { name: 'Slow Compile Cart' });
-    const limited = await verifyRevision(ctx.appContext, s.robot.id, 2, { stepTimeoutMs: 1, queue: createSerialQueue(1) });
-    expect(limited.sketches[0]).toMatchObject({ ok: false, timedOut: true, messages: 'The compile step took too long and was stopped.' });
+    const limited = await verifyRevision(ctx.appContext, s.robot.id, 2, {
+      stepTimeoutMs: 1,
+      queue: createSerialQueue(1),
+    });
+    expect(limited.sketches[0]).toMatchObject({
+      ok: false,
+      timedOut: true,
+      messages: 'The compile step took too long and was stopped.',
+    });
     const again = await (await clientAs(ctx, s.viewer.id)).post(`/api/robots/${s.robot.id}/revisions/2/verify`);
     expect(again.body.sketches[0].ok).toBe(true);
   });
@@ -199,7 +222,12 @@ describe('the preview of an unsaved draft', () => {
     const config = wiredConfig({ name: 'Draft Cart' });
     const response = await editor.post(`/api/robots/${s.robot.id}/preview-files`).send({ config });
     expect(response.status).toBe(200);
-    expect(response.body).toMatchObject({ revision: 2, draft: true, sketchFolder: 'draft_cart', hash: configHash(config) });
+    expect(response.body).toMatchObject({
+      revision: 2,
+      draft: true,
+      sketchFolder: 'draft_cart',
+      hash: configHash(config),
+    });
     const header = (response.body as FirmwareFiles).files.find((f) => f.path === 'draft_cart/mw_config.h')!;
     expect(header.content).toContain('#define MW_REVISION 2UL');
   });
@@ -208,7 +236,11 @@ describe('the preview of an unsaved draft', () => {
     const s = await makeTeamScenario(ctx);
     const config = wiredConfig();
     config.firmware.sketchName = 'cart_v2';
-    const response = await (await clientAs(ctx, s.editor.id)).post(`/api/robots/${s.robot.id}/preview-files`).send({ config });
+    const response = await (
+      await clientAs(ctx, s.editor.id)
+    )
+      .post(`/api/robots/${s.robot.id}/preview-files`)
+      .send({ config });
     expect(response.body.files.map((f: { path: string }) => f.path)).toContain('cart_v2/cart_v2.ino');
   });
 
@@ -216,7 +248,11 @@ describe('the preview of an unsaved draft', () => {
     const s = await makeTeamScenario(ctx);
     const config = wiredConfig();
     config.chassis.wheels[0].radiusMm = 0;
-    const response = await (await clientAs(ctx, s.editor.id)).post(`/api/robots/${s.robot.id}/preview-files`).send({ config });
+    const response = await (
+      await clientAs(ctx, s.editor.id)
+    )
+      .post(`/api/robots/${s.robot.id}/preview-files`)
+      .send({ config });
     expect(response.status).toBe(400);
     expect(response.body.error.fields['config.chassis.wheels.0.radiusMm']).toBe('Radius must be more than 0 mm');
   });
@@ -226,7 +262,11 @@ describe('the preview of an unsaved draft', () => {
     const config = wiredConfig();
     const [first, second] = Object.keys(config.wiring.drivers[0].pins);
     config.wiring.drivers[0].pins[second] = { ...config.wiring.drivers[0].pins[first] };
-    const response = await (await clientAs(ctx, s.editor.id)).post(`/api/robots/${s.robot.id}/preview-files`).send({ config });
+    const response = await (
+      await clientAs(ctx, s.editor.id)
+    )
+      .post(`/api/robots/${s.robot.id}/preview-files`)
+      .send({ config });
     expect(response.status).toBe(422);
     expect(Object.keys(response.body.error.fields)).toContain(`wiring.drivers.0.pins.${second}.pin`);
   });

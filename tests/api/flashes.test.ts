@@ -18,7 +18,11 @@ afterAll(() => ctx.close());
 function save(s: TeamScenario, message: string, change: (c: RobotConfig) => void = () => {}) {
   const config = { ...robotConfig(), name: s.robot.name };
   change(config);
-  return saveRevision(ctx.appContext, s.editor, s.robot.id, { baseRevision: findLiveRobot(ctx.db, s.robot.id)!.headRevision, message, config });
+  return saveRevision(ctx.appContext, s.editor, s.robot.id, {
+    baseRevision: findLiveRobot(ctx.db, s.robot.id)!.headRevision,
+    message,
+    config,
+  });
 }
 
 /** The line firmware generated from this revision prints at boot. */
@@ -31,12 +35,18 @@ describe('the flash log', () => {
   it('records who flashed which revision, when, with a note, and audits it', async () => {
     const s = await makeTeamScenario(ctx);
     const editor = await clientAs(ctx, s.editor.id);
-    const recorded = await editor.post(`/api/robots/${s.robot.id}/flashes`).send({ revision: 1, note: 'Club night', flashedAt: new Date().toISOString() });
+    const recorded = await editor
+      .post(`/api/robots/${s.robot.id}/flashes`)
+      .send({ revision: 1, note: 'Club night', flashedAt: new Date().toISOString() });
     expect(recorded.status).toBe(201);
     expect(recorded.body.flash).toMatchObject({ revisionNumber: 1, flashedByName: 'Editor', note: 'Club night' });
     const log = await (await clientAs(ctx, s.viewer.id)).get(`/api/robots/${s.robot.id}/flashes`);
     expect(log.body.flashes).toHaveLength(1);
-    expect(listTeamEvents(ctx.db, s.team.id, 1)[0]).toMatchObject({ action: 'flash.recorded', actorName: 'Editor', detail: { number: 1, note: 'Club night' } });
+    expect(listTeamEvents(ctx.db, s.team.id, 1)[0]).toMatchObject({
+      action: 'flash.recorded',
+      actorName: 'Editor',
+      detail: { number: 1, note: 'Club night' },
+    });
   });
 
   it('shows the newest flash on the robot list', async () => {
@@ -49,7 +59,11 @@ describe('the flash log', () => {
 
   it('refuses a revision that does not exist, naming the field', async () => {
     const s = await makeTeamScenario(ctx);
-    const response = await (await clientAs(ctx, s.editor.id)).post(`/api/robots/${s.robot.id}/flashes`).send({ revision: 4 });
+    const response = await (
+      await clientAs(ctx, s.editor.id)
+    )
+      .post(`/api/robots/${s.robot.id}/flashes`)
+      .send({ revision: 4 });
     expect(response.status).toBe(400);
     expect(response.body.error.fields.revision).toBe('Revision 4 does not exist; the newest is 1');
   });
@@ -57,21 +71,33 @@ describe('the flash log', () => {
   it('refuses a flash time in the future', async () => {
     const s = await makeTeamScenario(ctx);
     const tomorrow = new Date(Date.now() + 86_400_000).toISOString();
-    const response = await (await clientAs(ctx, s.editor.id)).post(`/api/robots/${s.robot.id}/flashes`).send({ revision: 1, flashedAt: tomorrow });
+    const response = await (
+      await clientAs(ctx, s.editor.id)
+    )
+      .post(`/api/robots/${s.robot.id}/flashes`)
+      .send({ revision: 1, flashedAt: tomorrow });
     expect(response.body.error.fields.flashedAt).toBe('The flash time is in the future');
   });
 
   it('refuses a flash time before the revision was saved', async () => {
     const s = await makeTeamScenario(ctx);
     const lastYear = new Date(Date.now() - 365 * 86_400_000).toISOString();
-    const response = await (await clientAs(ctx, s.editor.id)).post(`/api/robots/${s.robot.id}/flashes`).send({ revision: 1, flashedAt: lastYear });
+    const response = await (
+      await clientAs(ctx, s.editor.id)
+    )
+      .post(`/api/robots/${s.robot.id}/flashes`)
+      .send({ revision: 1, flashedAt: lastYear });
     expect(response.body.error.fields.flashedAt).toMatch(/Revision 1 was saved after that time/);
   });
 
   it('is refused to a viewer, and writes nothing', async () => {
     const s = await makeTeamScenario(ctx);
     const before = rowCounts(ctx);
-    const response = await (await clientAs(ctx, s.viewer.id)).post(`/api/robots/${s.robot.id}/flashes`).send({ revision: 1 });
+    const response = await (
+      await clientAs(ctx, s.viewer.id)
+    )
+      .post(`/api/robots/${s.robot.id}/flashes`)
+      .send({ revision: 1 });
     expect(response.status).toBe(403);
     expect(rowCounts(ctx)).toEqual(before);
   });
@@ -81,9 +107,17 @@ describe('the boot-line lookup', () => {
   it('finds the revision the firmware was built from and says it is the head', async () => {
     const s = await makeTeamScenario(ctx);
     save(s, 'Quicker failsafe', (c) => (c.safety.failsafeTimeoutMs = 150));
-    const answer = await (await clientAs(ctx, s.viewer.id)).post(`/api/robots/${s.robot.id}/boot-line`).send({ line: bootLineOf(s, 2) });
+    const answer = await (
+      await clientAs(ctx, s.viewer.id)
+    )
+      .post(`/api/robots/${s.robot.id}/boot-line`)
+      .send({ line: bootLineOf(s, 2) });
     expect(answer.status).toBe(200);
-    expect(answer.body).toMatchObject({ match: { number: 2, isHead: true, message: 'Quicker failsafe' }, headRevision: 2, nameMatches: true });
+    expect(answer.body).toMatchObject({
+      match: { number: 2, isHead: true, message: 'Quicker failsafe' },
+      headRevision: 2,
+      nameMatches: true,
+    });
     expect(answer.body.verdict).toBe('This robot runs revision 2, the current head.');
   });
 
@@ -91,7 +125,11 @@ describe('the boot-line lookup', () => {
     const s = await makeTeamScenario(ctx);
     save(s, 'Two', (c) => (c.safety.failsafeTimeoutMs = 150));
     save(s, 'Three', (c) => (c.safety.failsafeTimeoutMs = 200));
-    const answer = await (await clientAs(ctx, s.viewer.id)).post(`/api/robots/${s.robot.id}/boot-line`).send({ line: bootLineOf(s, 1) });
+    const answer = await (
+      await clientAs(ctx, s.viewer.id)
+    )
+      .post(`/api/robots/${s.robot.id}/boot-line`)
+      .send({ line: bootLineOf(s, 1) });
     expect(answer.body.match).toMatchObject({ number: 1, isHead: false });
     expect(answer.body.verdict).toBe('This robot runs revision 1; the head is revision 3.');
   });
@@ -99,8 +137,16 @@ describe('the boot-line lookup', () => {
   it('names the other revisions with the same configuration after a restore', async () => {
     const s = await makeTeamScenario(ctx);
     save(s, 'Two', (c) => (c.safety.failsafeTimeoutMs = 150));
-    await (await clientAs(ctx, s.editor.id)).post(`/api/robots/${s.robot.id}/revisions/1/restore`).send({ baseRevision: 2 });
-    const answer = await (await clientAs(ctx, s.viewer.id)).post(`/api/robots/${s.robot.id}/boot-line`).send({ line: bootLineOf(s, 3) });
+    await (
+      await clientAs(ctx, s.editor.id)
+    )
+      .post(`/api/robots/${s.robot.id}/revisions/1/restore`)
+      .send({ baseRevision: 2 });
+    const answer = await (
+      await clientAs(ctx, s.viewer.id)
+    )
+      .post(`/api/robots/${s.robot.id}/boot-line`)
+      .send({ line: bootLineOf(s, 3) });
     expect(answer.body.match).toMatchObject({ number: 3, isHead: true });
     expect(answer.body.sameConfiguration).toEqual([1]);
   });
@@ -118,7 +164,11 @@ describe('the boot-line lookup', () => {
 
   it('notices a line from another robot', async () => {
     const s = await makeTeamScenario(ctx);
-    const answer = await (await clientAs(ctx, s.viewer.id)).post(`/api/robots/${s.robot.id}/boot-line`).send({ line: bootLineOf(s, 1, 'Somebody Else') });
+    const answer = await (
+      await clientAs(ctx, s.viewer.id)
+    )
+      .post(`/api/robots/${s.robot.id}/boot-line`)
+      .send({ line: bootLineOf(s, 1, 'Somebody Else') });
     expect(answer.body.nameMatches).toBe(false);
     expect(answer.body.verdict).toMatch(/^The line names “Somebody Else”, not “/);
   });
@@ -126,8 +176,15 @@ describe('the boot-line lookup', () => {
   it('recognises firmware built before the configuration schema changed', async () => {
     const s = await makeTeamScenario(ctx);
     // Revision 1 stored as version 1 wrote it; firmware then hashed that stored form.
-    const stored = { ...robotConfig(), name: s.robot.name, schemaVersion: 1, controls: { ...robotConfig().controls, rateSwitch: { channel: null, positions: 2, rates: [0.5, 1] } } };
-    ctx.database.sqlite.prepare('update revisions set config = ? where robot_id = ? and number = 1').run(JSON.stringify(stored), s.robot.id);
+    const stored = {
+      ...robotConfig(),
+      name: s.robot.name,
+      schemaVersion: 1,
+      controls: { ...robotConfig().controls, rateSwitch: { channel: null, positions: 2, rates: [0.5, 1] } },
+    };
+    ctx.database.sqlite
+      .prepare('update revisions set config = ? where robot_id = ? and number = 1')
+      .run(JSON.stringify(stored), s.robot.id);
     const line = `boot robot="${s.robot.name}" revision=1 hash=${configHash(stored)}`;
     const answer = await (await clientAs(ctx, s.viewer.id)).post(`/api/robots/${s.robot.id}/boot-line`).send({ line });
     expect(answer.body.match).toMatchObject({ number: 1 });
@@ -135,7 +192,11 @@ describe('the boot-line lookup', () => {
 
   it('explains a line it cannot read', async () => {
     const s = await makeTeamScenario(ctx);
-    const answer = await (await clientAs(ctx, s.viewer.id)).post(`/api/robots/${s.robot.id}/boot-line`).send({ line: 'health good=50/s' });
+    const answer = await (
+      await clientAs(ctx, s.viewer.id)
+    )
+      .post(`/api/robots/${s.robot.id}/boot-line`)
+      .send({ line: 'health good=50/s' });
     expect(answer.status).toBe(400);
     expect(answer.body.error.fields.line).toMatch(/No boot line found/);
   });

@@ -31,8 +31,12 @@ describe('two saves on the same base', () => {
     const editorDraft = { ...robotConfigInput(), safety: { failsafeTimeoutMs: 150 } };
     const ownerDraft = { ...robotConfigInput(), safety: { failsafeTimeoutMs: 400 } };
     const answers = await Promise.all([
-      editor.post(`/api/robots/${s.robot.id}/revisions`).send({ baseRevision: 1, message: 'Editor: quicker failsafe', config: editorDraft }),
-      owner.post(`/api/robots/${s.robot.id}/revisions`).send({ baseRevision: 1, message: 'Owner: slower failsafe', config: ownerDraft }),
+      editor
+        .post(`/api/robots/${s.robot.id}/revisions`)
+        .send({ baseRevision: 1, message: 'Editor: quicker failsafe', config: editorDraft }),
+      owner
+        .post(`/api/robots/${s.robot.id}/revisions`)
+        .send({ baseRevision: 1, message: 'Owner: slower failsafe', config: ownerDraft }),
     ]);
     expect(answers.map((a) => a.status).sort()).toEqual([201, 409]);
     const winner = answers.find((a) => a.status === 201)!;
@@ -40,10 +44,20 @@ describe('two saves on the same base', () => {
     const losingTimeout = winner === answers[0] ? 400 : 150;
 
     const stored = await editor.get(`/api/robots/${s.robot.id}/revisions/2`);
-    expect(stored.body.revision.config.safety.failsafeTimeoutMs).toBe(winner.body.revision.config.safety.failsafeTimeoutMs);
-    expect(loser.body.error).toMatchObject({ code: 'revision_conflict', head: { number: 2, config: { safety: { failsafeTimeoutMs: 550 - losingTimeout } } } });
-    expect(loser.body.error.draft).toMatchObject({ baseRevision: 1, config: { safety: { failsafeTimeoutMs: losingTimeout } } });
-    expect((await editor.get(`/api/robots/${s.robot.id}/revisions/1`)).body.revision.config.safety.failsafeTimeoutMs).toBe(250);
+    expect(stored.body.revision.config.safety.failsafeTimeoutMs).toBe(
+      winner.body.revision.config.safety.failsafeTimeoutMs,
+    );
+    expect(loser.body.error).toMatchObject({
+      code: 'revision_conflict',
+      head: { number: 2, config: { safety: { failsafeTimeoutMs: 550 - losingTimeout } } },
+    });
+    expect(loser.body.error.draft).toMatchObject({
+      baseRevision: 1,
+      config: { safety: { failsafeTimeoutMs: losingTimeout } },
+    });
+    expect(
+      (await editor.get(`/api/robots/${s.robot.id}/revisions/1`)).body.revision.config.safety.failsafeTimeoutMs,
+    ).toBe(250);
     expect((await editor.get(`/api/robots/${s.robot.id}/revisions`)).body.revisions).toHaveLength(2);
   });
 
@@ -51,9 +65,13 @@ describe('two saves on the same base', () => {
     const s = await makeTeamScenario(ctx);
     const editor = await clientAs(ctx, s.editor.id);
     save(s, 'Someone else first');
-    const refused = await editor.post(`/api/robots/${s.robot.id}/revisions`).send({ baseRevision: 1, message: 'Mine', config: robotConfigInput() });
+    const refused = await editor
+      .post(`/api/robots/${s.robot.id}/revisions`)
+      .send({ baseRevision: 1, message: 'Mine', config: robotConfigInput() });
     const { draft, head } = refused.body.error;
-    const saved = await editor.post(`/api/robots/${s.robot.id}/revisions`).send({ baseRevision: head.number, message: draft.message, config: draft.config });
+    const saved = await editor
+      .post(`/api/robots/${s.robot.id}/revisions`)
+      .send({ baseRevision: head.number, message: draft.message, config: draft.config });
     expect(saved.status).toBe(201);
     expect(saved.body.revision).toMatchObject({ number: 3, message: 'Mine' });
   });
@@ -62,7 +80,9 @@ describe('two saves on the same base', () => {
 describe('saving', () => {
   it('accepts a configuration with problems (unassigned pins are warnings, not schema errors)', async () => {
     const s = await makeTeamScenario(ctx);
-    const response = await (await clientAs(ctx, s.editor.id))
+    const response = await (
+      await clientAs(ctx, s.editor.id)
+    )
       .post(`/api/robots/${s.robot.id}/revisions`)
       .send({ baseRevision: 1, message: 'Work in progress', config: robotConfigInput() });
     expect(response.status).toBe(201);
@@ -73,8 +93,15 @@ describe('saving', () => {
 
   it('refuses a schema error with the field path', async () => {
     const s = await makeTeamScenario(ctx);
-    const config = { ...robotConfigInput(), controls: { ...robotConfigInput().controls, rateSwitch: { rates: [2, 1] } } };
-    const response = await (await clientAs(ctx, s.editor.id)).post(`/api/robots/${s.robot.id}/revisions`).send({ baseRevision: 1, message: 'Bad', config });
+    const config = {
+      ...robotConfigInput(),
+      controls: { ...robotConfigInput().controls, rateSwitch: { rates: [2, 1] } },
+    };
+    const response = await (
+      await clientAs(ctx, s.editor.id)
+    )
+      .post(`/api/robots/${s.robot.id}/revisions`)
+      .send({ baseRevision: 1, message: 'Bad', config });
     expect(response.status).toBe(400);
     expect(Object.keys(response.body.error.fields)).toEqual(['config.controls.rateSwitch.rates.0']);
   });
@@ -90,7 +117,12 @@ describe('the history list', () => {
     expect(history.status).toBe(200);
     expect(history.body.headRevision).toBe(2);
     expect(history.body.revisions.map((r: { number: number }) => r.number)).toEqual([2, 1]);
-    expect(history.body.revisions[0]).toMatchObject({ number: 2, message: 'Longer ramp', authorName: 'Editor', flashes: [] });
+    expect(history.body.revisions[0]).toMatchObject({
+      number: 2,
+      message: 'Longer ramp',
+      authorName: 'Editor',
+      flashes: [],
+    });
     expect(history.body.revisions[1].flashes).toEqual([{ flashedAt: expect.any(String), flashedByName: 'Owner' }]);
     expect(history.body.revisions[1].problems).toEqual({ errors: expect.any(Number), warnings: expect.any(Number) });
     expect(history.body.lastFlash).toMatchObject({ revisionNumber: 1, note: 'First upload', flashedByName: 'Owner' });
@@ -118,7 +150,10 @@ describe('the diff between two revisions', () => {
 
   it('says why generated files are not compared when there is no generator', () => {
     return makeTeamScenario(ctx).then((s) => {
-      expect(revisionDiff(ctx.appContext, s.robot.id, 1, 1, null).files).toEqual({ available: false, reason: expect.stringMatching(/firmware generator/) });
+      expect(revisionDiff(ctx.appContext, s.robot.id, 1, 1, null).files).toEqual({
+        available: false,
+        reason: expect.stringMatching(/firmware generator/),
+      });
     });
   });
 
@@ -126,7 +161,10 @@ describe('the diff between two revisions', () => {
     const s = await makeTeamScenario(ctx);
     save(s, 'Shorter failsafe', (c) => (c.safety.failsafeTimeoutMs = 200));
     const render = (config: RobotConfig, { revision }: { revision: number }): TextFile[] => [
-      { path: 'robot/mw_config.h', content: `// revision ${revision}\n#define MW_FAILSAFE_MS ${config.safety.failsafeTimeoutMs}\n` },
+      {
+        path: 'robot/mw_config.h',
+        content: `// revision ${revision}\n#define MW_FAILSAFE_MS ${config.safety.failsafeTimeoutMs}\n`,
+      },
       { path: 'robot/robot.ino', content: 'void loop() {}\n' },
     ];
     const diff = revisionDiff(ctx.appContext, s.robot.id, 1, 2, render);
@@ -134,7 +172,9 @@ describe('the diff between two revisions', () => {
     if (!diff.files.available) return;
     expect(diff.files.unchanged).toEqual(['robot/robot.ino']);
     expect(diff.files.changed).toHaveLength(1);
-    expect(diff.files.changed[0].rows.filter((r) => r.kind === 'changed').map((r) => [r.left?.text, r.right?.text])).toEqual([
+    expect(
+      diff.files.changed[0].rows.filter((r) => r.kind === 'changed').map((r) => [r.left?.text, r.right?.text]),
+    ).toEqual([
       ['// revision 1', '// revision 2'],
       ['#define MW_FAILSAFE_MS 250', '#define MW_FAILSAFE_MS 200'],
     ]);
@@ -143,24 +183,33 @@ describe('the diff between two revisions', () => {
   it('compares the firmware the generator makes for each revision', async () => {
     const s = await makeTeamScenario(ctx);
     const owner = await clientAs(ctx, s.owner.id);
-    const created = await owner.post(`/api/teams/${s.team.id}/robots`).send({ name: 'Garden Hauler', config: sampleConfigInput() });
+    const created = await owner
+      .post(`/api/teams/${s.team.id}/robots`)
+      .send({ name: 'Garden Hauler', config: sampleConfigInput() });
     const robotId = created.body.robot.id;
     const quicker = { ...sampleConfigInput(), safety: { failsafeTimeoutMs: 150 } };
-    await owner.post(`/api/robots/${robotId}/revisions`).send({ baseRevision: 1, message: 'Quicker failsafe', config: quicker });
+    await owner
+      .post(`/api/robots/${robotId}/revisions`)
+      .send({ baseRevision: 1, message: 'Quicker failsafe', config: quicker });
     const diff = await owner.get(`/api/robots/${robotId}/diff?from=1&to=2`);
     expect(diff.body.files.available).toBe(true);
     const paths = diff.body.files.changed.map((f: { path: string }) => f.path);
     expect(paths).toEqual(expect.arrayContaining(['config.json', 'garden_hauler/mw_config.h']));
     expect(diff.body.files.stampOnly).toContain('garden_hauler/mw_mixer.h');
     const header = diff.body.files.changed.find((f: { path: string }) => f.path === 'garden_hauler/mw_config.h');
-    const changed = header.rows.filter((r: { kind: string }) => r.kind === 'changed').map((r: { right: { text: string } }) => r.right.text);
+    const changed = header.rows
+      .filter((r: { kind: string }) => r.kind === 'changed')
+      .map((r: { right: { text: string } }) => r.right.text);
     expect(changed.some((line: string) => /150/.test(line))).toBe(true);
   });
 
   it('says which field keeps a revision from being generated', async () => {
     const s = await makeTeamScenario(ctx);
     const diff = await (await clientAs(ctx, s.viewer.id)).get(`/api/robots/${s.robot.id}/diff?from=1&to=1`);
-    expect(diff.body.files).toEqual({ available: false, reason: expect.stringMatching(/^Revision 1 cannot be generated: [a-zA-Z.0-9]+: /) });
+    expect(diff.body.files).toEqual({
+      available: false,
+      reason: expect.stringMatching(/^Revision 1 cannot be generated: [a-zA-Z.0-9]+: /),
+    });
   });
 
   it('names a revision that does not exist', async () => {
@@ -183,17 +232,30 @@ describe('restoring a revision', () => {
     const s = await makeTeamScenario(ctx);
     save(s, 'Slower ramp', (c) => (c.safety.rampPerSecond = 1));
     const editor = await clientAs(ctx, s.editor.id);
-    const restored = await editor.post(`/api/robots/${s.robot.id}/revisions/1/restore`).send({ baseRevision: 2, note: 'ramp was too soft' });
+    const restored = await editor
+      .post(`/api/robots/${s.robot.id}/revisions/1/restore`)
+      .send({ baseRevision: 2, note: 'ramp was too soft' });
     expect(restored.status).toBe(201);
-    expect(restored.body.revision).toMatchObject({ number: 3, message: 'Restored revision 1: ramp was too soft', authorName: 'Editor' });
+    expect(restored.body.revision).toMatchObject({
+      number: 3,
+      message: 'Restored revision 1: ramp was too soft',
+      authorName: 'Editor',
+    });
     const [first, third] = await Promise.all([1, 3].map((n) => editor.get(`/api/robots/${s.robot.id}/revisions/${n}`)));
     expect(third.body.revision.config).toEqual(first.body.revision.config);
-    expect(listTeamEvents(ctx.db, s.team.id, 1)[0]).toMatchObject({ action: 'revision.restored', detail: { number: 3, from: 1 } });
+    expect(listTeamEvents(ctx.db, s.team.id, 1)[0]).toMatchObject({
+      action: 'revision.restored',
+      detail: { number: 3, from: 1 },
+    });
   });
 
   it('uses the plain message without a note', async () => {
     const s = await makeTeamScenario(ctx);
-    const restored = await (await clientAs(ctx, s.owner.id)).post(`/api/robots/${s.robot.id}/revisions/1/restore`).send({ baseRevision: 1 });
+    const restored = await (
+      await clientAs(ctx, s.owner.id)
+    )
+      .post(`/api/robots/${s.robot.id}/revisions/1/restore`)
+      .send({ baseRevision: 1 });
     expect(restored.body.revision.message).toBe('Restored revision 1');
   });
 
@@ -201,7 +263,11 @@ describe('restoring a revision', () => {
     const s = await makeTeamScenario(ctx);
     save(s, 'Newer');
     const before = rowCounts(ctx);
-    const response = await (await clientAs(ctx, s.editor.id)).post(`/api/robots/${s.robot.id}/revisions/1/restore`).send({ baseRevision: 1 });
+    const response = await (
+      await clientAs(ctx, s.editor.id)
+    )
+      .post(`/api/robots/${s.robot.id}/revisions/1/restore`)
+      .send({ baseRevision: 1 });
     expect(response.status).toBe(409);
     expect(response.body.error.head.number).toBe(2);
     expect(rowCounts(ctx)).toEqual(before);
@@ -210,14 +276,22 @@ describe('restoring a revision', () => {
   it('is refused to a viewer, and writes nothing', async () => {
     const s = await makeTeamScenario(ctx);
     const before = rowCounts(ctx);
-    const response = await (await clientAs(ctx, s.viewer.id)).post(`/api/robots/${s.robot.id}/revisions/1/restore`).send({ baseRevision: 1 });
+    const response = await (
+      await clientAs(ctx, s.viewer.id)
+    )
+      .post(`/api/robots/${s.robot.id}/revisions/1/restore`)
+      .send({ baseRevision: 1 });
     expect(response.status).toBe(403);
     expect(rowCounts(ctx)).toEqual(before);
   });
 
   it('answers 404 for a revision that does not exist', async () => {
     const s = await makeTeamScenario(ctx);
-    const response = await (await clientAs(ctx, s.editor.id)).post(`/api/robots/${s.robot.id}/revisions/5/restore`).send({ baseRevision: 1 });
+    const response = await (
+      await clientAs(ctx, s.editor.id)
+    )
+      .post(`/api/robots/${s.robot.id}/revisions/5/restore`)
+      .send({ baseRevision: 1 });
     expect(response.status).toBe(404);
   });
 });

@@ -16,7 +16,13 @@ afterAll(() => ctx.close());
 
 const v1File = (name: string) => readFileSync(join(__dirname, '../fixtures/configs/v1', name));
 
-async function importRobot(s: TeamScenario, data: Buffer, fileName: string, fields: Record<string, string> = {}, as = s.editor) {
+async function importRobot(
+  s: TeamScenario,
+  data: Buffer,
+  fileName: string,
+  fields: Record<string, string> = {},
+  as = s.editor,
+) {
   let request = (await clientAs(ctx, as.id)).post(`/api/teams/${s.team.id}/robots/import`);
   for (const [name, value] of Object.entries(fields)) request = request.field(name, value);
   return request.attach('file', data, fileName);
@@ -63,7 +69,12 @@ describe('importing as a new robot', () => {
     const exported = await viewer.get(`/api/robots/${s.robot.id}/revisions/1/export`);
     const imported = await importRobot(s, Buffer.from(exported.text), 'exported.json');
     expect(imported.status).toBe(201);
-    expect(imported.body).toMatchObject({ revision: 1, fromVersion: 2, notes: [], robot: { name: s.robot.name, headRevision: 1 } });
+    expect(imported.body).toMatchObject({
+      revision: 1,
+      fromVersion: 2,
+      notes: [],
+      robot: { name: s.robot.name, headRevision: 1 },
+    });
     const original = await viewer.get(`/api/robots/${s.robot.id}/revisions/1`);
     const copy = await viewer.get(`/api/robots/${imported.body.robotId}/revisions/1`);
     expect(copy.body.revision.config).toEqual(original.body.revision.config);
@@ -72,7 +83,9 @@ describe('importing as a new robot', () => {
 
   it('reads config.json from a firmware bundle zip', async () => {
     const s = await makeTeamScenario(ctx);
-    const response = await importRobot(s, await bundle(JSON.stringify(robotConfigInput())), 'test_rover-r4.zip', { name: 'Bench Copy' });
+    const response = await importRobot(s, await bundle(JSON.stringify(robotConfigInput())), 'test_rover-r4.zip', {
+      name: 'Bench Copy',
+    });
     expect(response.status).toBe(201);
     expect(response.body.notes[0]).toBe('Read config.json from the firmware bundle.');
     expect(response.body.robot.name).toBe('Bench Copy');
@@ -80,7 +93,10 @@ describe('importing as a new robot', () => {
 
   it('reads config.json from a bundle someone zipped again inside a folder', async () => {
     const s = await makeTeamScenario(ctx);
-    const zip = await zipOf({ 'download/config.json': JSON.stringify(robotConfigInput()), 'download/README.md': '#\n' });
+    const zip = await zipOf({
+      'download/config.json': JSON.stringify(robotConfigInput()),
+      'download/README.md': '#\n',
+    });
     expect((await importRobot(s, zip, 'download.zip')).status).toBe(201);
   });
 
@@ -120,7 +136,11 @@ describe('importing as a new robot', () => {
 
   it('refuses a file from a newer Mixwright at schemaVersion', async () => {
     const s = await makeTeamScenario(ctx);
-    const response = await importRobot(s, Buffer.from(JSON.stringify({ ...robotConfigInput(), schemaVersion: 9 })), 'future.json');
+    const response = await importRobot(
+      s,
+      Buffer.from(JSON.stringify({ ...robotConfigInput(), schemaVersion: 9 })),
+      'future.json',
+    );
     expect(response.body.error.fields['config.schemaVersion']).toMatch(/made by a newer Mixwright/);
   });
 
@@ -131,7 +151,11 @@ describe('importing as a new robot', () => {
 
   it('asks for a file when none came', async () => {
     const s = await makeTeamScenario(ctx);
-    const response = await (await clientAs(ctx, s.editor.id)).post(`/api/teams/${s.team.id}/robots/import`).field('name', 'x');
+    const response = await (
+      await clientAs(ctx, s.editor.id)
+    )
+      .post(`/api/teams/${s.team.id}/robots/import`)
+      .field('name', 'x');
     expect(response.status).toBe(400);
     expect(response.body.error.fields.file).toBe('Choose a configuration file or bundle zip to upload');
   });
@@ -158,7 +182,12 @@ describe('zip archives that are refused before anything is read', () => {
   it('refuses a path that climbs out with ../', async () => {
     const s = await makeTeamScenario(ctx);
     const zip = await bundle(config(), { '../../etc/cron.d/job': '* * * * * root true\n' });
-    await expectRefused(s, zip, 'evil.zip', /unsafe path: "..\/..\/etc\/cron.d\/job" climbs out of the archive with \.\./);
+    await expectRefused(
+      s,
+      zip,
+      'evil.zip',
+      /unsafe path: "..\/..\/etc\/cron.d\/job" climbs out of the archive with \.\./,
+    );
   });
 
   it('refuses an absolute path', async () => {
@@ -180,14 +209,23 @@ describe('zip archives that are refused before anything is read', () => {
 
   it('refuses a zip that lies about its size, by counting what it inflates', async () => {
     const s = await makeTeamScenario(ctx);
-    const zip = withDeclaredSize(await bundle(config(), { 'padding.bin': Buffer.alloc(5 * 1024 * 1024) }), 'padding.bin', 10);
+    const zip = withDeclaredSize(
+      await bundle(config(), { 'padding.bin': Buffer.alloc(5 * 1024 * 1024) }),
+      'padding.bin',
+      10,
+    );
     await expectRefused(s, zip, 'liar.zip', /The zip unpacks to more than 4 MB/);
   });
 
   it('refuses a zip with too many entries', async () => {
     const s = await makeTeamScenario(ctx);
     const many = Object.fromEntries(Array.from({ length: 120 }, (_, i) => [`parts/${i}.txt`, 'x']));
-    await expectRefused(s, await bundle(config(), many), 'many.zip', /The zip holds 125 entries; at most 100 are accepted/);
+    await expectRefused(
+      s,
+      await bundle(config(), many),
+      'many.zip',
+      /The zip holds 125 entries; at most 100 are accepted/,
+    );
   });
 
   it('refuses a zip without config.json', async () => {
@@ -215,14 +253,22 @@ describe('importing as a new revision', () => {
     expect(response.body).toMatchObject({ robotId: s.robot.id, revision: 2, fromVersion: 1 });
     expect(response.body.notes).toContain(`The file's robot name “Greenhouse Cart” became “${s.robot.name}”.`);
     const stored = await editor.get(`/api/robots/${s.robot.id}/revisions/2`);
-    expect(stored.body.revision).toMatchObject({ message: 'From the workshop laptop', config: { name: s.robot.name, wiring: { board: 'nano' } } });
-    expect(listTeamEvents(ctx.db, s.team.id, 1)[0]).toMatchObject({ action: 'revision.imported', detail: { number: 2, file: 'greenhouse_cart-r7.json' } });
+    expect(stored.body.revision).toMatchObject({
+      message: 'From the workshop laptop',
+      config: { name: s.robot.name, wiring: { board: 'nano' } },
+    });
+    expect(listTeamEvents(ctx.db, s.team.id, 1)[0]).toMatchObject({
+      action: 'revision.imported',
+      detail: { number: 2, file: 'greenhouse_cart-r7.json' },
+    });
   });
 
   it('answers 409 with the head and the imported draft when the head moved, writing nothing', async () => {
     const s = await makeTeamScenario(ctx);
     const editor = await clientAs(ctx, s.editor.id);
-    await editor.post(`/api/robots/${s.robot.id}/revisions`).send({ baseRevision: 1, message: 'Meanwhile', config: robotConfigInput() });
+    await editor
+      .post(`/api/robots/${s.robot.id}/revisions`)
+      .send({ baseRevision: 1, message: 'Meanwhile', config: robotConfigInput() });
     const before = rowCounts(ctx);
     const response = await editor
       .post(`/api/robots/${s.robot.id}/revisions/import`)
@@ -237,7 +283,9 @@ describe('importing as a new revision', () => {
   it('is refused to a viewer, and writes nothing', async () => {
     const s = await makeTeamScenario(ctx);
     const before = rowCounts(ctx);
-    const response = await (await clientAs(ctx, s.viewer.id))
+    const response = await (
+      await clientAs(ctx, s.viewer.id)
+    )
       .post(`/api/robots/${s.robot.id}/revisions/import`)
       .field('baseRevision', '1')
       .attach('file', v1File('greenhouse-cart.json'), 'gc.json');

@@ -19,7 +19,11 @@ describe('inviting', () => {
   it('mails a one-time link and stores only its hash', async () => {
     const s = await makeTeamScenario(ctx);
     const email = uniqueEmail('guest');
-    const response = await (await clientAs(ctx, s.owner.id)).post(`/api/teams/${s.team.id}/invitations`).send({ email, role: 'editor' });
+    const response = await (
+      await clientAs(ctx, s.owner.id)
+    )
+      .post(`/api/teams/${s.team.id}/invitations`)
+      .send({ email, role: 'editor' });
     expect(response.status).toBe(201);
     const mail = ctx.smtp.mailbox.latestTo(email)!;
     expect(mail.subject).toBe(`Owner invited you to ${s.team.name} on Mixwright`);
@@ -33,14 +37,22 @@ describe('inviting', () => {
     const s = await makeTeamScenario(ctx);
     const email = uniqueEmail();
     const before = Date.now();
-    const response = await (await clientAs(ctx, s.owner.id)).post(`/api/teams/${s.team.id}/invitations`).send({ email, role: 'viewer' });
+    const response = await (
+      await clientAs(ctx, s.owner.id)
+    )
+      .post(`/api/teams/${s.team.id}/invitations`)
+      .send({ email, role: 'viewer' });
     const days = (new Date(response.body.invitation.expiresAt).getTime() - before) / 86_400_000;
     expect(days).toBeCloseTo(7, 2);
   });
 
   it('refuses to invite someone who is already a member', async () => {
     const s = await makeTeamScenario(ctx);
-    const response = await (await clientAs(ctx, s.owner.id)).post(`/api/teams/${s.team.id}/invitations`).send({ email: s.editor.email, role: 'viewer' });
+    const response = await (
+      await clientAs(ctx, s.owner.id)
+    )
+      .post(`/api/teams/${s.team.id}/invitations`)
+      .send({ email: s.editor.email, role: 'viewer' });
     expect(response.status).toBe(409);
     expect(response.body.error.fields.email).toBe('Already a member of this team');
   });
@@ -54,7 +66,9 @@ describe('inviting', () => {
     await owner.post(`/api/teams/${s.team.id}/invitations`).send({ email, role: 'editor' });
     expect((await client(ctx).get(`/api/invitations/${first}`)).status).toBe(410);
     const open = await owner.get(`/api/teams/${s.team.id}/invitations`);
-    expect(open.body.invitations.filter((i: { email: string }) => i.email === email)).toEqual([expect.objectContaining({ role: 'editor' })]);
+    expect(open.body.invitations.filter((i: { email: string }) => i.email === email)).toEqual([
+      expect.objectContaining({ role: 'editor' }),
+    ]);
   });
 });
 
@@ -62,7 +76,12 @@ describe('accepting', () => {
   it('shows anyone with the link whom it is for', async () => {
     const s = await makeTeamScenario(ctx);
     const response = await client(ctx).get(`/api/invitations/${s.invitation.token}`);
-    expect(response.body.invitation).toMatchObject({ teamName: s.team.name, email: s.invitation.email, role: 'viewer', invitedByName: 'Owner' });
+    expect(response.body.invitation).toMatchObject({
+      teamName: s.team.name,
+      email: s.invitation.email,
+      role: 'viewer',
+      invitedByName: 'Owner',
+    });
   });
 
   it('adds the invited person with the invited role', async () => {
@@ -93,7 +112,11 @@ describe('accepting', () => {
 
   it('refuses an expired invitation', async () => {
     const s = await makeTeamScenario(ctx);
-    const invitation = makeInvitation(ctx, { teamId: s.team.id, invitedBy: s.owner, expiresAt: new Date(Date.now() - 1000) });
+    const invitation = makeInvitation(ctx, {
+      teamId: s.team.id,
+      invitedBy: s.owner,
+      expiresAt: new Date(Date.now() - 1000),
+    });
     const invitee = await makeUser(ctx, { email: invitation.email });
     const response = await (await clientAs(ctx, invitee.id)).post(`/api/invitations/${invitation.token}/accept`);
     expect(response.status).toBe(410);

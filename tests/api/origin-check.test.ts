@@ -19,7 +19,10 @@ describe('the origin check', () => {
   });
 
   it('refuses a request from another site', async () => {
-    const response = await request(ctx.app).post('/api/auth/sign-up').set('Origin', 'https://elsewhere.example').send(body());
+    const response = await request(ctx.app)
+      .post('/api/auth/sign-up')
+      .set('Origin', 'https://elsewhere.example')
+      .send(body());
     expect(response.status).toBe(403);
   });
 

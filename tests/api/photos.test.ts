@@ -48,7 +48,12 @@ describe('robot photos', () => {
   it('serves the photo to every member with its type', async () => {
     const s = await makeTeamScenario(ctx);
     await upload(s, pngImage(3), 'p.png');
-    const response = await (await clientAs(ctx, s.viewer.id)).get(`/api/robots/${s.robot.id}/photo`).buffer(true).parse(binary as never);
+    const response = await (
+      await clientAs(ctx, s.viewer.id)
+    )
+      .get(`/api/robots/${s.robot.id}/photo`)
+      .buffer(true)
+      .parse(binary as never);
     expect(response.status).toBe(200);
     expect(response.headers['content-type']).toBe('image/png');
     expect(response.headers['cache-control']).toBe('private, max-age=300');
@@ -69,7 +74,9 @@ describe('robot photos', () => {
     const [before, files] = [rowCounts(ctx), storedFiles()];
     const response = await upload(s, gifImage(), 'robot.png');
     expect(response.status).toBe(415);
-    expect(response.body.error.fields.photo).toBe('The photo must be a JPEG, PNG or WebP image; this file is a GIF file');
+    expect(response.body.error.fields.photo).toBe(
+      'The photo must be a JPEG, PNG or WebP image; this file is a GIF file',
+    );
     expect(rowCounts(ctx)).toEqual(before);
     expect(storedFiles()).toEqual(files);
   });

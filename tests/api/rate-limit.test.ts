@@ -5,7 +5,11 @@ import { client, createTestContext, type TestContext } from './support/test-app'
 let ctx: TestContext;
 beforeAll(async () => {
   ctx = await createTestContext({
-    rateLimits: { signIn: { windowMs: 60_000, limit: 3 }, passwordReset: { windowMs: 60_000, limit: 2 }, signUp: { windowMs: 60_000, limit: 2 } },
+    rateLimits: {
+      signIn: { windowMs: 60_000, limit: 3 },
+      passwordReset: { windowMs: 60_000, limit: 2 },
+      signUp: { windowMs: 60_000, limit: 2 },
+    },
   });
 });
 afterAll(() => ctx.close());
@@ -14,11 +18,16 @@ describe('rate limits', () => {
   it('stops sign-in attempts on one account after the limit, even with the right password', async () => {
     const user = await makeUser(ctx);
     for (let i = 0; i < 3; i += 1) {
-      expect((await client(ctx).post('/api/auth/sign-in').send({ email: user.email, password: 'wrong guess' })).status).toBe(401);
+      expect(
+        (await client(ctx).post('/api/auth/sign-in').send({ email: user.email, password: 'wrong guess' })).status,
+      ).toBe(401);
     }
     const blocked = await client(ctx).post('/api/auth/sign-in').send({ email: user.email, password: user.password });
     expect(blocked.status).toBe(429);
-    expect(blocked.body.error).toMatchObject({ code: 'rate_limited', message: expect.stringContaining('try again in 1 minute') });
+    expect(blocked.body.error).toMatchObject({
+      code: 'rate_limited',
+      message: expect.stringContaining('try again in 1 minute'),
+    });
     expect(blocked.headers['ratelimit-policy']).toBeDefined();
   });
 
@@ -39,14 +48,26 @@ describe('rate limits', () => {
   it('stops sign-ups from one address after the limit, so taken e-mails cannot be probed at speed', async () => {
     const statuses: number[] = [];
     for (let i = 0; i < 3; i += 1) {
-      statuses.push((await client(ctx).post('/api/auth/sign-up').send({ email: uniqueEmail(), name: 'New Builder', password: 'a long enough password' })).status);
+      statuses.push(
+        (
+          await client(ctx)
+            .post('/api/auth/sign-up')
+            .send({ email: uniqueEmail(), name: 'New Builder', password: 'a long enough password' })
+        ).status,
+      );
     }
     expect(statuses).toEqual([201, 201, 429]);
   });
 });
 
 describe('rate limits behind a reverse proxy', () => {
-  const tightLimits = { rateLimits: { signIn: { windowMs: 60_000, limit: 3 }, passwordReset: { windowMs: 60_000, limit: 1 }, signUp: { windowMs: 60_000, limit: 1 } } };
+  const tightLimits = {
+    rateLimits: {
+      signIn: { windowMs: 60_000, limit: 3 },
+      passwordReset: { windowMs: 60_000, limit: 1 },
+      signUp: { windowMs: 60_000, limit: 1 },
+    },
+  };
   const resetFrom = (app: TestContext, address: string) =>
     client(app).post('/api/auth/password-reset').set('X-Forwarded-For', address).send({ email: uniqueEmail() });
 

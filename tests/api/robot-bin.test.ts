@@ -44,7 +44,14 @@ describe('deleting a robot', () => {
     await owner.delete(`/api/robots/${s.robot.id}`);
     const bin = await owner.get(`/api/teams/${s.team.id}/robot-bin`);
     expect(bin.body.robots).toEqual([
-      { id: s.robot.id, name: s.robot.name, headRevision: 1, deletedAt: expect.any(String), deletedByName: 'Owner', restorableUntil: expect.any(String) },
+      {
+        id: s.robot.id,
+        name: s.robot.name,
+        headRevision: 1,
+        deletedAt: expect.any(String),
+        deletedByName: 'Owner',
+        restorableUntil: expect.any(String),
+      },
     ]);
     const { deletedAt, restorableUntil } = bin.body.robots[0];
     expect(new Date(restorableUntil).getTime() - new Date(deletedAt).getTime()).toBe(30 * DAY);
@@ -65,7 +72,9 @@ describe('restoring a deleted robot', () => {
     const restored = await binAndRestore(s);
     expect(restored.status).toBe(200);
     expect(restored.body.robot).toMatchObject({ id: s.robot.id, headRevision: 1 });
-    expect((await owner.get(`/api/teams/${s.team.id}/robots`)).body.robots.map((r: { id: string }) => r.id)).toEqual([s.robot.id]);
+    expect((await owner.get(`/api/teams/${s.team.id}/robots`)).body.robots.map((r: { id: string }) => r.id)).toEqual([
+      s.robot.id,
+    ]);
     expect((await owner.get(`/api/teams/${s.team.id}/robot-bin`)).body.robots).toEqual([]);
     expect(listTeamEvents(ctx.db, s.team.id, 1)[0]).toMatchObject({ action: 'robot.restored' });
   });
@@ -77,7 +86,9 @@ describe('restoring a deleted robot', () => {
     const before = rowCounts(ctx);
     const refused = await binAndRestore(s);
     expect(refused.status).toBe(410);
-    expect(refused.body.error.message).toBe(`${s.robot.name} was deleted more than 30 days ago and can no longer be restored`);
+    expect(refused.body.error.message).toBe(
+      `${s.robot.name} was deleted more than 30 days ago and can no longer be restored`,
+    );
     expect(rowCounts(ctx)).toEqual(before);
     expect((await (await clientAs(ctx, s.owner.id)).get(`/api/teams/${s.team.id}/robot-bin`)).body.robots).toEqual([]);
   });
@@ -91,7 +102,9 @@ describe('restoring a deleted robot', () => {
     const s = await makeTeamScenario(ctx);
     const other = await makeTeamScenario(ctx);
     await (await clientAs(ctx, other.owner.id)).delete(`/api/robots/${other.robot.id}`);
-    const response = await (await clientAs(ctx, s.owner.id)).post(`/api/teams/${s.team.id}/robot-bin/${other.robot.id}/restore`);
+    const response = await (
+      await clientAs(ctx, s.owner.id)
+    ).post(`/api/teams/${s.team.id}/robot-bin/${other.robot.id}/restore`);
     expect(response.status).toBe(404);
   });
 });
@@ -107,8 +120,14 @@ describe('emptying the bin', () => {
     const s = await makeTeamScenario(ctx);
     const owner = await clientAs(ctx, s.owner.id);
     expect((await owner.put(`/api/robots/${s.robot.id}/photo`).attach('photo', pngImage(), 'p.png')).status).toBe(200);
-    expect((await owner.post(`/api/robots/${s.robot.id}/flashes`).send({ revision: 1, note: 'bench' })).status).toBe(201);
-    const photo = (ctx.database.sqlite.prepare('select file_name as f from robot_photos where robot_id = ?').get(s.robot.id) as { f: string }).f;
+    expect((await owner.post(`/api/robots/${s.robot.id}/flashes`).send({ revision: 1, note: 'bench' })).status).toBe(
+      201,
+    );
+    const photo = (
+      ctx.database.sqlite.prepare('select file_name as f from robot_photos where robot_id = ?').get(s.robot.id) as {
+        f: string;
+      }
+    ).f;
     await owner.delete(`/api/robots/${s.robot.id}`);
     deletedDaysAgo(s, 31);
 
@@ -118,7 +137,11 @@ describe('emptying the bin', () => {
     expect(count('select count(*) as n from revisions where robot_id = ?', s.robot.id)).toBe(0);
     expect(count('select count(*) as n from flashes where robot_id = ?', s.robot.id)).toBe(0);
     expect(photoFiles()).not.toContain(photo);
-    expect(listTeamEvents(ctx.db, s.team.id, 1)[0]).toMatchObject({ action: 'robot.purged', actorName: null, detail: { name: s.robot.name } });
+    expect(listTeamEvents(ctx.db, s.team.id, 1)[0]).toMatchObject({
+      action: 'robot.purged',
+      actorName: null,
+      detail: { name: s.robot.name },
+    });
   });
 
   it('keeps a robot still within its 30 days, and every robot not deleted', async () => {

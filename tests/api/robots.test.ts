@@ -17,7 +17,9 @@ describe('creating robots', () => {
   it('stores the configuration as revision 1 and fills in defaults', async () => {
     const s = await makeTeamScenario(ctx);
     const editor = await clientAs(ctx, s.editor.id);
-    const created = await editor.post(`/api/teams/${s.team.id}/robots`).send({ name: 'Porch Runner', config: robotConfigInput() });
+    const created = await editor
+      .post(`/api/teams/${s.team.id}/robots`)
+      .send({ name: 'Porch Runner', config: robotConfigInput() });
     expect(created.status).toBe(201);
     expect(created.body.robot).toMatchObject({ name: 'Porch Runner', headRevision: 1, lastFlash: null });
     const detail = await editor.get(`/api/robots/${created.body.robot.id}`);
@@ -32,7 +34,11 @@ describe('creating robots', () => {
     const config = robotConfigInput();
     config.chassis.wheels[1].radiusMm = -4;
     config.chassis.wheels[0].motor = 'Nobody';
-    const response = await (await clientAs(ctx, s.editor.id)).post(`/api/teams/${s.team.id}/robots`).send({ name: 'Broken', config });
+    const response = await (
+      await clientAs(ctx, s.editor.id)
+    )
+      .post(`/api/teams/${s.team.id}/robots`)
+      .send({ name: 'Broken', config });
     expect(response.status).toBe(400);
     expect(response.body.error.fields).toMatchObject({
       'config.chassis.wheels.1.radiusMm': 'Radius must be more than 0 mm',
@@ -43,7 +49,11 @@ describe('creating robots', () => {
     const s = await makeTeamScenario(ctx);
     const config = robotConfigInput();
     config.chassis.wheels[0].motor = 'Nobody';
-    const response = await (await clientAs(ctx, s.editor.id)).post(`/api/teams/${s.team.id}/robots`).send({ name: 'Broken', config });
+    const response = await (
+      await clientAs(ctx, s.editor.id)
+    )
+      .post(`/api/teams/${s.team.id}/robots`)
+      .send({ name: 'Broken', config });
     expect(response.body.error.fields['config.chassis.wheels.0.motor']).toBe('No motor is named "Nobody"');
   });
 });
@@ -53,7 +63,9 @@ describe('revisions', () => {
     const s = await makeTeamScenario(ctx);
     const editor = await clientAs(ctx, s.editor.id);
     const config = { ...robotConfigInput(), safety: { failsafeTimeoutMs: 150 } };
-    const saved = await editor.post(`/api/robots/${s.robot.id}/revisions`).send({ baseRevision: 1, message: 'Shorter failsafe', config });
+    const saved = await editor
+      .post(`/api/robots/${s.robot.id}/revisions`)
+      .send({ baseRevision: 1, message: 'Shorter failsafe', config });
     expect(saved.status).toBe(201);
     expect(saved.body.revision).toMatchObject({ number: 2, message: 'Shorter failsafe', authorName: 'Editor' });
     const list = await editor.get(`/api/robots/${s.robot.id}/revisions`);
@@ -67,10 +79,17 @@ describe('revisions', () => {
     const s = await makeTeamScenario(ctx);
     const editor = await clientAs(ctx, s.editor.id);
     const owner = await clientAs(ctx, s.owner.id);
-    await owner.post(`/api/robots/${s.robot.id}/revisions`).send({ baseRevision: 1, message: 'Owner was first', config: robotConfigInput() });
-    const late = await editor.post(`/api/robots/${s.robot.id}/revisions`).send({ baseRevision: 1, message: 'Editor was second', config: robotConfigInput() });
+    await owner
+      .post(`/api/robots/${s.robot.id}/revisions`)
+      .send({ baseRevision: 1, message: 'Owner was first', config: robotConfigInput() });
+    const late = await editor
+      .post(`/api/robots/${s.robot.id}/revisions`)
+      .send({ baseRevision: 1, message: 'Editor was second', config: robotConfigInput() });
     expect(late.status).toBe(409);
-    expect(late.body.error).toMatchObject({ code: 'revision_conflict', head: { number: 2, message: 'Owner was first', authorName: 'Owner' } });
+    expect(late.body.error).toMatchObject({
+      code: 'revision_conflict',
+      head: { number: 2, message: 'Owner was first', authorName: 'Owner' },
+    });
     expect((await editor.get(`/api/robots/${s.robot.id}/revisions`)).body.revisions).toHaveLength(2);
   });
 
@@ -140,10 +159,17 @@ describe('the team robot list', () => {
   it('follows the head revision when a new one is saved', async () => {
     const s = await makeTeamScenario(ctx);
     const editor = await clientAs(ctx, s.editor.id);
-    const starter = buildStarterConfig({ layout: 'trio-omni', board: 'nano', input: 'ppm', driver: 'pwm-in1-in2-stby' });
+    const starter = buildStarterConfig({
+      layout: 'trio-omni',
+      board: 'nano',
+      input: 'ppm',
+      driver: 'pwm-in1-in2-stby',
+    });
     const placed = assignPins(starter);
     if (!placed.ok) throw new Error(placed.reason);
-    await editor.post(`/api/robots/${s.robot.id}/revisions`).send({ baseRevision: 1, message: 'Trio on a Nano', config: placed.config });
+    await editor
+      .post(`/api/robots/${s.robot.id}/revisions`)
+      .send({ baseRevision: 1, message: 'Trio on a Nano', config: placed.config });
     const response = await editor.get(`/api/teams/${s.team.id}/robots`);
     const expected = robotProblems(placed.config);
     expect(response.body.robots[0]).toMatchObject({
@@ -156,7 +182,9 @@ describe('the team robot list', () => {
 
   it('lists a robot whose head cannot be read without layout, board or counts', async () => {
     const s = await makeTeamScenario(ctx);
-    ctx.database.sqlite.prepare('update revisions set config = ? where robot_id = ?').run('{"schemaVersion":99}', s.robot.id);
+    ctx.database.sqlite
+      .prepare('update revisions set config = ? where robot_id = ?')
+      .run('{"schemaVersion":99}', s.robot.id);
     const response = await (await clientAs(ctx, s.owner.id)).get(`/api/teams/${s.team.id}/robots`);
     expect(response.body.robots[0]).toMatchObject({ id: s.robot.id, layout: null, board: null, problems: null });
   });

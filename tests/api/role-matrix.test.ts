@@ -19,7 +19,9 @@ async function send(route: string, req: RouteRequest, userId: string | null): Pr
     for (const [name, value] of Object.entries(fields)) upload = upload.field(name, value);
     return (await upload.attach(field, data, fileName)).status;
   }
-  const response = await (req.body === undefined ? agent[method](req.path) : agent[method](req.path).send(req.body as object));
+  const response = await (req.body === undefined
+    ? agent[method](req.path)
+    : agent[method](req.path).send(req.body as object));
   return response.status;
 }
 

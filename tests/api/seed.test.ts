@@ -1,5 +1,11 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_TEAM_NAME, describeSeededAccounts, isDatabaseEmpty, seedDemo, type SeededAccount } from '@server/db/seed/seed-demo';
+import {
+  DEMO_TEAM_NAME,
+  describeSeededAccounts,
+  isDatabaseEmpty,
+  seedDemo,
+  type SeededAccount,
+} from '@server/db/seed/seed-demo';
 import { RobotConfigSchema } from '@shared/schemas/robot-config';
 import { client, createTestContext, type TestContext } from './support/test-app';
 
@@ -27,14 +33,21 @@ describe('the demo seed', () => {
     for (const account of accounts) expect(account.email).toMatch(/@larkspur-makers\.example$/);
     const viewer = await signInAs('viewer');
     const teams = await viewer.get('/api/teams');
-    expect(teams.body.teams).toEqual([expect.objectContaining({ name: DEMO_TEAM_NAME, role: 'viewer', memberCount: 3, robotCount: 4 })]);
+    expect(teams.body.teams).toEqual([
+      expect.objectContaining({ name: DEMO_TEAM_NAME, role: 'viewer', memberCount: 3, robotCount: 4 }),
+    ]);
   });
 
   it('gives every robot a few revisions that parse, and a flash log entry', async () => {
     const owner = await signInAs('owner');
     const teamId = (await owner.get('/api/teams')).body.teams[0].id;
     const robots = (await owner.get(`/api/teams/${teamId}/robots`)).body.robots;
-    expect(robots.map((r: { name: string }) => r.name)).toEqual(['Aisle Scout', 'Bench Kiwi', 'Garden Hauler', 'Greenhouse Cart']);
+    expect(robots.map((r: { name: string }) => r.name)).toEqual([
+      'Aisle Scout',
+      'Bench Kiwi',
+      'Garden Hauler',
+      'Greenhouse Cart',
+    ]);
     for (const robot of robots) {
       expect(robot.headRevision).toBeGreaterThanOrEqual(2);
       expect(robot.lastFlash).not.toBeNull();

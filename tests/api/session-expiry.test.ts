@@ -15,7 +15,10 @@ function setExpiry(sessionId: string, expiresAt: number): void {
 }
 
 function expiryOf(sessionId: string): number | undefined {
-  return (ctx.database.sqlite.prepare('select expires_at from sessions where id = ?').get(sessionId) as { expires_at: number } | undefined)?.expires_at;
+  return (
+    ctx.database.sqlite.prepare('select expires_at from sessions where id = ?').get(sessionId) as
+      { expires_at: number } | undefined
+  )?.expires_at;
 }
 
 describe('session expiry', () => {

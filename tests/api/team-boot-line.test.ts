@@ -48,8 +48,16 @@ describe('the team boot-line lookup', () => {
     const { s, robots } = await teamOfThree();
     const answer = await ask(s.viewer.id, s.team.id, bootLineOf(robots[1], 1));
     expect(answer.status).toBe(200);
-    expect(answer.body).toMatchObject({ robot: { id: robots[1].id, name: robots[1].name }, foundBy: 'hash', otherRobots: [] });
-    expect(answer.body.answer).toMatchObject({ match: { number: 1, isHead: false }, headRevision: 2, nameMatches: true });
+    expect(answer.body).toMatchObject({
+      robot: { id: robots[1].id, name: robots[1].name },
+      foundBy: 'hash',
+      otherRobots: [],
+    });
+    expect(answer.body.answer).toMatchObject({
+      match: { number: 1, isHead: false },
+      headRevision: 2,
+      nameMatches: true,
+    });
     expect(answer.body.answer.verdict).toBe('This robot runs revision 1; the head is revision 2.');
   });
 
@@ -73,9 +81,15 @@ describe('the team boot-line lookup', () => {
 
   it('falls back to the printed robot name when no revision has the hash', async () => {
     const { s, robots } = await teamOfThree();
-    const answer = await ask(s.viewer.id, s.team.id, `boot robot="${robots[1].name.toUpperCase()}" revision=4 hash=0123abcd`);
+    const answer = await ask(
+      s.viewer.id,
+      s.team.id,
+      `boot robot="${robots[1].name.toUpperCase()}" revision=4 hash=0123abcd`,
+    );
     expect(answer.body).toMatchObject({ robot: { id: robots[1].id }, foundBy: 'name', answer: { match: null } });
-    expect(answer.body.verdict).toBe(`No revision in this team has the configuration hash 0123abcd; by the printed name this is ${robots[1].name}.`);
+    expect(answer.body.verdict).toBe(
+      `No revision in this team has the configuration hash 0123abcd; by the printed name this is ${robots[1].name}.`,
+    );
   });
 
   it('does not find a robot of another team', async () => {

@@ -17,7 +17,9 @@ describe('teams', () => {
     expect(created.status).toBe(201);
     expect(created.body.team).toMatchObject({ name: 'Thursday Robotics', role: 'owner' });
     const list = await agent.get('/api/teams');
-    expect(list.body.teams).toEqual([expect.objectContaining({ name: 'Thursday Robotics', role: 'owner', memberCount: 1, robotCount: 0 })]);
+    expect(list.body.teams).toEqual([
+      expect.objectContaining({ name: 'Thursday Robotics', role: 'owner', memberCount: 1, robotCount: 0 }),
+    ]);
   });
 
   it('does not list teams the person is not in', async () => {
@@ -29,7 +31,9 @@ describe('teams', () => {
   it('lists members with their roles', async () => {
     const s = await makeTeamScenario(ctx);
     const response = await (await clientAs(ctx, s.viewer.id)).get(`/api/teams/${s.team.id}/members`);
-    const roles = Object.fromEntries(response.body.members.map((m: { name: string; role: string }) => [m.name, m.role]));
+    const roles = Object.fromEntries(
+      response.body.members.map((m: { name: string; role: string }) => [m.name, m.role]),
+    );
     expect(roles).toEqual({ Owner: 'owner', Editor: 'editor', Viewer: 'viewer', Spare: 'viewer' });
   });
 });
@@ -37,7 +41,11 @@ describe('teams', () => {
 describe('roles', () => {
   it('lets an owner change a role and records who changed what', async () => {
     const s = await makeTeamScenario(ctx);
-    const response = await (await clientAs(ctx, s.owner.id)).patch(`/api/teams/${s.team.id}/members/${s.viewer.id}`).send({ role: 'editor' });
+    const response = await (
+      await clientAs(ctx, s.owner.id)
+    )
+      .patch(`/api/teams/${s.team.id}/members/${s.viewer.id}`)
+      .send({ role: 'editor' });
     expect(response.status).toBe(200);
     expect(response.body.members.find((m: { userId: string }) => m.userId === s.viewer.id).role).toBe('editor');
     const event = listTeamEvents(ctx.db, s.team.id, 10).find((e) => e.action === 'member.role_changed');
@@ -46,7 +54,11 @@ describe('roles', () => {
 
   it('refuses to demote the last owner', async () => {
     const s = await makeTeamScenario(ctx);
-    const response = await (await clientAs(ctx, s.owner.id)).patch(`/api/teams/${s.team.id}/members/${s.owner.id}`).send({ role: 'viewer' });
+    const response = await (
+      await clientAs(ctx, s.owner.id)
+    )
+      .patch(`/api/teams/${s.team.id}/members/${s.owner.id}`)
+      .send({ role: 'viewer' });
     expect(response.status).toBe(409);
     expect(response.body.error.code).toBe('last_owner');
   });
@@ -61,14 +73,22 @@ describe('roles', () => {
 
   it('refuses an unknown role, naming the field', async () => {
     const s = await makeTeamScenario(ctx);
-    const response = await (await clientAs(ctx, s.owner.id)).patch(`/api/teams/${s.team.id}/members/${s.viewer.id}`).send({ role: 'admin' });
+    const response = await (
+      await clientAs(ctx, s.owner.id)
+    )
+      .patch(`/api/teams/${s.team.id}/members/${s.viewer.id}`)
+      .send({ role: 'admin' });
     expect(response.status).toBe(400);
     expect(response.body.error.fields.role).toBe('Choose owner, editor or viewer');
   });
 
   it('answers 404 for a person who is not a member', async () => {
     const s = await makeTeamScenario(ctx);
-    const response = await (await clientAs(ctx, s.owner.id)).patch(`/api/teams/${s.team.id}/members/${s.outsider.id}`).send({ role: 'editor' });
+    const response = await (
+      await clientAs(ctx, s.owner.id)
+    )
+      .patch(`/api/teams/${s.team.id}/members/${s.outsider.id}`)
+      .send({ role: 'editor' });
     expect(response.status).toBe(404);
   });
 });
@@ -76,14 +96,18 @@ describe('roles', () => {
 describe('removing members', () => {
   it('lets an owner remove a member, who then cannot see the team', async () => {
     const s = await makeTeamScenario(ctx);
-    expect((await (await clientAs(ctx, s.owner.id)).delete(`/api/teams/${s.team.id}/members/${s.editor.id}`)).status).toBe(204);
+    expect(
+      (await (await clientAs(ctx, s.owner.id)).delete(`/api/teams/${s.team.id}/members/${s.editor.id}`)).status,
+    ).toBe(204);
     expect((await (await clientAs(ctx, s.editor.id)).get(`/api/teams/${s.team.id}`)).status).toBe(404);
     expect(listTeamEvents(ctx.db, s.team.id, 10).map((e) => e.action)).toContain('member.removed');
   });
 
   it('lets any member leave', async () => {
     const s = await makeTeamScenario(ctx);
-    expect((await (await clientAs(ctx, s.viewer.id)).delete(`/api/teams/${s.team.id}/members/${s.viewer.id}`)).status).toBe(204);
+    expect(
+      (await (await clientAs(ctx, s.viewer.id)).delete(`/api/teams/${s.team.id}/members/${s.viewer.id}`)).status,
+    ).toBe(204);
   });
 
   it('does not let the last owner leave', async () => {

@@ -8,7 +8,16 @@ const { file } = useScratchDir('mixwright-cli-');
 
 describe('the engine commands', { timeout: 60_000 }, () => {
   it('prints a complete, valid starter configuration', async () => {
-    const out = await cli('starter', 'quad-mecanum', '--board', 'esp32-devkitc', '--input', 'sbus', '--driver', 'pwm-dir');
+    const out = await cli(
+      'starter',
+      'quad-mecanum',
+      '--board',
+      'esp32-devkitc',
+      '--input',
+      'sbus',
+      '--driver',
+      'pwm-dir',
+    );
     expect(out.code).toBe(0);
     const config = RobotConfigSchema.parse(JSON.parse(out.stdout));
     expect(config.wiring.board).toBe('esp32-devkitc');
@@ -70,7 +79,14 @@ describe('the engine commands', { timeout: 60_000 }, () => {
   });
 
   it('rejects a channel that is not in the table, naming the field', async () => {
-    const out = await cli('shape', await file('shape2.json', rawConfig('trio-omni')), '--channel', '9', '--raw', '1500');
+    const out = await cli(
+      'shape',
+      await file('shape2.json', rawConfig('trio-omni')),
+      '--channel',
+      '9',
+      '--raw',
+      '1500',
+    );
     expect(out.code).not.toBe(0);
     expect(out.stderr).toMatch(/controls\.channels/);
   });

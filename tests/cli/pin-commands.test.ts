@@ -12,15 +12,30 @@ const starter = buildStarterConfig;
 
 describe('the pin commands', { timeout: 60_000 }, () => {
   it('check lists the problems of a starter with no pins and exits 1', async () => {
-    const out = await cli('check', await file('empty.json', starter({ layout: 'differential', input: 'ppm', driver: 'pwm-dir' })));
+    const out = await cli(
+      'check',
+      await file('empty.json', starter({ layout: 'differential', input: 'ppm', driver: 'pwm-dir' })),
+    );
     expect(out.code).toBe(1);
     const { problems } = JSON.parse(out.stdout);
-    expect(problems[0]).toEqual({ severity: 'error', code: 'pin-missing', pins: [], message: 'Driver 1 A PWM has no pin.', hint: 'Pins that can: D9, D5, D6, D10, D11, D3.' });
+    expect(problems[0]).toEqual({
+      severity: 'error',
+      code: 'pin-missing',
+      pins: [],
+      message: 'Driver 1 A PWM has no pin.',
+      hint: 'Pins that can: D9, D5, D6, D10, D11, D3.',
+    });
     for (const p of problems) expect(Object.keys(p)).toEqual(['severity', 'code', 'pins', 'message', 'hint']);
   });
 
   it('assign fills every pin, and check then exits 0', async () => {
-    const out = await cli('assign', await file('to-assign.json', starter({ layout: 'quad-mecanum', board: 'mega2560', input: 'nrf24', driver: 'dual-pwm' })));
+    const out = await cli(
+      'assign',
+      await file(
+        'to-assign.json',
+        starter({ layout: 'quad-mecanum', board: 'mega2560', input: 'nrf24', driver: 'dual-pwm' }),
+      ),
+    );
     expect(out.code).toBe(0);
     const result = JSON.parse(out.stdout);
     expect(result.ok).toBe(true);
@@ -46,7 +61,10 @@ describe('the pin commands', { timeout: 60_000 }, () => {
   });
 
   it('assign explains an impossible layout and exits 1', async () => {
-    const out = await cli('assign', await file('impossible.json', starter({ layout: 'quad-mecanum', input: 'ppm', driver: 'dual-pwm' })));
+    const out = await cli(
+      'assign',
+      await file('impossible.json', starter({ layout: 'quad-mecanum', input: 'ppm', driver: 'dual-pwm' })),
+    );
     expect(out.code).toBe(1);
     expect(JSON.parse(out.stdout)).toEqual({ ok: false, reason: 'The Uno has 6 PWM pins, this layout needs 8.' });
   });

@@ -16,7 +16,10 @@ async function clippedLabels(page: Page): Promise<string[]> {
           const b = text.getBBox();
           return b.x < 0 || b.y < 0 || b.x + b.width > width || b.y + b.height > height;
         })
-        .map((text) => `${svg.querySelector('title')?.textContent}: ${[...text.querySelectorAll('tspan')].map((t) => t.textContent).join(' / ')}`);
+        .map(
+          (text) =>
+            `${svg.querySelector('title')?.textContent}: ${[...text.querySelectorAll('tspan')].map((t) => t.textContent).join(' / ')}`,
+        );
     }),
   );
 }
@@ -24,7 +27,13 @@ async function clippedLabels(page: Page): Promise<string[]> {
 describe('wheel labels in the drawings', () => {
   it('stay inside every drawing when the motors have long names of their own', async () => {
     const page = e2e.builder.page;
-    await signUpWithRobot(page, e2e.app.url, { name: 'Ines Marlow', email: 'ines.marlow@example.org', team: 'Weir Street Robotics', robot: 'Long Reach', layout: 'quad-mecanum' });
+    await signUpWithRobot(page, e2e.app.url, {
+      name: 'Ines Marlow',
+      email: 'ines.marlow@example.org',
+      team: 'Weir Street Robotics',
+      robot: 'Long Reach',
+      layout: 'quad-mecanum',
+    });
 
     for (const [i, wheel] of ['Front left', 'Front right', 'Rear right', 'Rear left'].entries()) {
       const name = page.getByLabel(`Name of motor ${wheel}`);
@@ -36,7 +45,10 @@ describe('wheel labels in the drawings', () => {
     expect(await page.locator('svg[data-scale]').count()).toBeGreaterThanOrEqual(2);
     expect(await clippedLabels(page)).toEqual([]);
 
-    await page.getByRole('navigation', { name: 'Robot sections' }).getByRole('link', { name: /Commissioning/ }).click();
+    await page
+      .getByRole('navigation', { name: 'Robot sections' })
+      .getByRole('link', { name: /Commissioning/ })
+      .click();
     await page.waitForURL(/\/commissioning$/);
     await page.locator('svg[data-scale]').first().waitFor();
     expect(await page.locator('svg[data-scale]').count()).toBeGreaterThanOrEqual(3);

@@ -8,7 +8,10 @@ import { useRunningApp } from './support/use-running-app';
 const e2e = useRunningApp({ builder: { width: 1366, height: 768 } });
 
 const section = (page: Page, name: string) =>
-  page.getByRole('navigation', { name: 'Robot sections' }).getByRole('link', { name: new RegExp(`^${name}`) }).click();
+  page
+    .getByRole('navigation', { name: 'Robot sections' })
+    .getByRole('link', { name: new RegExp(`^${name}`) })
+    .click();
 
 describe('from sign-up to a downloaded firmware bundle', () => {
   it('builds a robot from a starter layout, sets its sticks and pins, saves it and downloads its firmware', async () => {
@@ -61,7 +64,9 @@ describe('from sign-up to a downloaded firmware bundle', () => {
     expect(pinA).not.toBe('');
     await pwmB.selectOption(pinA);
     await expect.poll(() => pwmB.getAttribute('aria-invalid')).toBe('true');
-    const clash = page.getByRole('region', { name: /Wiring problems/ }).getByText(new RegExp(`^${pinA} is used for .*A PWM and .*B PWM`));
+    const clash = page
+      .getByRole('region', { name: /Wiring problems/ })
+      .getByText(new RegExp(`^${pinA} is used for .*A PWM and .*B PWM`));
     await clash.waitFor();
     await screenshot(page, 'flow-03-wiring-clash');
     await pwmB.selectOption(pinB);
@@ -99,7 +104,10 @@ describe('from sign-up to a downloaded firmware bundle', () => {
     await page.getByRole('meter', { name: 'Flash used' }).waitFor({ timeout: 120_000 });
     await screenshot(page, 'flow-08-firmware');
 
-    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Download revision 2 (.zip)' }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('link', { name: 'Download revision 2 (.zip)' }).click(),
+    ]);
     expect(download.suggestedFilename()).toBe('greenhouse-cart-r2.zip');
     const zip = await JSZip.loadAsync(await readFile((await download.path())!));
     expect(zip.file('greenhouse_cart/greenhouse_cart.ino')).not.toBeNull();

@@ -37,7 +37,9 @@ describe('inviting someone to a team', () => {
     const g = e2e.guest.page;
     await g.goto(`${e2e.app.url}/dev/mailbox`);
     const message = g.locator('article', { hasText: GUEST_EMAIL });
-    await message.getByRole('heading', { name: 'Orla Founder invited you to Hilltop Rover Club on Mixwright' }).waitFor();
+    await message
+      .getByRole('heading', { name: 'Orla Founder invited you to Hilltop Rover Club on Mixwright' })
+      .waitFor();
     await message.getByRole('link', { name: /\/invitations\// }).click();
     await g.getByRole('heading', { name: 'Join Hilltop Rover Club' }).waitFor();
     await screenshot(g, 'e2e-invitation');
@@ -52,7 +54,10 @@ describe('inviting someone to a team', () => {
     await g.getByRole('heading', { name: 'Hilltop Rover Club' }).waitFor();
     await g.getByText(/Your role\s*viewer/).waitFor();
     await g.getByRole('link', { name: 'People' }).click();
-    await g.getByRole('row', { name: /Wren Guest/ }).getByText('viewer', { exact: true }).waitFor();
+    await g
+      .getByRole('row', { name: /Wren Guest/ })
+      .getByText('viewer', { exact: true })
+      .waitFor();
     await expect(g.getByRole('button', { name: 'Send invitation' }).count()).resolves.toBe(0);
     await screenshot(g, 'e2e-guest-people');
 
@@ -60,7 +65,9 @@ describe('inviting someone to a team', () => {
     await page.reload();
     await expect(page.getByLabel('Role of Wren Guest').inputValue()).resolves.toBe('viewer');
 
-    const unexpected = [...e2e.founder.problems, ...e2e.guest.problems].filter((p) => !p.includes('401 (Unauthorized)'));
+    const unexpected = [...e2e.founder.problems, ...e2e.guest.problems].filter(
+      (p) => !p.includes('401 (Unauthorized)'),
+    );
     expect(unexpected).toEqual([]);
   });
 });

@@ -45,10 +45,15 @@ describe('building a robot in the editor', () => {
     const radius = page.getByLabel('Wheel radius');
     await radius.fill('48');
     await page.getByText('Unsaved changes on r1').waitFor();
-    await expect(page.getByRole('table', { name: 'Wheel table' }).getByRole('row').nth(1).textContent()).resolves.toContain('48');
+    await expect(
+      page.getByRole('table', { name: 'Wheel table' }).getByRole('row').nth(1).textContent(),
+    ).resolves.toContain('48');
 
     // Controls: a wider deadband on the forward stick and one more channel.
-    await page.getByRole('navigation', { name: 'Robot sections' }).getByRole('link', { name: /Controls/ }).click();
+    await page
+      .getByRole('navigation', { name: 'Robot sections' })
+      .getByRole('link', { name: /Controls/ })
+      .click();
     const forward = page.getByRole('region', { name: /^Forward/ });
     await forward.getByLabel('Deadband', { exact: true }).fill('7');
     await page.getByRole('button', { name: 'Add channel' }).click();
@@ -59,14 +64,25 @@ describe('building a robot in the editor', () => {
     // The draft survives a reload.
     await page.reload();
     await page.getByText('Unsaved changes on r1').waitFor();
-    await expect(page.getByRole('region', { name: /^Forward/ }).getByLabel('Deadband', { exact: true }).inputValue()).resolves.toBe('7');
+    await expect(
+      page
+        .getByRole('region', { name: /^Forward/ })
+        .getByLabel('Deadband', { exact: true })
+        .inputValue(),
+    ).resolves.toBe('7');
     await expect(page.getByLabel('Name of channel 3').inputValue()).resolves.toBe('Horn');
 
-    await page.getByRole('navigation', { name: 'Robot sections' }).getByRole('link', { name: /Safety/ }).click();
+    await page
+      .getByRole('navigation', { name: 'Robot sections' })
+      .getByRole('link', { name: /Safety/ })
+      .click();
     await page.getByRole('heading', { name: 'Power and protection advice' }).waitFor();
     await screenshot(page, 'editor-safety');
 
-    await page.getByRole('navigation', { name: 'Robot sections' }).getByRole('link', { name: /Commissioning/ }).click();
+    await page
+      .getByRole('navigation', { name: 'Robot sections' })
+      .getByRole('link', { name: /Commissioning/ })
+      .click();
     await page.getByText('bench motor 1/4 "Front left" forward').waitFor();
     await screenshot(page, 'editor-commissioning');
     // The wheels-up check: the second motor turned the wrong way; the rest were right.
@@ -80,11 +96,17 @@ describe('building a robot in the editor', () => {
     await page.getByRole('button', { name: 'Apply to the draft only' }).click();
     await page.getByText('Put into the draft: flipped Front right.').waitFor();
 
-    await page.getByRole('navigation', { name: 'Robot sections' }).getByRole('link', { name: /Wiring/ }).click();
+    await page
+      .getByRole('navigation', { name: 'Robot sections' })
+      .getByRole('link', { name: /Wiring/ })
+      .click();
     await page.getByRole('button', { name: 'Assign free pins' }).waitFor();
     await screenshot(page, 'editor-wiring');
 
-    await page.getByRole('navigation', { name: 'Robot sections' }).getByRole('link', { name: /All problems/ }).click();
+    await page
+      .getByRole('navigation', { name: 'Robot sections' })
+      .getByRole('link', { name: /All problems/ })
+      .click();
     await page.getByRole('heading', { name: 'All problems' }).waitFor();
     await screenshot(page, 'editor-problems');
 

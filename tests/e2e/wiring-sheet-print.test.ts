@@ -9,10 +9,19 @@ const pagesOf = (pdf: Buffer) => (pdf.toString('latin1').match(/\/Type\s*\/Page(
 describe('the printed wiring sheet', () => {
   it('fits a four-motor robot with two drivers on one page of A4 and one of Letter', async () => {
     const page = e2e.builder.page;
-    await signUpWithRobot(page, e2e.app.url, { name: 'Tova Brennan', email: 'tova.brennan@example.org', team: 'Lock Keepers', robot: 'Four Square', layout: 'skid-steer' });
+    await signUpWithRobot(page, e2e.app.url, {
+      name: 'Tova Brennan',
+      email: 'tova.brennan@example.org',
+      team: 'Lock Keepers',
+      robot: 'Four Square',
+      layout: 'skid-steer',
+    });
     const robotPath = new URL(page.url()).pathname.replace(/\/chassis$/, '');
     await page.goto(`${e2e.app.url}${robotPath}/wiring-sheet`);
-    await page.getByRole('table', { name: /Pins on the/ }).first().waitFor();
+    await page
+      .getByRole('table', { name: /Pins on the/ })
+      .first()
+      .waitFor();
     expect(await page.getByRole('row').count()).toBeGreaterThan(20);
     await page.emulateMedia({ media: 'print' });
     expect(pagesOf(await page.pdf({ format: 'A4' }))).toBe(1);

@@ -20,7 +20,10 @@ export function makeWheel(overrides: Partial<Wheel> = {}): Wheel {
 }
 
 /** A complete starter configuration for a layout. */
-export function makeConfig(layout: DriveLayoutId = 'quad-mecanum', change?: (config: RobotConfig) => void): RobotConfig {
+export function makeConfig(
+  layout: DriveLayoutId = 'quad-mecanum',
+  change?: (config: RobotConfig) => void,
+): RobotConfig {
   const config = buildStarterConfig({ layout });
   change?.(config);
   return config;

@@ -16,8 +16,10 @@ export function withDeclaredSize(zip: Buffer, entryName: string, size: number): 
   const name = Buffer.from(entryName, 'utf8');
   for (let at = 0; at + 46 <= out.length; at++) {
     const signature = out.readUInt32LE(at);
-    if (signature === 0x04034b50 && out.subarray(at + 30, at + 30 + name.length).equals(name)) out.writeUInt32LE(size, at + 22);
-    if (signature === 0x02014b50 && out.subarray(at + 46, at + 46 + name.length).equals(name)) out.writeUInt32LE(size, at + 24);
+    if (signature === 0x04034b50 && out.subarray(at + 30, at + 30 + name.length).equals(name))
+      out.writeUInt32LE(size, at + 22);
+    if (signature === 0x02014b50 && out.subarray(at + 46, at + 46 + name.length).equals(name))
+      out.writeUInt32LE(size, at + 24);
   }
   return out;
 }

@@ -44,7 +44,17 @@ function flags(target: AvrTarget): string[] {
 export function coreTimerTable(target: AvrTarget): string {
   const text = execFileSync(
     'avr-g++',
-    ['-E', '-P', `-mmcu=${target.mcu}`, '-DARDUINO_MAIN', '-x', 'c++', '-include', 'avr/io.h', `${AVR_CORE}/variants/${target.variant}/pins_arduino.h`],
+    [
+      '-E',
+      '-P',
+      `-mmcu=${target.mcu}`,
+      '-DARDUINO_MAIN',
+      '-x',
+      'c++',
+      '-include',
+      'avr/io.h',
+      `${AVR_CORE}/variants/${target.variant}/pins_arduino.h`,
+    ],
     { encoding: 'utf8' },
   ).replace(/\s+/g, ' ');
   const match = /digital_pin_to_timer_PGM\[\] = \{([^}]*)\}/.exec(text);
@@ -69,7 +79,10 @@ export function pinTableAsserts(board: BoardProfile, timerTable: string): string
       check(`${pin.id} == ${n}`, `${pin.id} is digital pin ${n}`);
       // The core maps only analog inputs that double as digital pins; A6/A7 give -1.
       const mapped = pin.digital ? n : -1;
-      check(`analogInputToDigitalPin(${pin.id.slice(1)}) == ${mapped}`, `analog input ${pin.id.slice(1)} maps to ${mapped}`);
+      check(
+        `analogInputToDigitalPin(${pin.id.slice(1)}) == ${mapped}`,
+        `analog input ${pin.id.slice(1)} maps to ${mapped}`,
+      );
     }
     if (!pin.digital) {
       check(`${pin.code} >= NUM_DIGITAL_PINS`, `${pin.id} is not a digital pin`);
@@ -81,13 +94,24 @@ export function pinTableAsserts(board: BoardProfile, timerTable: string): string
     check(`coreTimers[${n}] == ${timer}`, `${pin.id} is on ${timer}`);
     const interrupt = pin.externalInterrupt ?? 'NOT_AN_INTERRUPT';
     check(`digitalPinToInterrupt(${n}) == ${interrupt}`, `${pin.id} external interrupt ${interrupt}`);
-    check(`${pin.pinChange ? '' : '!'}(digitalPinToPCICR(${n}) != 0)`, `${pin.id} ${pin.pinChange ? 'has' : 'has no'} pin-change interrupt`);
+    check(
+      `${pin.pinChange ? '' : '!'}(digitalPinToPCICR(${n}) != 0)`,
+      `${pin.id} ${pin.pinChange ? 'has' : 'has no'} pin-change interrupt`,
+    );
   }
   const spi = board.spi;
-  for (const [macro, id] of [['SS', spi.ss], ['MOSI', spi.mosi], ['MISO', spi.miso], ['SCK', spi.sck], ['SDA', board.i2c.sda], ['SCL', board.i2c.scl]]) {
+  for (const [macro, id] of [
+    ['SS', spi.ss],
+    ['MOSI', spi.mosi],
+    ['MISO', spi.miso],
+    ['SCK', spi.sck],
+    ['SDA', board.i2c.sda],
+    ['SCL', board.i2c.scl],
+  ]) {
     check(`${macro} == ${digitalNumber(board, id)}`, `${macro} is ${id}`);
   }
-  for (const pin of board.pins.filter((p) => p.spi)) check(`${pin.spi!.toUpperCase()} == ${digitalNumber(board, pin.id)}`, `${pin.id} is ${pin.spi}`);
+  for (const pin of board.pins.filter((p) => p.spi))
+    check(`${pin.spi!.toUpperCase()} == ${digitalNumber(board, pin.id)}`, `${pin.id} is ${pin.spi}`);
   const led = board.pins.find((p) => p.builtinLed);
   if (led) check(`LED_BUILTIN == ${digitalNumber(board, led.id)}`, `LED_BUILTIN is ${led.id}`);
   return `${lines.join('\n')}\n`;

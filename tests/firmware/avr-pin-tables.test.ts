@@ -20,7 +20,10 @@ describe.each(['uno', 'nano', 'mega2560'] as const)('the %s profile', (id) => {
 describe('the pin-table check', () => {
   it('fails when a table claims PWM on a pin the core has none on', () => {
     const uno = getBoard('uno');
-    const wrong: BoardProfile = { ...uno, pins: uno.pins.map((p) => (p.id === 'D4' ? { ...p, pwm: { timer: 0, channel: 'B' as const } } : p)) };
+    const wrong: BoardProfile = {
+      ...uno,
+      pins: uno.pins.map((p) => (p.id === 'D4' ? { ...p, pwm: { timer: 0, channel: 'B' as const } } : p)),
+    };
     const result = compileAsserts(AVR_TARGETS.uno, pinTableAsserts(wrong, coreTimerTable(AVR_TARGETS.uno)));
     expect(result.ok).toBe(false);
     expect(result.output).toContain('uno: D4 has PWM');
@@ -28,7 +31,10 @@ describe('the pin-table check', () => {
 
   it('fails when a table moves an external interrupt', () => {
     const mega = getBoard('mega2560');
-    const wrong: BoardProfile = { ...mega, pins: mega.pins.map((p) => (p.id === 'D18' ? { ...p, externalInterrupt: 4 } : p)) };
+    const wrong: BoardProfile = {
+      ...mega,
+      pins: mega.pins.map((p) => (p.id === 'D18' ? { ...p, externalInterrupt: 4 } : p)),
+    };
     const result = compileAsserts(AVR_TARGETS.mega2560, pinTableAsserts(wrong, coreTimerTable(AVR_TARGETS.mega2560)));
     expect(result.ok).toBe(false);
     expect(result.output).toContain('mega2560: D18 external interrupt 4');
@@ -36,6 +42,10 @@ describe('the pin-table check', () => {
 
   it('reads the core timer table for the ATmega328P branch', () => {
     // variants/standard: pin 3 is TIMER2B except on the ATmega8.
-    expect(coreTimerTable(AVR_TARGETS.uno).split(',').map((s) => s.trim())[3]).toBe('TIMER2B');
+    expect(
+      coreTimerTable(AVR_TARGETS.uno)
+        .split(',')
+        .map((s) => s.trim())[3],
+    ).toBe('TIMER2B');
   });
 });

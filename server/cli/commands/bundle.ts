@@ -52,6 +52,12 @@ export async function run(args: string[]): Promise<number> {
   }
   if (dir) await writeFolder(resolve(dir), files);
   const verify = values.verify ? await verifyBundle(files) : undefined;
-  printJson({ revision, files: files.map((f) => f.path), ...(out ? { zip: out } : {}), ...(dir ? { dir } : {}), ...(verify ? { verify } : {}) });
+  printJson({
+    revision,
+    files: files.map((f) => f.path),
+    ...(out ? { zip: out } : {}),
+    ...(dir ? { dir } : {}),
+    ...(verify ? { verify } : {}),
+  });
   return verify && verify.sketches.some((s) => s.ok === false) ? 1 : 0;
 }

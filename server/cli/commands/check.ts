@@ -9,6 +9,8 @@ export async function run(args: string[]): Promise<number> {
   if (positionals.length > 1) throw new CliError(`Unexpected argument "${positionals[1]}"`, 2);
   const config = await readConfigFile(positionals[0]);
   const problems = robotProblems(config);
-  printJson({ problems: problems.map(({ severity, code, pins, message, hint }) => ({ severity, code, pins, message, hint })) });
+  printJson({
+    problems: problems.map(({ severity, code, pins, message, hint }) => ({ severity, code, pins, message, hint })),
+  });
   return hasErrors(problems) ? 1 : 0;
 }

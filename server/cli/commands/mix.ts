@@ -49,7 +49,11 @@ export async function run(args: string[]): Promise<number> {
     yaw: { type: 'string' },
   });
   if (positionals.length > 1) throw new CliError(`Unexpected argument "${positionals[1]}"`, 2);
-  const sticks = { forward: stickOption(values, 'forward'), strafe: stickOption(values, 'strafe'), yaw: stickOption(values, 'yaw') };
+  const sticks = {
+    forward: stickOption(values, 'forward'),
+    strafe: stickOption(values, 'strafe'),
+    yaw: stickOption(values, 'yaw'),
+  };
   const config = await readConfigFile(positionals[0]);
   const mixing = computeMixing(config);
   const commands = mixSticks(mixing, sticks, config.controls.desaturation);

@@ -7,7 +7,8 @@ export async function run(args: string[]): Promise<number> {
   const { values, positionals } = parseCliArgs(args, { channel: { type: 'string' }, raw: { type: 'string' } });
   if (positionals.length > 1) throw new CliError(`Unexpected argument "${positionals[1]}"`, 2);
   const channel = numberOption(values, 'channel');
-  if (!Number.isInteger(channel) || channel < 1) throw new CliError(`--channel must be a channel number (1, 2, …), got ${channel}`, 2);
+  if (!Number.isInteger(channel) || channel < 1)
+    throw new CliError(`--channel must be a channel number (1, 2, …), got ${channel}`, 2);
   const raw = numberOption(values, 'raw');
   const config = await readConfigFile(positionals[0]);
   if (!config.controls.channels.some((c) => c.number === channel)) {

@@ -14,7 +14,12 @@ import {
 
 type WheelInput = RobotConfigInput['chassis']['wheels'][number];
 
-function wheel(name: string, motor: string, at: { x: number; y: number; drive: number; roller?: number }, extra: Partial<WheelInput>): WheelInput {
+function wheel(
+  name: string,
+  motor: string,
+  at: { x: number; y: number; drive: number; roller?: number },
+  extra: Partial<WheelInput>,
+): WheelInput {
   return {
     name,
     kind: 'omni',
@@ -43,7 +48,11 @@ function channels(source: InputSourceId, names: string[]) {
  */
 function greenhouseCart(): RobotConfigInput {
   const d = 120;
-  const at = (deg: number, drive: number) => ({ x: d * Math.cos((deg * Math.PI) / 180), y: d * Math.sin((deg * Math.PI) / 180), drive });
+  const at = (deg: number, drive: number) => ({
+    x: d * Math.cos((deg * Math.PI) / 180),
+    y: d * Math.sin((deg * Math.PI) / 180),
+    drive,
+  });
   const spec = { radiusMm: 29, maxRpm: 180 };
   return {
     schemaVersion: CURRENT_SCHEMA_VERSION,
@@ -59,10 +68,22 @@ function greenhouseCart(): RobotConfigInput {
     },
     // Left as a club would have built it: 6 V gear motors on a six-cell NiMH pack and stalls above
     // the TB6612's continuous rating, so the demo shows what power warnings look like.
-    motors: ['Motor F', 'Motor RR', 'Motor RL'].map((name) => ({ name, startThreshold: 0.08, stallCurrentA: 1.6, ratedVoltage: 6 })),
+    motors: ['Motor F', 'Motor RR', 'Motor RL'].map((name) => ({
+      name,
+      startThreshold: 0.08,
+      stallCurrentA: 1.6,
+      ratedVoltage: 6,
+    })),
     controls: {
       source: 'ppm',
-      channels: channels('ppm', ['Right stick across', 'Right stick up', 'Left stick up', 'Left stick across', 'Arm switch', 'Rate switch']),
+      channels: channels('ppm', [
+        'Right stick across',
+        'Right stick up',
+        'Left stick up',
+        'Left stick across',
+        'Arm switch',
+        'Rate switch',
+      ]),
       axes: { forward: { channel: 2 }, strafe: { channel: 1 }, yaw: { channel: 4 } },
       rateSwitch: { channel: 6, rates: [0.5, 1] },
       armingSwitch: { channel: 5, armedWhen: 'high' },
@@ -97,10 +118,24 @@ function aisleScout(): RobotConfigInput {
         wheel('Rear left', 'Motor RL', { x: -l, y: w, drive: 0, roller: 45 }, spec),
       ],
     },
-    motors: ['Motor FL', 'Motor FR', 'Motor RR', 'Motor RL'].map((name) => ({ name, startThreshold: 0.1, stallCurrentA: 3.2, ratedVoltage: 12 })),
+    motors: ['Motor FL', 'Motor FR', 'Motor RR', 'Motor RL'].map((name) => ({
+      name,
+      startThreshold: 0.1,
+      stallCurrentA: 3.2,
+      ratedVoltage: 12,
+    })),
     controls: {
       source: 'sbus',
-      channels: channels('sbus', ['Roll stick', 'Pitch stick', 'Throttle stick', 'Yaw stick', 'Arm switch', 'Rate switch', 'Aux 1', 'Aux 2']),
+      channels: channels('sbus', [
+        'Roll stick',
+        'Pitch stick',
+        'Throttle stick',
+        'Yaw stick',
+        'Arm switch',
+        'Rate switch',
+        'Aux 1',
+        'Aux 2',
+      ]),
       axes: { forward: { channel: 2 }, strafe: { channel: 1 }, yaw: { channel: 4, expo: 0.4 } },
       rateSwitch: { channel: 6, rates: [0.35, 0.65, 1] },
       armingSwitch: { channel: 5, armedWhen: 'high' },
@@ -167,7 +202,12 @@ function benchKiwi(): RobotConfigInput {
         wheel('Rear left', 'Motor RL', { x: -a, y: a, drive: 45 }, spec),
       ],
     },
-    motors: ['Motor FL', 'Motor FR', 'Motor RR', 'Motor RL'].map((name) => ({ name, startThreshold: 0.12, stallCurrentA: 1.2, ratedVoltage: 6 })),
+    motors: ['Motor FL', 'Motor FR', 'Motor RR', 'Motor RL'].map((name) => ({
+      name,
+      startThreshold: 0.12,
+      stallCurrentA: 1.2,
+      ratedVoltage: 6,
+    })),
     controls: {
       source: 'nrf24',
       channels: channels('nrf24', ['Right stick across', 'Right stick up', 'Left stick across', 'Arm button']),

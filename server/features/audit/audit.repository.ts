@@ -74,7 +74,11 @@ function kindFilter(kind: AuditKind): SQL | undefined {
  * The team's audit log, newest first: everything done in the team, and the sign-ins of its
  * members since they joined (sign-ins belong to no team, so they are matched by membership).
  */
-export function listAuditLog(db: Db, teamId: string, options: { kind: AuditKind; before?: number; limit: number }): TeamActivity[] {
+export function listAuditLog(
+  db: Db,
+  teamId: string,
+  options: { kind: AuditKind; before?: number; limit: number },
+): TeamActivity[] {
   const memberSignIn = and(
     sql`${auditEvents.teamId} is null`,
     eq(auditEvents.action, SIGN_IN),

@@ -16,7 +16,10 @@ export function authRoutes(ctx: AppContext): Router {
   const signInLimit = attemptLimit(ctx.config.rateLimits.signIn, { perEmail: true, what: 'sign-in attempts' });
   const resetLimit = attemptLimit(ctx.config.rateLimits.passwordReset, { perEmail: false, what: 'reset requests' });
   const confirmLimit = attemptLimit(ctx.config.rateLimits.passwordReset, { perEmail: false, what: 'reset attempts' });
-  const signUpLimit = attemptLimit(ctx.config.rateLimits.signUp, { perEmail: false, what: 'sign-ups from this address' });
+  const signUpLimit = attemptLimit(ctx.config.rateLimits.signUp, {
+    perEmail: false,
+    what: 'sign-ups from this address',
+  });
 
   router.post('/auth/sign-up', signUpLimit, validateBody(SignUpInputSchema), async (req, res) => {
     const user = await signUp(ctx, req.body);
@@ -44,11 +47,16 @@ export function authRoutes(ctx: AppContext): Router {
     res.status(202).json({ message: 'If that e-mail has an account, a reset link is on its way' });
   });
 
-  router.post('/auth/password-reset/confirm', confirmLimit, validateBody(PasswordResetInputSchema), async (req, res) => {
-    const user = await resetPassword(ctx, req.body);
-    res.append('Set-Cookie', await ctx.auth.startSession(user.id));
-    res.json({ user });
-  });
+  router.post(
+    '/auth/password-reset/confirm',
+    confirmLimit,
+    validateBody(PasswordResetInputSchema),
+    async (req, res) => {
+      const user = await resetPassword(ctx, req.body);
+      res.append('Set-Cookie', await ctx.auth.startSession(user.id));
+      res.json({ user });
+    },
+  );
 
   return router;
 }

@@ -29,7 +29,9 @@ export function devMailboxPage(mailbox: Mailbox): Router {
   const router = Router();
   router.get('/dev/mailbox', (_req, res) => {
     const messages = mailbox.list();
-    const body = messages.length ? messages.map(renderMessage).join('\n') : '<p class="empty">No e-mail yet. Invitations and password resets sent while the app runs land here.</p>';
+    const body = messages.length
+      ? messages.map(renderMessage).join('\n')
+      : '<p class="empty">No e-mail yet. Invitations and password resets sent while the app runs land here.</p>';
     res.type('html').send(`<!doctype html>
 <html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1">
 <title>Development mailbox · Mixwright</title>

@@ -5,10 +5,20 @@ import { requireUser } from '@server/middleware/session';
 import { requireRobotRole } from '@server/middleware/team-access';
 import { validateBody } from '@server/middleware/validate';
 import { PreviewFilesInputSchema } from '@shared/schemas/firmware';
-import { defaultVerifySettings, draftFiles, revisionFiles, revisionZip, verifyRevision, type VerifySettings } from './firmware.service';
+import {
+  defaultVerifySettings,
+  draftFiles,
+  revisionFiles,
+  revisionZip,
+  verifyRevision,
+  type VerifySettings,
+} from './firmware.service';
 
 const RevisionParamsSchema = z.object({
-  revision: z.coerce.number({ error: 'Revision must be a number' }).int('Revision must be a whole number').min(1, 'Revisions start at 1'),
+  revision: z.coerce
+    .number({ error: 'Revision must be a number' })
+    .int('Revision must be a whole number')
+    .min(1, 'Revisions start at 1'),
 });
 
 const revisionOf = (req: Request) => RevisionParamsSchema.parse(req.params).revision;

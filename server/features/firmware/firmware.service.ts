@@ -62,7 +62,11 @@ function filesView(config: RobotConfig, revision: number, draft: boolean): Firmw
     sketchFolder,
     remoteFolder: files.some((f) => f.path.startsWith(`${remoteFolder}/`)) ? remoteFolder : null,
     bootLine: bootLine(config, revision),
-    files: files.map((f): FirmwareFile => ({ ...f, size: Buffer.byteLength(f.content, 'utf8'), language: languageOf(f.path) })),
+    files: files.map((f): FirmwareFile => ({
+      ...f,
+      size: Buffer.byteLength(f.content, 'utf8'),
+      language: languageOf(f.path),
+    })),
   };
 }
 
@@ -79,7 +83,11 @@ export function draftFiles(ctx: AppContext, robotId: string, config: RobotConfig
 }
 
 /** The saved revision's bundle as a zip, with its download name (`greenhouse-cart-r7.zip`). */
-export async function revisionZip(ctx: AppContext, robotId: string, number: number): Promise<{ fileName: string; zip: Buffer }> {
+export async function revisionZip(
+  ctx: AppContext,
+  robotId: string,
+  number: number,
+): Promise<{ fileName: string; zip: Buffer }> {
   const { config } = getRevision(ctx, robotId, number);
   const zip = await zipBundle(render(config, number));
   return { fileName: bundleFileName(config.name, number), zip };
@@ -102,7 +110,9 @@ export async function verifyRevision(
     return await settings.queue.run(() => verifyBundle(files, { timeoutMs: settings.stepTimeoutMs }));
   } catch (error) {
     if (error instanceof QueueFullError) {
-      throw new HttpError(503, 'The compile check is busy with other bundles; try again in a minute', { code: 'verify_busy' });
+      throw new HttpError(503, 'The compile check is busy with other bundles; try again in a minute', {
+        code: 'verify_busy',
+      });
     }
     throw error;
   }

@@ -11,10 +11,15 @@ interface Row {
 }
 
 const wiringRows = (entries: PinEntry[]): Row[] =>
-  entries.map((e) => ({ part: markdownText(e.part), connects: markdownText(e.connects), pin: `${markdownText(e.pinLabel)} (\`${e.code}\` in code)` }));
+  entries.map((e) => ({
+    part: markdownText(e.part),
+    connects: markdownText(e.connects),
+    pin: `${markdownText(e.pinLabel)} (\`${e.code}\` in code)`,
+  }));
 
 function describe(path: string): string {
-  if (path.endsWith('.ino')) return path.includes('_remote/') ? 'the remote transmitter sketch' : 'the robot sketch: set-up and control loop';
+  if (path.endsWith('.ino'))
+    return path.includes('_remote/') ? 'the remote transmitter sketch' : 'the robot sketch: set-up and control loop';
   const known: Record<string, string> = {
     'mw_config.h': 'every number and pin from the configuration',
     'mw_remote_config.h': "the remote's pins and link settings",
@@ -61,7 +66,10 @@ export function buildReadmeModel(
     notes: model.notes.map(markdownText),
     hasArming: model.arming.slot >= 0,
     benchPossible: model.serial.commands || model.bench.pinPresent,
-    desaturation: config.controls.desaturation === 'scale' ? 'all motors scaled together, keeping the direction of travel' : 'each motor clipped at full',
+    desaturation:
+      config.controls.desaturation === 'scale'
+        ? 'all motors scaled together, keeping the direction of travel'
+        : 'each motor clipped at full',
     rampPerSecond: config.safety.rampPerSecond,
     outputLimitPercent: config.safety.outputLimitPercent,
     stopWords: brakes ? 'braked' : coasts ? 'left to coast' : 'braked or left to coast (as each driver is set)',

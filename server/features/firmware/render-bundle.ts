@@ -18,7 +18,16 @@ export interface RenderOptions {
 }
 
 /** Headers every robot sketch gets, in include order (template under common/ unless noted). */
-const ROBOT_HEADERS = ['mw_config.h', 'mw_frame.h', 'mw_mixer.h', 'mw_safety.h', 'mw_input.h', 'mw_outputs.h', 'mw_console.h', 'mw_status.h'];
+const ROBOT_HEADERS = [
+  'mw_config.h',
+  'mw_frame.h',
+  'mw_mixer.h',
+  'mw_safety.h',
+  'mw_input.h',
+  'mw_outputs.h',
+  'mw_console.h',
+  'mw_status.h',
+];
 
 function robotFiles(folder: string, model: FirmwareModel, data: object): BundleFile[] {
   const headers = [...ROBOT_HEADERS];
@@ -28,7 +37,10 @@ function robotFiles(folder: string, model: FirmwareModel, data: object): BundleF
     { path: `${folder}/${folder}.ino`, content: renderTemplate('common/sketch.ino', data) },
     { path: `${folder}/mw_platform.h`, content: renderTemplate(`${model.board.family}/mw_platform.h`, data) },
     ...headers.map((h) => ({ path: `${folder}/${h}`, content: renderTemplate(`common/${h}`, data) })),
-    ...model.driverHeaders.map((h) => ({ path: `${folder}/${h}`, content: renderTemplate(`common/drivers/${h}`, data) })),
+    ...model.driverHeaders.map((h) => ({
+      path: `${folder}/${h}`,
+      content: renderTemplate(`common/drivers/${h}`, data),
+    })),
   ];
   return files;
 }
@@ -37,7 +49,10 @@ function remoteFiles(folder: string, data: object): BundleFile[] {
   return [
     { path: `${folder}/${folder}.ino`, content: renderTemplate('remote/remote.ino', data) },
     { path: `${folder}/mw_remote_config.h`, content: renderTemplate('remote/mw_remote_config.h', data) },
-    ...['mw_frame.h', 'mw_nrf24.h', 'mw_link_packet.h'].map((h) => ({ path: `${folder}/${h}`, content: renderTemplate(`common/${h}`, data) })),
+    ...['mw_frame.h', 'mw_nrf24.h', 'mw_link_packet.h'].map((h) => ({
+      path: `${folder}/${h}`,
+      content: renderTemplate(`common/${h}`, data),
+    })),
   ];
 }
 
@@ -66,7 +81,8 @@ function manifest(config: RobotConfig, model: FirmwareModel, folder: string, fil
  * Throws FirmwareConfigError naming every field that prevents generation.
  */
 export function renderBundle(config: RobotConfig, options: RenderOptions): BundleFile[] {
-  if (!Number.isInteger(options.revision) || options.revision < 0) throw new Error('revision must be a whole number, 0 or more');
+  if (!Number.isInteger(options.revision) || options.revision < 0)
+    throw new Error('revision must be a whole number, 0 or more');
   const model = buildFirmwareModel(config, options.revision);
   const folder = sketchFolderName(config.name, config.firmware.sketchName);
   const remoteFolder = remoteFolderName(folder);

@@ -10,7 +10,8 @@ const REMOTE_SUFFIX = '_remote';
 /** The robot's sketch folder name: the configured one, or one made from the robot's name. */
 export function sketchFolderName(robotName: string, configured: string | null): string {
   if (configured !== null) {
-    if (!SKETCH_NAME_PATTERN.test(configured)) throw new Error(`firmware.sketchName "${configured}" is not a valid sketch name`);
+    if (!SKETCH_NAME_PATTERN.test(configured))
+      throw new Error(`firmware.sketchName "${configured}" is not a valid sketch name`);
     return configured;
   }
   const words = snakeWords(robotName);

@@ -36,7 +36,9 @@ function load(): NonNullable<typeof engine> {
   formatHelpers(hb);
   const templates = new Map<string, Template>();
   for (const path of listTemplates(TEMPLATE_ROOT)) {
-    const name = relative(TEMPLATE_ROOT, path).replace(/\\/g, '/').replace(/\.hbs$/, '');
+    const name = relative(TEMPLATE_ROOT, path)
+      .replace(/\\/g, '/')
+      .replace(/\.hbs$/, '');
     const text = readFileSync(path, 'utf8');
     if (name.startsWith('partials/')) hb.registerPartial(basename(name), text);
     else templates.set(name, hb.compile(text, { noEscape: true, strict: true }));

@@ -32,21 +32,42 @@ function sketchBoards(files: BundleFile[]): { folder: string; board: BoardId }[]
   const configFile = files.find((f) => f.path === 'config.json');
   if (!configFile) throw new Error('The bundle has no config.json');
   const config = RobotConfigSchema.parse(JSON.parse(configFile.content));
-  const folders = files.map((f) => f.path.split('/')).filter((p) => p.length === 2 && p[1] === `${p[0]}.ino`).map((p) => p[0]);
-  return folders.map((folder) => ({ folder, board: folder.endsWith('_remote') ? config.controls.link.remoteBoard : config.wiring.board }));
+  const folders = files
+    .map((f) => f.path.split('/'))
+    .filter((p) => p.length === 2 && p[1] === `${p[0]}.ino`)
+    .map((p) => p[0]);
+  return folders.map((folder) => ({
+    folder,
+    board: folder.endsWith('_remote') ? config.controls.link.remoteBoard : config.wiring.board,
+  }));
 }
 
 /** Only sketch sources, only inside their folder: nothing else from the bundle reaches the disk. */
 function sketchSources(files: BundleFile[], folder: string): BundleFile[] {
   return files.filter((f) => {
     const parts = f.path.split('/');
-    return parts.length === 2 && parts[0] === folder && /^[A-Za-z0-9_.-]+\.(ino|h)$/.test(parts[1]) && !parts[1].startsWith('.');
+    return (
+      parts.length === 2 &&
+      parts[0] === folder &&
+      /^[A-Za-z0-9_.-]+\.(ino|h)$/.test(parts[1]) &&
+      !parts[1].startsWith('.')
+    );
   });
 }
 
-async function checkSketch(files: BundleFile[], folder: string, board: BoardId, options: VerifyOptions): Promise<SketchCheck> {
+async function checkSketch(
+  files: BundleFile[],
+  folder: string,
+  board: BoardId,
+  options: VerifyOptions,
+): Promise<SketchCheck> {
   if (!AVR_TARGETS[board]) {
-    return { folder, board, ok: null, messages: `No compiler for ${getBoard(board).name} on this server; only AVR boards are compiled here.` };
+    return {
+      folder,
+      board,
+      ok: null,
+      messages: `No compiler for ${getBoard(board).name} on this server; only AVR boards are compiled here.`,
+    };
   }
   const { cacheRoot } = toolchainPaths(options);
   await mkdir(cacheRoot, { recursive: true });
@@ -58,7 +79,14 @@ async function checkSketch(files: BundleFile[], folder: string, board: BoardId, 
       await writeFile(path, file.content);
     }
     const result = await compileAvrSketch(join(root, folder), board, options);
-    if (!result.ok) return { folder, board, ok: false, messages: result.messages, ...(result.stage === 'timeout' ? { timedOut: true } : {}) };
+    if (!result.ok)
+      return {
+        folder,
+        board,
+        ok: false,
+        messages: result.messages,
+        ...(result.stage === 'timeout' ? { timedOut: true } : {}),
+      };
     const { flashBytes, flashMax, ramBytes, ramMax } = result;
     return { folder, board, ok: true, flashBytes, flashMax, ramBytes, ramMax };
   } finally {
@@ -82,7 +110,8 @@ export function verifyBundle(files: BundleFile[], options: VerifyOptions = {}): 
   if (cached) return cached;
   const job = (async () => {
     const sketches: SketchCheck[] = [];
-    for (const { folder, board } of sketchBoards(files)) sketches.push(await checkSketch(files, folder, board, options));
+    for (const { folder, board } of sketchBoards(files))
+      sketches.push(await checkSketch(files, folder, board, options));
     return { hash, sketches };
   })();
   cache.set(hash, job);

@@ -10,7 +10,12 @@ const FIXED_DATE = new Date(Date.UTC(1980, 0, 1, 0, 0, 0));
 export async function zipBundle(files: BundleFile[]): Promise<Buffer> {
   const zip = new JSZip();
   for (const file of files) zip.file(file.path, file.content, { date: FIXED_DATE, createFolders: false });
-  return zip.generateAsync({ type: 'nodebuffer', compression: 'DEFLATE', compressionOptions: { level: 9 }, platform: 'UNIX' });
+  return zip.generateAsync({
+    type: 'nodebuffer',
+    compression: 'DEFLATE',
+    compressionOptions: { level: 9 },
+    platform: 'UNIX',
+  });
 }
 
 /**

@@ -7,16 +7,33 @@ import { parseBootLine, type BootLine } from '@shared/history/boot-line';
 import type { BootLineAnswer, BootLineMatch, TeamBootLineAnswer } from '@shared/schemas/history';
 
 function asMatch(revision: StoredRevision, head: number): BootLineMatch {
-  return { number: revision.number, message: revision.message, createdAt: revision.createdAt, isHead: revision.number === head };
+  return {
+    number: revision.number,
+    message: revision.message,
+    createdAt: revision.createdAt,
+    isHead: revision.number === head,
+  };
 }
 
-function verdict(line: BootLine, match: BootLineMatch | null, printed: StoredRevision | undefined, head: number, robotName: string, nameMatches: boolean): string {
+function verdict(
+  line: BootLine,
+  match: BootLineMatch | null,
+  printed: StoredRevision | undefined,
+  head: number,
+  robotName: string,
+  nameMatches: boolean,
+): string {
   const who = line.device === 'remote' ? 'This remote' : 'This robot';
   const parts: string[] = [];
   if (!nameMatches) parts.push(`The line names “${line.robotName}”, not “${robotName}”.`);
-  if (match && match.number === line.revision) parts.push(`${who} runs revision ${match.number}${match.isHead ? ', the current head.' : `; the head is revision ${head}.`}`);
+  if (match && match.number === line.revision)
+    parts.push(
+      `${who} runs revision ${match.number}${match.isHead ? ', the current head.' : `; the head is revision ${head}.`}`,
+    );
   else if (match) {
-    parts.push(`The line says revision ${line.revision}, but its configuration hash ${line.hash} is that of revision ${match.number}.`);
+    parts.push(
+      `The line says revision ${line.revision}, but its configuration hash ${line.hash} is that of revision ${match.number}.`,
+    );
     parts.push(match.isHead ? 'That is the current head.' : `The head is revision ${head}.`);
   } else {
     parts.push(`No revision of ${robotName} has the configuration hash ${line.hash}.`);
@@ -57,7 +74,10 @@ function answerFor(robot: LookedUpRobot, line: BootLine, revisions: StoredRevisi
   return {
     parsed: { device: line.device, robotName: line.robotName, revision: line.revision, hash: line.hash },
     match,
-    sameConfiguration: sameHash.map((r) => r.number).filter((n) => n !== match?.number).sort((a, b) => a - b),
+    sameConfiguration: sameHash
+      .map((r) => r.number)
+      .filter((n) => n !== match?.number)
+      .sort((a, b) => a - b),
     headRevision: robot.headRevision,
     verdict: verdict(line, match, printed, robot.headRevision, robot.name, nameMatches),
     nameMatches,
@@ -79,7 +99,8 @@ type Candidate = { robot: LookedUpRobot; revisions: StoredRevision[] };
  */
 function bestByHash(withHash: Candidate[], line: BootLine): Candidate | undefined {
   const rank = ({ robot, revisions }: Candidate) =>
-    (robot.name === line.robotName ? 2 : 0) + (revisionsWithHash(revisions, line.hash).some((r) => r.number === line.revision) ? 1 : 0);
+    (robot.name === line.robotName ? 2 : 0) +
+    (revisionsWithHash(revisions, line.hash).some((r) => r.number === line.revision) ? 1 : 0);
   return [...withHash].sort((a, b) => rank(b) - rank(a))[0];
 }
 
@@ -97,7 +118,10 @@ const robotRef = ({ id, name }: LookedUpRobot) => ({ id, name });
  */
 export function lookUpTeamBootLine(ctx: AppContext, teamId: string, pasted: string): TeamBootLineAnswer {
   const line = readBootLine(pasted);
-  const candidates = listTeamRobots(ctx.db, teamId).map((robot) => ({ robot, revisions: listStoredRevisions(ctx.db, robot.id) }));
+  const candidates = listTeamRobots(ctx.db, teamId).map((robot) => ({
+    robot,
+    revisions: listStoredRevisions(ctx.db, robot.id),
+  }));
   const withHash = candidates.filter((c) => revisionsWithHash(c.revisions, line.hash).length > 0);
   const hashed = bestByHash(withHash, line);
   const found = hashed ?? byName(candidates, line.robotName);

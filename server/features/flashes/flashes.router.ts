@@ -26,9 +26,15 @@ export function flashesRoutes(ctx: AppContext): Router {
   });
 
   // For someone plugged into one of the team's robots without knowing which.
-  router.post('/teams/:teamId/boot-line', requireUser, requireTeamRole(ctx, 'viewer'), validateBody(BootLineInputSchema), (req, res) => {
-    res.json(lookUpTeamBootLine(ctx, grantedAccess(req).teamId, req.body.line));
-  });
+  router.post(
+    '/teams/:teamId/boot-line',
+    requireUser,
+    requireTeamRole(ctx, 'viewer'),
+    validateBody(BootLineInputSchema),
+    (req, res) => {
+      res.json(lookUpTeamBootLine(ctx, grantedAccess(req).teamId, req.body.line));
+    },
+  );
 
   return router;
 }

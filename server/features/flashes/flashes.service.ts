@@ -14,7 +14,9 @@ function flashTime(input: { flashedAt?: string }, revisionNumber: number, savedA
   if (!input.flashedAt) return now;
   const at = new Date(input.flashedAt);
   if (at.getTime() > now.getTime() + CLOCK_SLACK_MS) {
-    throw new HttpError(400, 'The flash time is in the future', { fields: { flashedAt: 'The flash time is in the future' } });
+    throw new HttpError(400, 'The flash time is in the future', {
+      fields: { flashedAt: 'The flash time is in the future' },
+    });
   }
   if (at.getTime() < new Date(savedAt).getTime() - CLOCK_SLACK_MS) {
     const reason = `Revision ${revisionNumber} was saved after that time, so it cannot have been flashed then`;
@@ -39,7 +41,13 @@ export function recordFlash(
   }
   const flashedAt = flashTime(input, revision.number, revision.createdAt, new Date());
   const id = ctx.db.transaction((tx) => {
-    const row = insertFlashRow(tx, { robotId, revisionNumber: revision.number, flashedAt, flashedBy: user.id, note: input.note });
+    const row = insertFlashRow(tx, {
+      robotId,
+      revisionNumber: revision.number,
+      flashedAt,
+      flashedBy: user.id,
+      note: input.note,
+    });
     recordEvent(tx, {
       teamId: robot.teamId,
       actorId: user.id,

@@ -24,7 +24,12 @@ const storedColumns = {
 };
 
 /** The revision as lists show it, without its configuration. */
-export const revisionSummary = ({ number, message, authorName, createdAt }: StoredRevision): RevisionSummary => ({ number, message, authorName, createdAt });
+export const revisionSummary = ({ number, message, authorName, createdAt }: StoredRevision): RevisionSummary => ({
+  number,
+  message,
+  authorName,
+  createdAt,
+});
 
 export function listStoredRevisions(db: Db, robotId: string): StoredRevision[] {
   return db

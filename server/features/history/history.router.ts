@@ -9,7 +9,10 @@ import { bundleRenderer, type BundleRenderer } from './bundle-renderer';
 import { restoreRevision, revisionDiff, robotHistory } from './history.service';
 
 export const RevisionParamSchema = z.object({
-  revision: z.coerce.number({ error: 'Revision must be a number' }).int('Revision must be a whole number').min(1, 'Revisions start at 1'),
+  revision: z.coerce
+    .number({ error: 'Revision must be a number' })
+    .int('Revision must be a whole number')
+    .min(1, 'Revisions start at 1'),
 });
 
 export function historyRoutes(ctx: AppContext, render: BundleRenderer | null = bundleRenderer): Router {
@@ -26,10 +29,18 @@ export function historyRoutes(ctx: AppContext, render: BundleRenderer | null = b
     res.json(revisionDiff(ctx, String(req.params.robotId), from, to, render));
   });
 
-  router.post('/robots/:robotId/revisions/:revision/restore', requireUser, editor, validateBody(RestoreInputSchema), (req, res) => {
-    const { revision } = RevisionParamSchema.parse(req.params);
-    res.status(201).json({ revision: restoreRevision(ctx, currentUser(req), String(req.params.robotId), revision, req.body) });
-  });
+  router.post(
+    '/robots/:robotId/revisions/:revision/restore',
+    requireUser,
+    editor,
+    validateBody(RestoreInputSchema),
+    (req, res) => {
+      const { revision } = RevisionParamSchema.parse(req.params);
+      res
+        .status(201)
+        .json({ revision: restoreRevision(ctx, currentUser(req), String(req.params.robotId), revision, req.body) });
+    },
+  );
 
   return router;
 }

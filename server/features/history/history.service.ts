@@ -8,7 +8,13 @@ import type { CurrentUser } from '@shared/schemas/auth';
 import type { RevisionDiff, RobotHistory } from '@shared/schemas/history';
 import type { RevisionDetail } from '@shared/schemas/robots';
 import type { BundleRenderer } from './bundle-renderer';
-import { findStoredRevision, listFlashes, listStoredRevisions, revisionSummary, type StoredRevision } from './history.repository';
+import {
+  findStoredRevision,
+  listFlashes,
+  listStoredRevisions,
+  revisionSummary,
+  type StoredRevision,
+} from './history.repository';
 import { revisionFacts } from './revision-facts';
 
 function liveRobot(ctx: AppContext, robotId: string) {
@@ -46,8 +52,13 @@ function generationProblem(error: unknown): string {
   return `${first.path.join('.')}: ${first.message}${more}.`;
 }
 
-function generatedFiles(render: BundleRenderer | null, from: StoredRevision, to: StoredRevision): RevisionDiff['files'] {
-  if (!render) return { available: false, reason: 'No firmware generator is available here, so only settings are compared.' };
+function generatedFiles(
+  render: BundleRenderer | null,
+  from: StoredRevision,
+  to: StoredRevision,
+): RevisionDiff['files'] {
+  if (!render)
+    return { available: false, reason: 'No firmware generator is available here, so only settings are compared.' };
   const rendered = [from, to].map((revision) => {
     try {
       return render(revisionFacts(revision).config, { revision: revision.number });
@@ -64,7 +75,13 @@ function generatedFiles(render: BundleRenderer | null, from: StoredRevision, to:
 }
 
 /** What changed from one revision to another: settings in words and, when possible, the generated files. */
-export function revisionDiff(ctx: AppContext, robotId: string, from: number, to: number, render: BundleRenderer | null): RevisionDiff {
+export function revisionDiff(
+  ctx: AppContext,
+  robotId: string,
+  from: number,
+  to: number,
+  render: BundleRenderer | null,
+): RevisionDiff {
   liveRobot(ctx, robotId);
   const before = storedOrNotFound(ctx, robotId, from);
   const after = storedOrNotFound(ctx, robotId, to);
@@ -105,7 +122,10 @@ export function restoreRevision(
           return revisionFacts(source).config;
         },
       },
-      { action: 'revision.restored', detail: (robot, created) => ({ name: robot.name, number: created, from: number, note: input.note ?? '' }) },
+      {
+        action: 'revision.restored',
+        detail: (robot, created) => ({ name: robot.name, number: created, from: number, note: input.note ?? '' }),
+      },
     ),
   );
   return getRevision(ctx, robotId, next);

@@ -29,7 +29,10 @@ function workOut(revision: StoredRevision): RevisionFacts {
   const hashes = [...new Set([configHash(config), configHash(stored)])];
   return {
     config,
-    problems: { errors: problems.filter((p) => p.severity === 'error').length, warnings: problems.filter((p) => p.severity === 'warning').length },
+    problems: {
+      errors: problems.filter((p) => p.severity === 'error').length,
+      warnings: problems.filter((p) => p.severity === 'warning').length,
+    },
     hashes,
   };
 }

@@ -33,8 +33,11 @@ function configEntry(files: Map<string, Buffer>): [string, Buffer] {
   if (top) return ['config.json', top];
   const nested = [...files.entries()].filter(([path]) => /^[^/]+\/config\.json$/.test(path));
   if (nested.length === 1) return nested[0];
-  if (nested.length > 1) throw rejected(`The zip holds ${nested.length} config.json files; upload one robot's bundle at a time`);
-  throw rejected('The zip has no config.json; upload a firmware bundle from Mixwright or the configuration file itself');
+  if (nested.length > 1)
+    throw rejected(`The zip holds ${nested.length} config.json files; upload one robot's bundle at a time`);
+  throw rejected(
+    'The zip has no config.json; upload a firmware bundle from Mixwright or the configuration file itself',
+  );
 }
 
 /**

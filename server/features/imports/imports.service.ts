@@ -10,7 +10,12 @@ import { configFileName } from '@shared/history/file-names';
 import type { CurrentUser } from '@shared/schemas/auth';
 import type { ImportAnswer } from '@shared/schemas/history';
 import { ConfigVersionError, migrateConfigWithNotes } from '@shared/schemas/migrate-config';
-import { CURRENT_SCHEMA_VERSION, RobotConfigSchema, RobotNameSchema, type RobotConfig } from '@shared/schemas/robot-config';
+import {
+  CURRENT_SCHEMA_VERSION,
+  RobotConfigSchema,
+  RobotNameSchema,
+  type RobotConfig,
+} from '@shared/schemas/robot-config';
 import type { RobotSummary } from '@shared/schemas/robots';
 import { readImportFile } from './import-file';
 
@@ -40,16 +45,24 @@ export function readUploadedConfig(file: UploadedFile): ReadConfig {
     migrated = migrateConfigWithNotes(json);
   } catch (error) {
     if (!(error instanceof ConfigVersionError)) throw error;
-    throw new HttpError(400, error.message, { code: 'import_rejected', fields: { 'config.schemaVersion': error.message } });
+    throw new HttpError(400, error.message, {
+      code: 'import_rejected',
+      fields: { 'config.schemaVersion': error.message },
+    });
   }
   const result = RobotConfigSchema.safeParse(migrated.json);
   if (!result.success) {
     const fields = zodFields(result.error, ['config']);
-    throw new HttpError(400, `The file is not a valid configuration: ${zodMessage(fields)}`, { code: 'import_rejected', fields });
+    throw new HttpError(400, `The file is not a valid configuration: ${zodMessage(fields)}`, {
+      code: 'import_rejected',
+      fields,
+    });
   }
   const notes = [
     ...(kind === 'bundle' ? ['Read config.json from the firmware bundle.'] : []),
-    ...(migrated.fromVersion < CURRENT_SCHEMA_VERSION ? [`Converted from schema version ${migrated.fromVersion} to ${CURRENT_SCHEMA_VERSION}.`] : []),
+    ...(migrated.fromVersion < CURRENT_SCHEMA_VERSION
+      ? [`Converted from schema version ${migrated.fromVersion} to ${CURRENT_SCHEMA_VERSION}.`]
+      : []),
     ...migrated.notes,
   ];
   return { config: result.data, fromVersion: migrated.fromVersion, notes };
@@ -58,7 +71,8 @@ export function readUploadedConfig(file: UploadedFile): ReadConfig {
 function robotName(requested: string | undefined, config: RobotConfig): string {
   if (!requested) return config.name;
   const result = RobotNameSchema.safeParse(requested);
-  if (!result.success) throw new HttpError(400, result.error.issues[0].message, { fields: { name: result.error.issues[0].message } });
+  if (!result.success)
+    throw new HttpError(400, result.error.issues[0].message, { fields: { name: result.error.issues[0].message } });
   return result.data;
 }
 
@@ -86,7 +100,10 @@ export function importAsRobot(
     });
     return row.id;
   });
-  const notes = name === read.config.name ? read.notes : [...read.notes, `The robot is named “${name}”; the file called it “${read.config.name}”.`];
+  const notes =
+    name === read.config.name
+      ? read.notes
+      : [...read.notes, `The robot is named “${name}”; the file called it “${read.config.name}”.`];
   return { robot: robotSummary(ctx.db, robotId)!, robotId, revision: 1, fromVersion: read.fromVersion, notes };
 }
 
@@ -112,10 +129,16 @@ export function importAsRevision(
         // The revision belongs to this robot, whatever the file called it.
         config: (found) => ({ ...read.config, name: found.name }),
       },
-      { action: 'revision.imported', detail: (robot, next) => ({ name: robot.name, number: next, file: fileName, fromVersion: read.fromVersion }) },
+      {
+        action: 'revision.imported',
+        detail: (robot, next) => ({ name: robot.name, number: next, file: fileName, fromVersion: read.fromVersion }),
+      },
     ),
   );
-  const notes = robot.name === read.config.name ? read.notes : [...read.notes, `The file's robot name “${read.config.name}” became “${robot.name}”.`];
+  const notes =
+    robot.name === read.config.name
+      ? read.notes
+      : [...read.notes, `The file's robot name “${read.config.name}” became “${robot.name}”.`];
   return { robotId, revision: number, fromVersion: read.fromVersion, notes };
 }
 

@@ -60,20 +60,26 @@ function readDirectory(zip: Buffer, limits: ZipLimits): Entry[] {
   const count = zip.readUInt16LE(end + 10);
   const size = zip.readUInt32LE(end + 12);
   const offset = zip.readUInt32LE(end + 16);
-  if (zip.readUInt16LE(end + 4) !== 0 || zip.readUInt16LE(end + 8) !== count) throw new ZipRejected('Archives split over several files are not accepted');
-  if (count === 0xffff || offset === 0xffffffff) throw new ZipRejected('ZIP64 archives are not accepted; a Mixwright bundle is far smaller');
-  if (count > limits.maxEntries) throw new ZipRejected(`The zip holds ${count} entries; at most ${limits.maxEntries} are accepted`);
+  if (zip.readUInt16LE(end + 4) !== 0 || zip.readUInt16LE(end + 8) !== count)
+    throw new ZipRejected('Archives split over several files are not accepted');
+  if (count === 0xffff || offset === 0xffffffff)
+    throw new ZipRejected('ZIP64 archives are not accepted; a Mixwright bundle is far smaller');
+  if (count > limits.maxEntries)
+    throw new ZipRejected(`The zip holds ${count} entries; at most ${limits.maxEntries} are accepted`);
   if (offset + size > end) throw new ZipRejected('The zip archive is damaged (its directory lies outside the file)');
   const entries: Entry[] = [];
   let at = offset;
   while (at < offset + size) {
     // Count what is really there, not only what the end record claims.
-    if (entries.length >= limits.maxEntries) throw new ZipRejected(`The zip holds more than ${limits.maxEntries} entries`);
-    if (at + 46 > zip.length || zip.readUInt32LE(at) !== CENTRAL) throw new ZipRejected('The zip archive is damaged (bad directory entry)');
+    if (entries.length >= limits.maxEntries)
+      throw new ZipRejected(`The zip holds more than ${limits.maxEntries} entries`);
+    if (at + 46 > zip.length || zip.readUInt32LE(at) !== CENTRAL)
+      throw new ZipRejected('The zip archive is damaged (bad directory entry)');
     const flags = zip.readUInt16LE(at + 8);
     const nameLength = zip.readUInt16LE(at + 28);
     const next = at + 46 + nameLength + zip.readUInt16LE(at + 30) + zip.readUInt16LE(at + 32);
-    if (next > offset + size) throw new ZipRejected('The zip archive is damaged (directory entry runs past the directory)');
+    if (next > offset + size)
+      throw new ZipRejected('The zip archive is damaged (directory entry runs past the directory)');
     const nameBytes = zip.subarray(at + 46, at + 46 + nameLength);
     entries.push({
       name: nameBytes.toString(flags & 0x800 ? 'utf8' : 'latin1'),
@@ -98,22 +104,29 @@ function checkEntries(entries: Entry[], limits: ZipLimits): void {
     if (unsafe) throw new ZipRejected(`The zip has an unsafe path: ${unsafe}`);
     if (entry.flags & 0x1) throw new ZipRejected(`"${entry.name}" is encrypted; upload an archive without a password`);
     if (entry.method !== 0 && entry.method !== 8) {
-      throw new ZipRejected(`"${entry.name}" uses compression method ${entry.method}; only stored and deflated entries are read`);
+      throw new ZipRejected(
+        `"${entry.name}" uses compression method ${entry.method}; only stored and deflated entries are read`,
+      );
     }
   }
   const declared = entries.reduce((sum, e) => sum + e.declaredSize, 0);
   if (declared > limits.maxTotalBytes) {
-    throw new ZipRejected(`The zip unpacks to ${megabytes(declared)}; at most ${megabytes(limits.maxTotalBytes)} are accepted`);
+    throw new ZipRejected(
+      `The zip unpacks to ${megabytes(declared)}; at most ${megabytes(limits.maxTotalBytes)} are accepted`,
+    );
   }
 }
 
 function inflateEntry(zip: Buffer, entry: Entry, budget: number, limit: number): Buffer {
   const at = entry.localOffset;
-  if (at + 30 > zip.length || zip.readUInt32LE(at) !== LOCAL) throw new ZipRejected(`The zip archive is damaged ("${entry.name}" has no local header)`);
+  if (at + 30 > zip.length || zip.readUInt32LE(at) !== LOCAL)
+    throw new ZipRejected(`The zip archive is damaged ("${entry.name}" has no local header)`);
   const start = at + 30 + zip.readUInt16LE(at + 26) + zip.readUInt16LE(at + 28);
-  if (start + entry.compressedSize > zip.length) throw new ZipRejected(`The zip archive is damaged ("${entry.name}" runs past the end)`);
+  if (start + entry.compressedSize > zip.length)
+    throw new ZipRejected(`The zip archive is damaged ("${entry.name}" runs past the end)`);
   const raw = zip.subarray(start, start + entry.compressedSize);
-  const tooLarge = () => new ZipRejected(`The zip unpacks to more than ${megabytes(limit)}; at most ${megabytes(limit)} are accepted`);
+  const tooLarge = () =>
+    new ZipRejected(`The zip unpacks to more than ${megabytes(limit)}; at most ${megabytes(limit)} are accepted`);
   let data: Buffer;
   if (entry.method === 0) {
     if (raw.length > budget) throw tooLarge();
@@ -128,8 +141,10 @@ function inflateEntry(zip: Buffer, entry: Entry, budget: number, limit: number):
     }
   }
   if (data.length > budget) throw tooLarge();
-  if (data.length !== entry.declaredSize) throw new ZipRejected(`The zip archive is damaged ("${entry.name}" is not the size it declares)`);
-  if (crc32(data) !== entry.crc) throw new ZipRejected(`The zip archive is damaged ("${entry.name}" fails its checksum)`);
+  if (data.length !== entry.declaredSize)
+    throw new ZipRejected(`The zip archive is damaged ("${entry.name}" is not the size it declares)`);
+  if (crc32(data) !== entry.crc)
+    throw new ZipRejected(`The zip archive is damaged ("${entry.name}" fails its checksum)`);
   return data;
 }
 

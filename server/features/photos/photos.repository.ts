@@ -12,7 +12,10 @@ export function upsertPhoto(db: Db, row: Omit<PhotoRow, 'createdAt'>): void {
   const createdAt = new Date();
   db.insert(robotPhotos)
     .values({ ...row, createdAt })
-    .onConflictDoUpdate({ target: robotPhotos.robotId, set: { fileName: row.fileName, mimeType: row.mimeType, bytes: row.bytes, uploadedBy: row.uploadedBy, createdAt } })
+    .onConflictDoUpdate({
+      target: robotPhotos.robotId,
+      set: { fileName: row.fileName, mimeType: row.mimeType, bytes: row.bytes, uploadedBy: row.uploadedBy, createdAt },
+    })
     .run();
 }
 

@@ -15,7 +15,12 @@ function liveRobot(ctx: AppContext, robotId: string) {
 }
 
 /** Stores a new photo for the robot, replacing the old one; the type is checked by content first. */
-export async function uploadPhoto(ctx: AppContext, user: CurrentUser, robotId: string, data: Buffer): Promise<RobotSummary> {
+export async function uploadPhoto(
+  ctx: AppContext,
+  user: CurrentUser,
+  robotId: string,
+  data: Buffer,
+): Promise<RobotSummary> {
   const robot = liveRobot(ctx, robotId);
   const type = await photoType(data);
   const previous = findPhoto(ctx.db, robotId);
@@ -23,7 +28,13 @@ export async function uploadPhoto(ctx: AppContext, user: CurrentUser, robotId: s
   try {
     ctx.db.transaction((tx) => {
       upsertPhoto(tx, { robotId, fileName, mimeType: type, bytes: data.length, uploadedBy: user.id });
-      recordEvent(tx, { teamId: robot.teamId, actorId: user.id, action: 'photo.uploaded', target: `robot:${robotId}`, detail: { name: robot.name } });
+      recordEvent(tx, {
+        teamId: robot.teamId,
+        actorId: user.id,
+        action: 'photo.uploaded',
+        target: `robot:${robotId}`,
+        detail: { name: robot.name },
+      });
     });
   } catch (error) {
     await removePhotoFile(ctx.config.dataDir, fileName);
@@ -47,7 +58,13 @@ export async function removePhoto(ctx: AppContext, user: CurrentUser, robotId: s
   if (!photo) throw new HttpError(404, 'This robot has no photo');
   ctx.db.transaction((tx) => {
     deletePhoto(tx, robotId);
-    recordEvent(tx, { teamId: robot.teamId, actorId: user.id, action: 'photo.removed', target: `robot:${robotId}`, detail: { name: robot.name } });
+    recordEvent(tx, {
+      teamId: robot.teamId,
+      actorId: user.id,
+      action: 'photo.removed',
+      target: `robot:${robotId}`,
+      detail: { name: robot.name },
+    });
   });
   await removePhotoFile(ctx.config.dataDir, photo.fileName);
 }

@@ -21,7 +21,13 @@ export function findDeletedRobot(db: Db, teamId: string, robotId: string) {
 /** The team's robots deleted after `since`, newest deletion first. */
 export function listDeletedSince(db: Db, teamId: string, since: Date) {
   return db
-    .select({ id: robots.id, name: robots.name, headRevision: robots.headRevision, deletedAt: robots.deletedAt, deletedByName: users.name })
+    .select({
+      id: robots.id,
+      name: robots.name,
+      headRevision: robots.headRevision,
+      deletedAt: robots.deletedAt,
+      deletedByName: users.name,
+    })
     .from(robots)
     .leftJoin(users, eq(users.id, robots.deletedBy))
     .where(and(eq(robots.teamId, teamId), gt(robots.deletedAt, since)))

@@ -7,7 +7,14 @@ import { HttpError } from '@server/lib/http-error';
 import type { CurrentUser } from '@shared/schemas/auth';
 import type { BinnedRobot } from '@shared/schemas/history';
 import type { RobotSummary } from '@shared/schemas/robots';
-import { clearDeleted, findDeletedRobot, listDeletedBefore, listDeletedSince, markDeleted, removeRobot } from './robot-bin.repository';
+import {
+  clearDeleted,
+  findDeletedRobot,
+  listDeletedBefore,
+  listDeletedSince,
+  markDeleted,
+  removeRobot,
+} from './robot-bin.repository';
 
 /** How long a deleted robot can still be restored. */
 export const BIN_DAYS = 30;
@@ -19,7 +26,13 @@ export function deleteRobot(ctx: AppContext, user: CurrentUser, robotId: string,
   if (!robot) throw new HttpError(404, 'Robot not found');
   ctx.db.transaction((tx) => {
     markDeleted(tx, robotId, user.id, now);
-    recordEvent(tx, { teamId: robot.teamId, actorId: user.id, action: 'robot.deleted', target: `robot:${robotId}`, detail: { name: robot.name } });
+    recordEvent(tx, {
+      teamId: robot.teamId,
+      actorId: user.id,
+      action: 'robot.deleted',
+      target: `robot:${robotId}`,
+      detail: { name: robot.name },
+    });
   });
 }
 
@@ -35,15 +48,29 @@ export function listBin(ctx: AppContext, teamId: string, now = new Date()): Binn
 }
 
 /** Brings a deleted robot back while it is within its 30 days; after that the answer is 410. */
-export function restoreRobot(ctx: AppContext, user: CurrentUser, teamId: string, robotId: string, now = new Date()): RobotSummary {
+export function restoreRobot(
+  ctx: AppContext,
+  user: CurrentUser,
+  teamId: string,
+  robotId: string,
+  now = new Date(),
+): RobotSummary {
   const robot = findDeletedRobot(ctx.db, teamId, robotId);
   if (!robot) throw new HttpError(404, 'No deleted robot with that id in this team');
   if (now.getTime() - robot.deletedAt!.getTime() > BIN_MS) {
-    throw new HttpError(410, `${robot.name} was deleted more than ${BIN_DAYS} days ago and can no longer be restored`, { code: 'bin_expired' });
+    throw new HttpError(410, `${robot.name} was deleted more than ${BIN_DAYS} days ago and can no longer be restored`, {
+      code: 'bin_expired',
+    });
   }
   ctx.db.transaction((tx) => {
     clearDeleted(tx, robotId);
-    recordEvent(tx, { teamId, actorId: user.id, action: 'robot.restored', target: `robot:${robotId}`, detail: { name: robot.name } });
+    recordEvent(tx, {
+      teamId,
+      actorId: user.id,
+      action: 'robot.restored',
+      target: `robot:${robotId}`,
+      detail: { name: robot.name },
+    });
   });
   return robotSummary(ctx.db, robotId)!;
 }
@@ -57,7 +84,13 @@ export async function purgeExpiredRobots(db: Db, dataDir: string, now = new Date
   for (const robot of expired) {
     db.transaction((tx) => {
       removeRobot(tx, robot.id);
-      recordEvent(tx, { teamId: robot.teamId, actorId: null, action: 'robot.purged', target: `robot:${robot.id}`, detail: { name: robot.name, afterDays: BIN_DAYS } });
+      recordEvent(tx, {
+        teamId: robot.teamId,
+        actorId: null,
+        action: 'robot.purged',
+        target: `robot:${robot.id}`,
+        detail: { name: robot.name, afterDays: BIN_DAYS },
+      });
     });
     // The file goes after the row, so a failed removal leaves an orphan file, never a dangling row.
     if (robot.photoFileName) await removePhotoFile(dataDir, robot.photoFileName);

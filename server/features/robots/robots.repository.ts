@@ -34,10 +34,12 @@ const summaryColumns = {
   photoAt,
 };
 
-type SummaryRow = { createdAt: Date; updatedAt: number | null; lastFlash: string | null; photoAt: number | null } & Omit<
-  RobotSummary,
-  'createdAt' | 'updatedAt' | 'lastFlash' | 'photoUrl'
->;
+type SummaryRow = {
+  createdAt: Date;
+  updatedAt: number | null;
+  lastFlash: string | null;
+  photoAt: number | null;
+} & Omit<RobotSummary, 'createdAt' | 'updatedAt' | 'lastFlash' | 'photoUrl'>;
 
 function toSummary({ photoAt, ...row }: SummaryRow): RobotSummary {
   const flash = row.lastFlash ? (JSON.parse(row.lastFlash) as { revisionNumber: number; flashedAt: number }) : null;
@@ -47,7 +49,9 @@ function toSummary({ photoAt, ...row }: SummaryRow): RobotSummary {
     photoUrl: photoAt === null ? null : `/api/robots/${row.id}/photo?v=${photoAt}`,
     createdAt: row.createdAt.toISOString(),
     updatedAt: new Date(row.updatedAt ?? row.createdAt.getTime()).toISOString(),
-    lastFlash: flash ? { revisionNumber: flash.revisionNumber, flashedAt: new Date(flash.flashedAt).toISOString() } : null,
+    lastFlash: flash
+      ? { revisionNumber: flash.revisionNumber, flashedAt: new Date(flash.flashedAt).toISOString() }
+      : null,
   };
 }
 

@@ -10,7 +10,10 @@ import { listRevisions, robotSummary } from './robots.repository';
 import { createRobot, getRevision, renameRobotFor, robotDetail, saveRevision } from './robots.service';
 
 const RevisionParamsSchema = z.object({
-  revision: z.coerce.number({ error: 'Revision must be a number' }).int('Revision must be a whole number').min(1, 'Revisions start at 1'),
+  revision: z.coerce
+    .number({ error: 'Revision must be a number' })
+    .int('Revision must be a whole number')
+    .min(1, 'Revisions start at 1'),
 });
 
 export function robotsRoutes(ctx: AppContext): Router {
@@ -34,11 +37,17 @@ export function robotsRoutes(ctx: AppContext): Router {
     res.json(robotDetail(ctx, String(req.params.robotId), grantedAccess(req).role));
   });
 
-  router.patch('/robots/:robotId', requireUser, requireRobotRole(ctx, 'editor'), validateBody(RenameRobotInputSchema), (req, res) => {
-    const robotId = String(req.params.robotId);
-    renameRobotFor(ctx, currentUser(req), robotId, req.body.name);
-    res.json({ robot: robotSummary(ctx.db, robotId) });
-  });
+  router.patch(
+    '/robots/:robotId',
+    requireUser,
+    requireRobotRole(ctx, 'editor'),
+    validateBody(RenameRobotInputSchema),
+    (req, res) => {
+      const robotId = String(req.params.robotId);
+      renameRobotFor(ctx, currentUser(req), robotId, req.body.name);
+      res.json({ robot: robotSummary(ctx.db, robotId) });
+    },
+  );
 
   router.get('/robots/:robotId/revisions', requireUser, requireRobotRole(ctx, 'viewer'), (req, res) => {
     res.json({ revisions: listRevisions(ctx.db, String(req.params.robotId)) });

@@ -26,8 +26,20 @@ export function createRobot(
   const robot = ctx.db.transaction((tx) => {
     const row = insertRobot(tx, { teamId, name: input.name, createdBy: user.id });
     const config = { ...input.config, name: input.name };
-    insertRevision(tx, { robotId: row.id, number: 1, config, message: input.message ?? 'First revision', authorId: user.id });
-    recordEvent(tx, { teamId, actorId: user.id, action: 'robot.created', target: `robot:${row.id}`, detail: { name: input.name } });
+    insertRevision(tx, {
+      robotId: row.id,
+      number: 1,
+      config,
+      message: input.message ?? 'First revision',
+      authorId: user.id,
+    });
+    recordEvent(tx, {
+      teamId,
+      actorId: user.id,
+      action: 'robot.created',
+      target: `robot:${row.id}`,
+      detail: { name: input.name },
+    });
     return row;
   });
   return robotSummary(ctx.db, robot.id)!;
@@ -87,7 +99,13 @@ export function appendRevision(
   }
   const next = robot.headRevision + 1;
   insertRevision(tx, { robotId, number: next, config, message: draft.message, authorId: user.id });
-  recordEvent(tx, { teamId: robot.teamId, actorId: user.id, action: event.action, target: `robot:${robotId}`, detail: event.detail(robot, next) });
+  recordEvent(tx, {
+    teamId: robot.teamId,
+    actorId: user.id,
+    action: event.action,
+    target: `robot:${robotId}`,
+    detail: event.detail(robot, next),
+  });
   return { number: next, robot };
 }
 
@@ -107,7 +125,10 @@ export function saveRevision(
       user,
       robotId,
       { baseRevision: input.baseRevision, message: input.message, config: () => input.config },
-      { action: 'revision.saved', detail: (robot, next) => ({ name: robot.name, number: next, message: input.message }) },
+      {
+        action: 'revision.saved',
+        detail: (robot, next) => ({ name: robot.name, number: next, message: input.message }),
+      },
     ),
   );
   return getRevision(ctx, robotId, number);

@@ -20,7 +20,8 @@ export function deleteInvitation(db: Db, id: string): void {
 }
 
 /** Open invitations: not accepted, not revoked, not expired. */
-const open = (now: Date) => and(isNull(invitations.acceptedAt), isNull(invitations.revokedAt), gt(invitations.expiresAt, now));
+const open = (now: Date) =>
+  and(isNull(invitations.acceptedAt), isNull(invitations.revokedAt), gt(invitations.expiresAt, now));
 
 export function listOpenInvitations(db: Db, teamId: string, now: Date): PendingInvitation[] {
   return db

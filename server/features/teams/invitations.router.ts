@@ -5,7 +5,13 @@ import { grantedAccess, requireTeamRole } from '@server/middleware/team-access';
 import { validateBody } from '@server/middleware/validate';
 import { LinkTokenSchema } from '@shared/schemas/auth';
 import { InviteMemberInputSchema } from '@shared/schemas/teams';
-import { acceptInvitation, inviteMember, listInvitations, previewInvitation, revokeInvitation } from './invitations.service';
+import {
+  acceptInvitation,
+  inviteMember,
+  listInvitations,
+  previewInvitation,
+  revokeInvitation,
+} from './invitations.service';
 
 export function invitationsRoutes(ctx: AppContext): Router {
   const router = Router();
@@ -15,10 +21,16 @@ export function invitationsRoutes(ctx: AppContext): Router {
     res.json({ invitations: listInvitations(ctx, grantedAccess(req).teamId) });
   });
 
-  router.post('/teams/:teamId/invitations', requireUser, owner, validateBody(InviteMemberInputSchema), async (req, res) => {
-    const invitation = await inviteMember(ctx, currentUser(req), grantedAccess(req).teamId, req.body);
-    res.status(201).json({ invitation });
-  });
+  router.post(
+    '/teams/:teamId/invitations',
+    requireUser,
+    owner,
+    validateBody(InviteMemberInputSchema),
+    async (req, res) => {
+      const invitation = await inviteMember(ctx, currentUser(req), grantedAccess(req).teamId, req.body);
+      res.status(201).json({ invitation });
+    },
+  );
 
   router.delete('/teams/:teamId/invitations/:invitationId', requireUser, owner, (req, res) => {
     revokeInvitation(ctx, currentUser(req), grantedAccess(req).teamId, String(req.params.invitationId));

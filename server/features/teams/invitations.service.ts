@@ -47,10 +47,19 @@ export async function inviteMember(
   const expiresAt = new Date(now.getTime() + ctx.config.invitationDays * 86_400_000);
   const invitation = ctx.db.transaction((tx) => {
     revokeOpenInvitationsFor(tx, teamId, input.email, now);
-    return insertInvitation(tx, { teamId, email: input.email, role: input.role, tokenHash: hashToken(token), invitedBy: actor.id, expiresAt });
+    return insertInvitation(tx, {
+      teamId,
+      email: input.email,
+      role: input.role,
+      tokenHash: hashToken(token),
+      invitedBy: actor.id,
+      expiresAt,
+    });
   });
   try {
-    await ctx.mailer.send(invitationMail(ctx, { to: input.email, teamName: team.name, inviter: actor.name, role: input.role, token }));
+    await ctx.mailer.send(
+      invitationMail(ctx, { to: input.email, teamName: team.name, inviter: actor.name, role: input.role, token }),
+    );
   } catch (error) {
     deleteInvitation(ctx.db, invitation.id);
     console.error('Invitation e-mail could not be sent:', error);
@@ -73,7 +82,10 @@ export async function inviteMember(
   };
 }
 
-function invitationMail(ctx: AppContext, m: { to: string; teamName: string; inviter: string; role: Role; token: string }) {
+function invitationMail(
+  ctx: AppContext,
+  m: { to: string; teamName: string; inviter: string; role: Role; token: string },
+) {
   return {
     to: m.to,
     subject: `${m.inviter} invited you to ${m.teamName} on Mixwright`,

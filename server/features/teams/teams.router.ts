@@ -30,10 +30,16 @@ export function teamsRoutes(ctx: AppContext): Router {
     res.json({ members: listMembers(ctx.db, grantedAccess(req).teamId) });
   });
 
-  router.patch('/teams/:teamId/members/:userId', requireUser, owner, validateBody(ChangeRoleInputSchema), (req, res) => {
-    changeRole(ctx, currentUser(req), grantedAccess(req).teamId, String(req.params.userId), req.body.role);
-    res.json({ members: listMembers(ctx.db, grantedAccess(req).teamId) });
-  });
+  router.patch(
+    '/teams/:teamId/members/:userId',
+    requireUser,
+    owner,
+    validateBody(ChangeRoleInputSchema),
+    (req, res) => {
+      changeRole(ctx, currentUser(req), grantedAccess(req).teamId, String(req.params.userId), req.body.role);
+      res.json({ members: listMembers(ctx.db, grantedAccess(req).teamId) });
+    },
+  );
 
   // Any member may remove themselves (leave); removing someone else needs the owner role.
   router.delete('/teams/:teamId/members/:userId', requireUser, viewer, (req, res) => {

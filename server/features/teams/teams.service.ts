@@ -15,7 +15,13 @@ import {
 
 export function createTeam(ctx: AppContext, user: CurrentUser, name: string): TeamDetail {
   const team = insertTeamWithOwner(ctx.db, name, user.id);
-  recordEvent(ctx.db, { teamId: team.id, actorId: user.id, action: 'team.created', target: `team:${team.id}`, detail: { name } });
+  recordEvent(ctx.db, {
+    teamId: team.id,
+    actorId: user.id,
+    action: 'team.created',
+    target: `team:${team.id}`,
+    detail: { name },
+  });
   return { id: team.id, name: team.name, role: 'owner', createdAt: team.createdAt.toISOString() };
 }
 
@@ -47,7 +53,13 @@ export function changeRole(ctx: AppContext, actor: CurrentUser, teamId: string, 
 }
 
 /** Owners remove anyone; any member may remove themselves (leave). */
-export function removeMember(ctx: AppContext, actor: CurrentUser, actorRole: Role, teamId: string, userId: string): void {
+export function removeMember(
+  ctx: AppContext,
+  actor: CurrentUser,
+  actorRole: Role,
+  teamId: string,
+  userId: string,
+): void {
   if (actor.id !== userId && actorRole !== 'owner') {
     throw new HttpError(403, 'Only owners remove other members', { code: 'role_too_low' });
   }

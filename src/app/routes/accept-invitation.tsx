@@ -44,7 +44,8 @@ export function AcceptInvitationRoute() {
       <div className="mb-5 rounded-md border border-rule bg-paper px-4 py-3">
         <p>
           <span className="font-semibold">{invitation.invitedByName}</span> invited{' '}
-          <span className="font-mono text-sm">{invitation.email}</span> to join as <Badge tone="accent">{invitation.role}</Badge>
+          <span className="font-mono text-sm">{invitation.email}</span> to join as{' '}
+          <Badge tone="accent">{invitation.role}</Badge>
         </p>
         <p className="mt-1 text-sm text-ink-muted">
           {ROLE_SUMMARIES[invitation.role]}. The link works until {formatDate(invitation.expiresAt)}.
@@ -63,7 +64,9 @@ export function AcceptInvitationRoute() {
         <Button
           className="w-full"
           busy={accept.isPending}
-          onClick={() => accept.mutate(token, { onSuccess: ({ teamId }) => navigate(`/teams/${teamId}`, { replace: true }) })}
+          onClick={() =>
+            accept.mutate(token, { onSuccess: ({ teamId }) => navigate(`/teams/${teamId}`, { replace: true }) })
+          }
         >
           Accept and open the team
         </Button>
@@ -71,10 +74,14 @@ export function AcceptInvitationRoute() {
       {user && !sameEmail && (
         <div className="flex flex-col gap-3">
           <p className="text-sm text-ink-soft">
-            You are signed in as <span className="font-mono">{user.email}</span>. This invitation is for another address; sign in with that
-            one to accept it.
+            You are signed in as <span className="font-mono">{user.email}</span>. This invitation is for another
+            address; sign in with that one to accept it.
           </p>
-          <Button variant="secondary" busy={signOut.isPending} onClick={() => signOut.mutate(undefined, { onSuccess: () => navigate(`/sign-in?${query}`) })}>
+          <Button
+            variant="secondary"
+            busy={signOut.isPending}
+            onClick={() => signOut.mutate(undefined, { onSuccess: () => navigate(`/sign-in?${query}`) })}
+          >
             Sign out and switch account
           </Button>
         </div>

@@ -16,7 +16,10 @@ export function AppLayout() {
 
   return (
     <div className="flex min-h-screen flex-col">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:top-2 focus:left-2 focus:z-10 focus:rounded focus:bg-paper-raised focus:px-3 focus:py-2">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:top-2 focus:left-2 focus:z-10 focus:rounded focus:bg-paper-raised focus:px-3 focus:py-2"
+      >
         Skip to content
       </a>
       <header className="border-b border-rule bg-paper-raised">
@@ -29,7 +32,10 @@ export function AppLayout() {
               to="/teams"
               end
               className={({ isActive }) =>
-                cx('rounded-md px-3 py-1.5 text-[0.95rem] font-semibold', isActive ? 'bg-accent-soft text-accent-strong' : 'text-ink-soft hover:bg-paper-sunken')
+                cx(
+                  'rounded-md px-3 py-1.5 text-[0.95rem] font-semibold',
+                  isActive ? 'bg-accent-soft text-accent-strong' : 'text-ink-soft hover:bg-paper-sunken',
+                )
               }
             >
               Teams

@@ -12,7 +12,8 @@ export function AuthLayout() {
         <Outlet />
       </main>
       <p className="mt-6 max-w-md text-center text-sm text-ink-muted">
-        Mixwright turns a small radio-controlled robot&apos;s drive base into firmware you can read, test and keep in step with the robot.
+        Mixwright turns a small radio-controlled robot&apos;s drive base into firmware you can read, test and keep in
+        step with the robot.
       </p>
     </div>
   );

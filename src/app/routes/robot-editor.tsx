@@ -25,7 +25,10 @@ export function RobotEditorRoute() {
     if (isApiError(robot.error, 404)) {
       return (
         <div className="flex flex-col items-start gap-4">
-          <PageHeader title="Robot not found" description="It does not exist, was moved to the bin, or belongs to a team you are not in." />
+          <PageHeader
+            title="Robot not found"
+            description="It does not exist, was moved to the bin, or belongs to a team you are not in."
+          />
           <ButtonLink to={`/teams/${teamId}`} variant="secondary">
             Back to the team
           </ButtonLink>
@@ -42,7 +45,11 @@ export function RobotEditorRoute() {
       sections={EDITOR_SECTIONS}
       basePath={basePath}
       save={save.mutateAsync}
-      revisionQuery={(n) => ({ queryKey: robotKeys.revision(robotId, n), queryFn: () => getRevision(robotId, n), staleTime: Infinity })}
+      revisionQuery={(n) => ({
+        queryKey: robotKeys.revision(robotId, n),
+        queryFn: () => getRevision(robotId, n),
+        staleTime: Infinity,
+      })}
       onStale={() => void robot.refetch()}
     />
   );

@@ -10,7 +10,10 @@ export function SignUpRoute() {
   const signInLink = `/sign-in${params.size ? `?${params.toString()}` : ''}`;
   return (
     <>
-      <AuthHeading title="Create an account" description="Keep your robots' configurations, revisions and firmware in one place." />
+      <AuthHeading
+        title="Create an account"
+        description="Keep your robots' configurations, revisions and firmware in one place."
+      />
       <SignUpForm defaultEmail={params.get('email') ?? ''} onSignedUp={() => navigate(next, { replace: true })} />
       <p className="mt-6 border-t border-rule pt-4 text-sm text-ink-muted">
         Already have an account?{' '}

@@ -15,7 +15,11 @@ export function TeamActivityRoute() {
 /** Owners see the full audit log: sign-ins of members included, filtered, paged. */
 function OwnerAuditLog({ team }: { team: TeamDetail }) {
   return (
-    <Panel title="Audit log" titleId="activity-title" description="Who did what in this team, and when members signed in; newest first.">
+    <Panel
+      title="Audit log"
+      titleId="activity-title"
+      description="Who did what in this team, and when members signed in; newest first."
+    >
       <AuditLog teamId={team.id} renderEvents={(events) => <ActivityList events={events} />} />
     </Panel>
   );

@@ -22,11 +22,21 @@ export function TeamPeopleRoute() {
           {members.isPending && <LoadingState label="Loading members…" />}
           {members.isError && <ErrorState message={errorMessage(members.error)} onRetry={() => members.refetch()} />}
           {members.data && me.data && (
-            <MembersTable teamId={team.id} teamName={team.name} members={members.data} myRole={team.role} myUserId={me.data.id} />
+            <MembersTable
+              teamId={team.id}
+              teamName={team.name}
+              members={members.data}
+              myRole={team.role}
+              myUserId={me.data.id}
+            />
           )}
         </Panel>
         {isOwner && (
-          <Panel title="Invite someone" titleId="invite-title" description="They get an e-mail with a one-time link that works for 7 days.">
+          <Panel
+            title="Invite someone"
+            titleId="invite-title"
+            description="They get an e-mail with a one-time link that works for 7 days."
+          >
             <InviteForm teamId={team.id} />
           </Panel>
         )}

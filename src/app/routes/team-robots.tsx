@@ -14,7 +14,9 @@ import { errorMessage } from '@/lib/api-client';
 import type { TeamDetail } from '@shared/schemas/teams';
 
 // The form carries the starter layouts and the pin plan: loaded when someone opens it.
-const NewRobotForm = lazy(async () => ({ default: (await import('@/features/robots/components/new-robot-form')).NewRobotForm }));
+const NewRobotForm = lazy(async () => ({
+  default: (await import('@/features/robots/components/new-robot-form')).NewRobotForm,
+}));
 
 /** The team dashboard: its robots, which one a boot line belongs to, and the cautions everyone sees before driving one. */
 export function TeamRobotsRoute() {
@@ -43,7 +45,9 @@ export function TeamRobotsRoute() {
           {robots.isError && <ErrorState message={errorMessage(robots.error)} onRetry={() => robots.refetch()} />}
           {robots.data && robots.data.length === 0 && (
             <EmptyState title="No robots in this team yet">
-              {canEdit ? 'Start one from a starter layout with “New robot”, or import a saved file.' : 'Editors and owners add robots.'}
+              {canEdit
+                ? 'Start one from a starter layout with “New robot”, or import a saved file.'
+                : 'Editors and owners add robots.'}
             </EmptyState>
           )}
           {robots.data && robots.data.length > 0 && <RobotTable robots={robots.data} teamName={team.name} />}

@@ -12,13 +12,18 @@ export function TeamsRoute() {
   const navigate = useNavigate();
   return (
     <>
-      <PageHeader title="Your teams" description="Robots belong to teams. Everyone in a team sees its robots; roles decide who may change them." />
+      <PageHeader
+        title="Your teams"
+        description="Robots belong to teams. Everyone in a team sees its robots; roles decide who may change them."
+      />
       <div className="grid items-start gap-6 lg:grid-cols-[1fr_22rem]">
         <div>
           {teams.isPending && <LoadingState label="Loading your teams…" />}
           {teams.isError && <ErrorState message={errorMessage(teams.error)} onRetry={() => teams.refetch()} />}
           {teams.data && teams.data.length === 0 && (
-            <EmptyState title="You are not in a team yet">Create one, or open the invitation link someone sent you.</EmptyState>
+            <EmptyState title="You are not in a team yet">
+              Create one, or open the invitation link someone sent you.
+            </EmptyState>
           )}
           {teams.data && teams.data.length > 0 && <TeamList teams={teams.data} />}
         </div>

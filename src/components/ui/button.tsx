@@ -33,7 +33,16 @@ export interface ButtonProps extends ButtonHTMLAttributes<HTMLButtonElement> {
   ref?: Ref<HTMLButtonElement>;
 }
 
-export function Button({ variant, size, busy = false, className, children, disabled, type = 'button', ...rest }: ButtonProps) {
+export function Button({
+  variant,
+  size,
+  busy = false,
+  className,
+  children,
+  disabled,
+  type = 'button',
+  ...rest
+}: ButtonProps) {
   return (
     <button
       type={type}

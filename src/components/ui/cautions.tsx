@@ -16,7 +16,9 @@ export function Cautions({ className, compact = false }: { className?: string; c
         {CAUTIONS_TITLE}
       </h2>
       <p className="mt-1 text-sm text-ink-soft">{CAUTIONS_INTRO}</p>
-      <ul className={cx('mt-2 list-disc space-y-1 pl-5 text-sm text-ink-soft marker:text-warn', compact && 'space-y-0.5')}>
+      <ul
+        className={cx('mt-2 list-disc space-y-1 pl-5 text-sm text-ink-soft marker:text-warn', compact && 'space-y-0.5')}
+      >
         {SAFETY_CAUTIONS.map((caution) => (
           <li key={caution}>{caution}</li>
         ))}

@@ -13,7 +13,10 @@ export function LoadingState({ label = 'Loading…' }: { label?: string }) {
 
 export function ErrorState({ message, onRetry }: { message: string; onRetry?: () => void }) {
   return (
-    <div role="alert" className="flex flex-wrap items-center gap-3 rounded-md border border-error/30 bg-error-soft px-4 py-3 text-error-strong">
+    <div
+      role="alert"
+      className="flex flex-wrap items-center gap-3 rounded-md border border-error/30 bg-error-soft px-4 py-3 text-error-strong"
+    >
       <span>{message}</span>
       {onRetry && (
         <Button variant="secondary" size="sm" onClick={onRetry}>

@@ -15,7 +15,9 @@ export function Table({ caption, children, className }: { caption?: string; chil
 }
 
 export function THead({ children }: { children: ReactNode }) {
-  return <thead className="border-b border-rule-strong text-xs tracking-wide text-ink-muted uppercase">{children}</thead>;
+  return (
+    <thead className="border-b border-rule-strong text-xs tracking-wide text-ink-muted uppercase">{children}</thead>
+  );
 }
 
 export function TBody({ children }: { children: ReactNode }) {

@@ -48,7 +48,11 @@ export interface TextFieldProps extends InputHTMLAttributes<HTMLInputElement> {
 }
 
 /** What every control inside a FieldShell carries: its id, the error state and the description. */
-export function controlAttributes({ inputId, describedBy }: { inputId: string; describedBy: string | undefined }, error: string | undefined, extraClass?: string) {
+export function controlAttributes(
+  { inputId, describedBy }: { inputId: string; describedBy: string | undefined },
+  error: string | undefined,
+  extraClass?: string,
+) {
   return {
     id: inputId,
     'aria-invalid': error ? true : undefined,

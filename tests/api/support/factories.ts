@@ -20,7 +20,10 @@ export interface TestUser extends CurrentUser {
   password: string;
 }
 
-export async function makeUser(ctx: TestContext, overrides: { name?: string; email?: string; password?: string } = {}): Promise<TestUser> {
+export async function makeUser(
+  ctx: TestContext,
+  overrides: { name?: string; email?: string; password?: string } = {},
+): Promise<TestUser> {
   const password = overrides.password ?? `pass-${unique()}-word`;
   const row = insertUser(ctx.db, {
     name: overrides.name ?? 'Test Person',
@@ -62,7 +65,9 @@ export function makeInvitation(
 /** A team with one member of each role, an outsider, a spare member to act on, and a robot. */
 export async function makeTeamScenario(ctx: TestContext) {
   const [owner, editor, viewer, spare, outsider] = await Promise.all(
-    ['Owner', 'Editor', 'Viewer', 'Spare', 'Outsider'].map((name) => makeUser(ctx, { name, email: uniqueEmail(name.toLowerCase()) })),
+    ['Owner', 'Editor', 'Viewer', 'Spare', 'Outsider'].map((name) =>
+      makeUser(ctx, { name, email: uniqueEmail(name.toLowerCase()) }),
+    ),
   );
   const team = makeTeam(ctx, owner);
   addMember(ctx, team.id, editor, 'editor');

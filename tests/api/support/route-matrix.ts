@@ -26,7 +26,10 @@ const exportedConfig = () => Buffer.from(JSON.stringify(robotConfigInput()));
  * kind of caller must get. Non-members get 404 so ids do not leak; members below the needed
  * role get 403. A new route needs a row here, or the coverage test fails.
  */
-export const TEAM_ROUTES: Record<string, { request: (s: TeamScenario) => RouteRequest; expect: Record<Caller, number> }> = {
+export const TEAM_ROUTES: Record<
+  string,
+  { request: (s: TeamScenario) => RouteRequest; expect: Record<Caller, number> }
+> = {
   'GET /api/teams/:teamId': {
     request: (s) => ({ path: `/api/teams/${s.team.id}` }),
     expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
@@ -52,7 +55,10 @@ export const TEAM_ROUTES: Record<string, { request: (s: TeamScenario) => RouteRe
     expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 403, owner: 200 },
   },
   'POST /api/teams/:teamId/invitations': {
-    request: (s) => ({ path: `/api/teams/${s.team.id}/invitations`, body: { email: uniqueEmail('new'), role: 'viewer' } }),
+    request: (s) => ({
+      path: `/api/teams/${s.team.id}/invitations`,
+      body: { email: uniqueEmail('new'), role: 'viewer' },
+    }),
     expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 403, owner: 201 },
   },
   'DELETE /api/teams/:teamId/invitations/:invitationId': {
@@ -64,7 +70,10 @@ export const TEAM_ROUTES: Record<string, { request: (s: TeamScenario) => RouteRe
     expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
   },
   'POST /api/teams/:teamId/robots': {
-    request: (s) => ({ path: `/api/teams/${s.team.id}/robots`, body: { name: 'Matrix Bot', config: robotConfigInput() } }),
+    request: (s) => ({
+      path: `/api/teams/${s.team.id}/robots`,
+      body: { name: 'Matrix Bot', config: robotConfigInput() },
+    }),
     expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 201, owner: 201 },
   },
   'GET /api/robots/:robotId': {
@@ -93,11 +102,17 @@ export const TEAM_ROUTES: Record<string, { request: (s: TeamScenario) => RouteRe
   // Firmware: viewers may read, download and compile-check; nobody changes anything.
   // The compile check's robot is on an ESP32, so it answers at once ("not checked here").
   'GET /api/robots/:robotId/revisions/:revision/files': {
-    request: (s) => ({ path: `/api/robots/${s.robot.id}/revisions/2/files`, before: (ctx) => saveWiredRevision(ctx, s) }),
+    request: (s) => ({
+      path: `/api/robots/${s.robot.id}/revisions/2/files`,
+      before: (ctx) => saveWiredRevision(ctx, s),
+    }),
     expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
   },
   'GET /api/robots/:robotId/revisions/:revision/bundle': {
-    request: (s) => ({ path: `/api/robots/${s.robot.id}/revisions/2/bundle`, before: (ctx) => saveWiredRevision(ctx, s) }),
+    request: (s) => ({
+      path: `/api/robots/${s.robot.id}/revisions/2/bundle`,
+      before: (ctx) => saveWiredRevision(ctx, s),
+    }),
     expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
   },
   'POST /api/robots/:robotId/revisions/:revision/verify': {
@@ -132,11 +147,17 @@ export const TEAM_ROUTES: Record<string, { request: (s: TeamScenario) => RouteRe
     expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 201, owner: 201 },
   },
   'POST /api/teams/:teamId/boot-line': {
-    request: (s) => ({ path: `/api/teams/${s.team.id}/boot-line`, body: { line: 'boot robot="Matrix" revision=1 hash=00000000' } }),
+    request: (s) => ({
+      path: `/api/teams/${s.team.id}/boot-line`,
+      body: { line: 'boot robot="Matrix" revision=1 hash=00000000' },
+    }),
     expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
   },
   'POST /api/robots/:robotId/boot-line': {
-    request: (s) => ({ path: `/api/robots/${s.robot.id}/boot-line`, body: { line: 'boot robot="Matrix" revision=1 hash=00000000' } }),
+    request: (s) => ({
+      path: `/api/robots/${s.robot.id}/boot-line`,
+      body: { line: 'boot robot="Matrix" revision=1 hash=00000000' },
+    }),
     expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
   },
   'GET /api/robots/:robotId/revisions/:revision/export': {
@@ -144,7 +165,10 @@ export const TEAM_ROUTES: Record<string, { request: (s: TeamScenario) => RouteRe
     expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
   },
   'POST /api/teams/:teamId/robots/import': {
-    request: (s) => ({ path: `/api/teams/${s.team.id}/robots/import`, upload: { field: 'file', data: exportedConfig(), fileName: 'matrix.json' } }),
+    request: (s) => ({
+      path: `/api/teams/${s.team.id}/robots/import`,
+      upload: { field: 'file', data: exportedConfig(), fileName: 'matrix.json' },
+    }),
     expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 201, owner: 201 },
   },
   'POST /api/robots/:robotId/revisions/import': {
@@ -162,7 +186,10 @@ export const TEAM_ROUTES: Record<string, { request: (s: TeamScenario) => RouteRe
     expect: { anonymous: 401, outsider: 404, viewer: 200, editor: 200, owner: 200 },
   },
   'PUT /api/robots/:robotId/photo': {
-    request: (s) => ({ path: `/api/robots/${s.robot.id}/photo`, upload: { field: 'photo', data: pngImage(), fileName: 'robot.png' } }),
+    request: (s) => ({
+      path: `/api/robots/${s.robot.id}/photo`,
+      upload: { field: 'photo', data: pngImage(), fileName: 'robot.png' },
+    }),
     expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 200, owner: 200 },
   },
   'DELETE /api/robots/:robotId/photo': {
@@ -197,9 +224,15 @@ export const TEAM_ROUTES: Record<string, { request: (s: TeamScenario) => RouteRe
  * Routes outside any team: who may call them. `anonymous` is the status without a session,
  * `signedIn` with one (of someone in no team).
  */
-export const OTHER_ROUTES: Record<string, { request: (s: TeamScenario) => RouteRequest; anonymous: number; signedIn: number }> = {
+export const OTHER_ROUTES: Record<
+  string,
+  { request: (s: TeamScenario) => RouteRequest; anonymous: number; signedIn: number }
+> = {
   'POST /api/auth/sign-up': {
-    request: () => ({ path: '/api/auth/sign-up', body: { name: 'New Person', email: uniqueEmail('signup'), password: 'a long enough password' } }),
+    request: () => ({
+      path: '/api/auth/sign-up',
+      body: { name: 'New Person', email: uniqueEmail('signup'), password: 'a long enough password' },
+    }),
     anonymous: 201,
     signedIn: 201,
   },
@@ -216,12 +249,19 @@ export const OTHER_ROUTES: Record<string, { request: (s: TeamScenario) => RouteR
     signedIn: 202,
   },
   'POST /api/auth/password-reset/confirm': {
-    request: () => ({ path: '/api/auth/password-reset/confirm', body: { token: 'x'.repeat(43), password: 'a long enough password' } }),
+    request: () => ({
+      path: '/api/auth/password-reset/confirm',
+      body: { token: 'x'.repeat(43), password: 'a long enough password' },
+    }),
     anonymous: 400,
     signedIn: 400,
   },
   'GET /api/teams': { request: () => ({ path: '/api/teams' }), anonymous: 401, signedIn: 200 },
-  'POST /api/teams': { request: () => ({ path: '/api/teams', body: { name: 'Another team' } }), anonymous: 401, signedIn: 201 },
+  'POST /api/teams': {
+    request: () => ({ path: '/api/teams', body: { name: 'Another team' } }),
+    anonymous: 401,
+    signedIn: 201,
+  },
   'GET /api/invitations/:token': {
     request: (s) => ({ path: `/api/invitations/${s.invitation.token}` }),
     anonymous: 200,

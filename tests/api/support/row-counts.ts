@@ -5,6 +5,9 @@ const TABLES = ['robots', 'revisions', 'flashes', 'audit_events', 'robot_photos'
 /** How many rows each table holds, to show that a refused request wrote nothing. */
 export function rowCounts(ctx: TestContext): Record<(typeof TABLES)[number], number> {
   return Object.fromEntries(
-    TABLES.map((table) => [table, (ctx.database.sqlite.prepare(`select count(*) as n from ${table}`).get() as { n: number }).n]),
+    TABLES.map((table) => [
+      table,
+      (ctx.database.sqlite.prepare(`select count(*) as n from ${table}`).get() as { n: number }).n,
+    ]),
   ) as Record<(typeof TABLES)[number], number>;
 }

@@ -21,7 +21,16 @@ describe('the audit log', () => {
       'GET /api/teams/team-1/audit': (call) =>
         call.url.includes('before=')
           ? [200, { events: [event(3, 'user.signed_in')], nextBefore: null }]
-          : [200, { events: [event(9, 'flash.recorded', { number: 4, name: 'Aisle Scout', note: 'club night' }), event(8, 'robot.deleted', { name: 'Old Kiwi' })], nextBefore: 8 }],
+          : [
+              200,
+              {
+                events: [
+                  event(9, 'flash.recorded', { number: 4, name: 'Aisle Scout', note: 'club night' }),
+                  event(8, 'robot.deleted', { name: 'Old Kiwi' }),
+                ],
+                nextBefore: 8,
+              },
+            ],
     });
     renderScreen(<AuditLog teamId="team-1" renderEvents={(events) => <ActivityList events={events} />} />);
     expect(await screen.findByText('flashed revision 4 onto Aisle Scout: “club night”', { exact: false })).toBeTruthy();
@@ -41,8 +50,12 @@ describe('the audit log', () => {
   });
 
   it('says the bin was emptied by Mixwright itself, not by a person', () => {
-    renderScreen(<ActivityList events={[{ ...event(5, 'robot.purged', { name: 'Old Kiwi', afterDays: 30 }), actorName: null }]} />);
+    renderScreen(
+      <ActivityList events={[{ ...event(5, 'robot.purged', { name: 'Old Kiwi', afterDays: 30 }), actorName: null }]} />,
+    );
     expect(screen.getByText('Mixwright')).toBeTruthy();
-    expect(screen.getByText('removed the robot Old Kiwi for good, 30 days after it was deleted', { exact: false })).toBeTruthy();
+    expect(
+      screen.getByText('removed the robot Old Kiwi for good, 30 days after it was deleted', { exact: false }),
+    ).toBeTruthy();
   });
 });

@@ -24,14 +24,25 @@ describe('the boot-line box', () => {
     await user.click(screen.getByLabelText('Boot line from the serial monitor'));
     await user.paste(LINE);
     await user.click(screen.getByRole('button', { name: 'Which revision is this?' }));
-    expect((await screen.findByRole('status')).textContent).toContain('This robot runs revision 2; the head is revision 3.');
+    expect((await screen.findByRole('status')).textContent).toContain(
+      'This robot runs revision 2; the head is revision 3.',
+    );
     expect(screen.getByText('behind head r3')).toBeTruthy();
     expect(calls[0].body).toEqual({ line: LINE });
   });
 
   it('puts the reason beside the box when the line cannot be read', async () => {
     routeFetch({
-      'POST /api/robots/robot-1/boot-line': [400, { error: { code: 'invalid_input', message: 'No boot line found', fields: { line: 'No boot line found: paste the line the robot prints at start-up' } } }],
+      'POST /api/robots/robot-1/boot-line': [
+        400,
+        {
+          error: {
+            code: 'invalid_input',
+            message: 'No boot line found',
+            fields: { line: 'No boot line found: paste the line the robot prints at start-up' },
+          },
+        },
+      ],
     });
     renderScreen(<BootLineBox robotId="robot-1" />);
     const user = userEvent.setup();

@@ -4,7 +4,14 @@ import { describe, expect, it } from 'vitest';
 import { FlashLogPanel } from '@/features/history/components/flash-log-panel';
 import { renderScreen, routeFetch } from './support';
 
-const flash = { id: 7, revisionNumber: 2, flashedAt: '2026-03-01T18:00:00.000Z', flashedByName: 'Student Lead', note: 'bench test passed', createdAt: '2026-03-01T18:00:00.000Z' };
+const flash = {
+  id: 7,
+  revisionNumber: 2,
+  flashedAt: '2026-03-01T18:00:00.000Z',
+  flashedByName: 'Student Lead',
+  note: 'bench test passed',
+  createdAt: '2026-03-01T18:00:00.000Z',
+};
 
 describe('the flash log panel', () => {
   it('records the chosen revision with a time and a note', async () => {

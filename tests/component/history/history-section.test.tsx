@@ -9,15 +9,30 @@ import { entry, historyOf, renderScreen, robotOf, routeFetch, sectionProps } fro
 const HISTORY = historyOf(
   [
     entry(3, { message: 'Quicker failsafe', problems: { errors: 1, warnings: 2 } }),
-    entry(2, { message: 'Flip left wheel', flashes: [{ flashedAt: '2026-02-02T18:00:00.000Z', flashedByName: 'Priya Okafor' }] }),
+    entry(2, {
+      message: 'Flip left wheel',
+      flashes: [{ flashedAt: '2026-02-02T18:00:00.000Z', flashedByName: 'Priya Okafor' }],
+    }),
     entry(1, { message: 'First revision' }),
   ],
-  { id: 1, revisionNumber: 2, flashedAt: '2026-02-02T18:00:00.000Z', flashedByName: 'Priya Okafor', note: '', createdAt: '2026-02-02T18:00:00.000Z' },
+  {
+    id: 1,
+    revisionNumber: 2,
+    flashedAt: '2026-02-02T18:00:00.000Z',
+    flashedByName: 'Priya Okafor',
+    note: '',
+    createdAt: '2026-02-02T18:00:00.000Z',
+  },
 );
 
 function diffOf(from: number, to: number): RevisionDiff {
   return {
-    from: { number: from, message: `Change ${from}`, authorName: 'Priya Okafor', createdAt: '2026-02-02T10:00:00.000Z' },
+    from: {
+      number: from,
+      message: `Change ${from}`,
+      authorName: 'Priya Okafor',
+      createdAt: '2026-02-02T10:00:00.000Z',
+    },
     to: { number: to, message: `Change ${to}`, authorName: 'Priya Okafor', createdAt: '2026-02-03T10:00:00.000Z' },
     settings: [
       {
@@ -33,7 +48,13 @@ function diffOf(from: number, to: number): RevisionDiff {
     ],
     files: {
       available: true,
-      changed: [fileDiff('greenhouse_cart/mw_config.h', '#pragma once\n#define MW_FAILSAFE_MS 250\n', '#pragma once\n#define MW_FAILSAFE_MS 150\n')],
+      changed: [
+        fileDiff(
+          'greenhouse_cart/mw_config.h',
+          '#pragma once\n#define MW_FAILSAFE_MS 250\n',
+          '#pragma once\n#define MW_FAILSAFE_MS 150\n',
+        ),
+      ],
       stampOnly: ['greenhouse_cart/mw_mixer.h'],
       unchanged: [],
     },
@@ -76,7 +97,9 @@ describe('the history section', () => {
   it('shows the generated files side by side with the changed part marked', async () => {
     answers();
     renderScreen(<HistorySection {...sectionProps()} />);
-    const table = await screen.findByRole('table', { name: /mw_config.h: revision 2 on the left, revision 3 on the right/ });
+    const table = await screen.findByRole('table', {
+      name: /mw_config.h: revision 2 on the left, revision 3 on the right/,
+    });
     const marks = table.querySelectorAll('mark');
     expect([...marks].map((m) => m.textContent)).toEqual(['2', '1']);
     expect(screen.getByText(/1 file differs only in the revision stamp/)).toBeTruthy();
@@ -84,14 +107,19 @@ describe('the history section', () => {
 
   it('restores a revision with a note, on top of the head it showed', async () => {
     const { calls } = answers({
-      'POST /api/robots/robot-1/revisions/1/restore': [201, { revision: { number: 4, message: 'Restored revision 1: back to basics' } }],
+      'POST /api/robots/robot-1/revisions/1/restore': [
+        201,
+        { revision: { number: 4, message: 'Restored revision 1: back to basics' } },
+      ],
     });
     renderScreen(<HistorySection {...sectionProps()} />);
     const user = userEvent.setup();
     await user.click(await screen.findByRole('button', { name: 'Restore revision 1' }));
     await user.type(screen.getByLabelText('Why restore revision 1? (optional)'), 'back to basics');
     await user.click(screen.getByRole('button', { name: 'Restore as revision 4' }));
-    await waitFor(() => expect(calls.find((c) => c.method === 'POST')?.body).toEqual({ baseRevision: 3, note: 'back to basics' }));
+    await waitFor(() =>
+      expect(calls.find((c) => c.method === 'POST')?.body).toEqual({ baseRevision: 3, note: 'back to basics' }),
+    );
   });
 
   it('shows a viewer everything but no way to change anything', async () => {
@@ -101,7 +129,9 @@ describe('the history section', () => {
     expect(screen.queryByRole('button', { name: /^Restore/ })).toBeNull();
     expect(screen.queryByRole('form', { name: 'Record a flash' })).toBeNull();
     expect(screen.queryByRole('form', { name: 'Import as a new revision' })).toBeNull();
-    expect(screen.getByRole('link', { name: /Download greenhouse_cart-r3.json/ }).getAttribute('href')).toBe('/api/robots/robot-1/revisions/3/export');
+    expect(screen.getByRole('link', { name: /Download greenhouse_cart-r3.json/ }).getAttribute('href')).toBe(
+      '/api/robots/robot-1/revisions/3/export',
+    );
   });
 
   it('offers the bin to owners only', async () => {

@@ -10,7 +10,10 @@ describe('the import dialog', () => {
   it('uploads the file and the name as a form, then reports what the import did', async () => {
     const robot = robotOf({ id: 'robot-9', name: 'Bench Copy', headRevision: 1 });
     const { calls } = routeFetch({
-      'POST /api/teams/team-1/robots/import': [201, { robot, robotId: 'robot-9', revision: 1, fromVersion: 1, notes: ['Converted from schema version 1 to 2.'] }],
+      'POST /api/teams/team-1/robots/import': [
+        201,
+        { robot, robotId: 'robot-9', revision: 1, fromVersion: 1, notes: ['Converted from schema version 1 to 2.'] },
+      ],
     });
     const onImported = vi.fn();
     renderScreen(<ImportRobotDialog teamId="team-1" onImported={onImported} />);
@@ -31,14 +34,25 @@ describe('the import dialog', () => {
 
   it('shows why a file was refused', async () => {
     routeFetch({
-      'POST /api/teams/team-1/robots/import': [400, { error: { code: 'import_rejected', message: 'The zip has an unsafe path: "../x" climbs out of the archive with ..', fields: { file: '…' } } }],
+      'POST /api/teams/team-1/robots/import': [
+        400,
+        {
+          error: {
+            code: 'import_rejected',
+            message: 'The zip has an unsafe path: "../x" climbs out of the archive with ..',
+            fields: { file: '…' },
+          },
+        },
+      ],
     });
     renderScreen(<ImportRobotDialog teamId="team-1" />);
     const user = userEvent.setup();
     await user.click(screen.getByRole('button', { name: 'Import a robot' }));
     await user.upload(screen.getByLabelText('Configuration file (.json) or firmware bundle (.zip)'), file());
     await user.click(screen.getByRole('button', { name: 'Import robot' }));
-    expect((await screen.findByRole('alert')).textContent).toBe('The zip has an unsafe path: "../x" climbs out of the archive with ..');
+    expect((await screen.findByRole('alert')).textContent).toBe(
+      'The zip has an unsafe path: "../x" climbs out of the archive with ..',
+    );
   });
 
   it('closes with Escape and gives focus back to its button', async () => {

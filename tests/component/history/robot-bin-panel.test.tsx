@@ -16,11 +16,19 @@ const binned = {
 describe('the deleted robots panel', () => {
   it('lists deleted robots with the last day they can come back, and restores one', async () => {
     const { calls } = routeFetch({
-      'GET /api/teams/team-1/robot-bin': () => [200, { robots: calls.some((c) => c.method === 'POST') ? [] : [binned] }],
-      'POST /api/teams/team-1/robot-bin/robot-5/restore': [200, { robot: robotOf({ id: 'robot-5', name: 'Aisle Scout' }) }],
+      'GET /api/teams/team-1/robot-bin': () => [
+        200,
+        { robots: calls.some((c) => c.method === 'POST') ? [] : [binned] },
+      ],
+      'POST /api/teams/team-1/robot-bin/robot-5/restore': [
+        200,
+        { robot: robotOf({ id: 'robot-5', name: 'Aisle Scout' }) },
+      ],
     });
     renderScreen(<DeletedRobotsPanel teamId="team-1" />);
-    expect((await screen.findByText(/deleted 1 Mar 2026 by Mentor/)).textContent).toContain('restorable until 31 Mar 2026');
+    expect((await screen.findByText(/deleted 1 Mar 2026 by Mentor/)).textContent).toContain(
+      'restorable until 31 Mar 2026',
+    );
     await userEvent.setup().click(screen.getByRole('button', { name: 'Restore Aisle Scout' }));
     await waitFor(() => expect(screen.queryByText('Aisle Scout')).toBeNull());
   });

@@ -21,13 +21,23 @@ type Handler = (call: Call) => [number, unknown];
 export function routeFetch(handlers: Record<string, Handler | [number, unknown]>): { calls: Call[] } {
   const calls: Call[] = [];
   globalThis.fetch = (async (url: string, init?: RequestInit) => {
-    const call = { method: init?.method ?? 'GET', url, body: init?.body instanceof FormData ? init.body : init?.body ? JSON.parse(String(init.body)) : undefined };
+    const call = {
+      method: init?.method ?? 'GET',
+      url,
+      body: init?.body instanceof FormData ? init.body : init?.body ? JSON.parse(String(init.body)) : undefined,
+    };
     calls.push(call);
     const key = `${call.method} ${url.split('?')[0]}`;
     const handler = handlers[key];
-    if (!handler) return new Response(JSON.stringify({ error: { code: 'not_found', message: `No test answer for ${key}` } }), { status: 404 });
+    if (!handler)
+      return new Response(JSON.stringify({ error: { code: 'not_found', message: `No test answer for ${key}` } }), {
+        status: 404,
+      });
     const [status, body] = typeof handler === 'function' ? handler(call) : handler;
-    return new Response(status === 204 ? null : JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
+    return new Response(status === 204 ? null : JSON.stringify(body), {
+      status,
+      headers: { 'Content-Type': 'application/json' },
+    });
   }) as typeof fetch;
   return { calls };
 }
@@ -77,7 +87,13 @@ export function sectionProps(robot = robotOf()) {
   const config = robotConfig();
   return {
     robot,
-    head: { number: robot.headRevision, message: 'Head', authorName: 'Priya Okafor', createdAt: robot.updatedAt, config },
+    head: {
+      number: robot.headRevision,
+      message: 'Head',
+      authorName: 'Priya Okafor',
+      createdAt: robot.updatedAt,
+      config,
+    },
     config,
     onChange: () => {},
     problems: [],

@@ -12,7 +12,11 @@ const HALF = SIZE / 2 - PAD;
 describe('the axis curve plot', () => {
   it('follows the engine’s shaping at every sample', () => {
     const { container } = renderSvg(<AxisCurvePlot axis={AXIS} label="Forward" size={SIZE} />);
-    const points = container.querySelector('[data-testid="axis-curve"]')!.getAttribute('points')!.split(' ').map((p) => p.split(',').map(Number));
+    const points = container
+      .querySelector('[data-testid="axis-curve"]')!
+      .getAttribute('points')!
+      .split(' ')
+      .map((p) => p.split(',').map(Number));
     for (const [sx, sy] of points) {
       const input = (sx - SIZE / 2) / HALF;
       expect((SIZE / 2 - sy) / HALF).toBeCloseTo(shapeAxis(input, { low: -1, centre: 0, high: 1 }, AXIS), 2);
@@ -28,12 +32,17 @@ describe('the axis curve plot', () => {
   it('marks the live input on the curve', () => {
     const { container } = renderSvg(<AxisCurvePlot axis={AXIS} label="Forward" size={SIZE} input={0.6} />);
     const marker = container.querySelector('[data-testid="axis-marker"]')!;
-    expect((SIZE / 2 - numberAttr(marker, 'cy')) / HALF).toBeCloseTo(shapeAxis(0.6, { low: -1, centre: 0, high: 1 }, AXIS), 9);
+    expect((SIZE / 2 - numberAttr(marker, 'cy')) / HALF).toBeCloseTo(
+      shapeAxis(0.6, { low: -1, centre: 0, high: 1 }, AXIS),
+      9,
+    );
   });
 
   it('says its settings in words, in percent like the fields beside it', () => {
     renderSvg(<AxisCurvePlot axis={AXIS} label="Yaw" />);
-    expect(screen.getByRole('img', { name: /Yaw stick curve/ }).textContent).toContain('deadband 10 % of half travel, expo 50 %, rate 80 %');
+    expect(screen.getByRole('img', { name: /Yaw stick curve/ }).textContent).toContain(
+      'deadband 10 % of half travel, expo 50 %, rate 80 %',
+    );
   });
 
   it('shows under the plot what half stick gives, in percent', () => {

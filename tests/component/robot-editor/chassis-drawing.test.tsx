@@ -73,7 +73,10 @@ describe('the chassis drawing', () => {
     const frontLeft = wheel('Front left');
     const angle = numberAttr(frontLeft, 'data-angle');
     const line = frontLeft.querySelector('line')!;
-    const local = { x: Number(line.getAttribute('x2')) - Number(line.getAttribute('x1')), y: Number(line.getAttribute('y2')) - Number(line.getAttribute('y1')) };
+    const local = {
+      x: Number(line.getAttribute('x2')) - Number(line.getAttribute('x1')),
+      y: Number(line.getAttribute('y2')) - Number(line.getAttribute('y1')),
+    };
     const onScreen = rotateSvg(local.x, local.y, angle);
     // The wheel is up-left of the centre; an X roller runs up-left to down-right: dx and dy share a sign.
     expect(Math.abs(onScreen.x)).toBeCloseTo(Math.abs(onScreen.y), 6);
@@ -84,7 +87,9 @@ describe('the chassis drawing', () => {
     const config = makeConfig('quad-mecanum');
     renderSvg(<ChassisDrawing wheels={config.chassis.wheels} title="Aisle Scout, top view" />);
     const img = screen.getByRole('img', { name: /Aisle Scout, top view/ });
-    expect(img.textContent).toContain('Front left (motor Front left): mecanum wheel, 40 mm radius, 80 mm ahead of and 95 mm left of the centre');
+    expect(img.textContent).toContain(
+      'Front left (motor Front left): mecanum wheel, 40 mm radius, 80 mm ahead of and 95 mm left of the centre',
+    );
   });
 
   it('shows each wheel turning the way a strafe command makes it', () => {
@@ -93,8 +98,14 @@ describe('the chassis drawing', () => {
     const commands = mixSticks(mixing, { forward: 0, strafe: 1, yaw: 0 });
     const byMotor = Object.fromEntries(mixing.motors.map((m, i) => [m, commands[i]]));
     const { container } = renderSvg(<ChassisDrawing wheels={config.chassis.wheels} motorCommands={byMotor} />);
-    const push = (name: string) => container.querySelector(`[data-testid="command-${name}"]`)!.getAttribute('data-push');
-    expect([push('Front left'), push('Front right'), push('Rear right'), push('Rear left')]).toEqual(['1', '-1', '1', '-1']);
+    const push = (name: string) =>
+      container.querySelector(`[data-testid="command-${name}"]`)!.getAttribute('data-push');
+    expect([push('Front left'), push('Front right'), push('Rear right'), push('Rear left')]).toEqual([
+      '1',
+      '-1',
+      '1',
+      '-1',
+    ]);
   });
 });
 
@@ -102,7 +113,10 @@ describe('the chassis drawing’s wheel labels', () => {
   /** Motors named apart from their wheels, and long: "M2 front right gearmotor, 12 V 300 rpm". */
   const longNames = (layout: (typeof DRIVE_LAYOUT_IDS)[number]) =>
     makeConfig(layout, (c) => {
-      c.chassis.wheels = c.chassis.wheels.map((w, i) => ({ ...w, motor: `M${i + 1} ${w.name.toLowerCase()} gearmotor, 12 V 300 rpm` }));
+      c.chassis.wheels = c.chassis.wheels.map((w, i) => ({
+        ...w,
+        motor: `M${i + 1} ${w.name.toLowerCase()} gearmotor, 12 V 300 rpm`,
+      }));
     }).chassis.wheels;
 
   // Each label's extent from what is drawn: its anchor, first baseline and lines, with the text
@@ -111,13 +125,21 @@ describe('the chassis drawing’s wheel labels', () => {
     [...container.querySelectorAll('text')]
       .filter((text) => text.querySelector('tspan'))
       .map((text) => {
-        const lines = [...text.querySelectorAll('tspan')].map((t) => estimateTextWidth(t.textContent ?? '', 12, t.getAttribute('font-weight') === '600'));
+        const lines = [...text.querySelectorAll('tspan')].map((t) =>
+          estimateTextWidth(t.textContent ?? '', 12, t.getAttribute('font-weight') === '600'),
+        );
         const width = Math.max(...lines);
         const x = numberAttr(text, 'x');
         const y = numberAttr(text, 'y');
         const anchor = text.getAttribute('text-anchor');
         const left = anchor === 'start' ? x : anchor === 'end' ? x - width : x - width / 2;
-        return { text: text.textContent, left, right: left + width, top: y - 11, bottom: y + (lines.length - 1) * 14 + 4 };
+        return {
+          text: text.textContent,
+          left,
+          right: left + width,
+          top: y - 11,
+          bottom: y + (lines.length - 1) * 14 + 4,
+        };
       });
 
   describe.each([
@@ -125,22 +147,31 @@ describe('the chassis drawing’s wheel labels', () => {
     [420, 400],
     [420, 380],
   ])('at %i × %i', (width, height) => {
-    it.each(DRIVE_LAYOUT_IDS)('keeps every label of a %s inside the drawing, clear of the forward mark and the scale bar', (layout) => {
-      const wheels = longNames(layout);
-      const commands = Object.fromEntries(wheels.map((w) => [w.motor, -1]));
-      const { svg, container } = renderSvg(<ChassisDrawing wheels={wheels} motorCommands={commands} width={width} height={height} />);
-      expect(svg.getAttribute('viewBox')).toBe(`0 0 ${width} ${height}`);
-      const { inside, keepOut } = labelRoom(width, height);
-      const labels = boxes(container);
-      expect(labels).toHaveLength(wheels.length);
-      for (const box of labels) {
-        expect(box.left, `${box.text} runs off the left`).toBeGreaterThanOrEqual(inside.left);
-        expect(box.right, `${box.text} runs off the right`).toBeLessThanOrEqual(inside.right);
-        expect(box.top, `${box.text} runs off the top`).toBeGreaterThanOrEqual(inside.top);
-        expect(box.bottom, `${box.text} runs into the scale bar`).toBeLessThanOrEqual(inside.bottom);
-        for (const k of keepOut) expect(box.right <= k.left || box.left >= k.right || box.bottom <= k.top || box.top >= k.bottom, `${box.text} covers the forward mark`).toBe(true);
-      }
-    });
+    it.each(DRIVE_LAYOUT_IDS)(
+      'keeps every label of a %s inside the drawing, clear of the forward mark and the scale bar',
+      (layout) => {
+        const wheels = longNames(layout);
+        const commands = Object.fromEntries(wheels.map((w) => [w.motor, -1]));
+        const { svg, container } = renderSvg(
+          <ChassisDrawing wheels={wheels} motorCommands={commands} width={width} height={height} />,
+        );
+        expect(svg.getAttribute('viewBox')).toBe(`0 0 ${width} ${height}`);
+        const { inside, keepOut } = labelRoom(width, height);
+        const labels = boxes(container);
+        expect(labels).toHaveLength(wheels.length);
+        for (const box of labels) {
+          expect(box.left, `${box.text} runs off the left`).toBeGreaterThanOrEqual(inside.left);
+          expect(box.right, `${box.text} runs off the right`).toBeLessThanOrEqual(inside.right);
+          expect(box.top, `${box.text} runs off the top`).toBeGreaterThanOrEqual(inside.top);
+          expect(box.bottom, `${box.text} runs into the scale bar`).toBeLessThanOrEqual(inside.bottom);
+          for (const k of keepOut)
+            expect(
+              box.right <= k.left || box.left >= k.right || box.bottom <= k.top || box.top >= k.bottom,
+              `${box.text} covers the forward mark`,
+            ).toBe(true);
+        }
+      },
+    );
   });
 
   it('draws the robot smaller to make room for long names, and at full size for short ones', () => {
@@ -160,4 +191,3 @@ describe('the chassis drawing’s wheel labels', () => {
     expect(lines.at(-1)).toBe('wheel Front');
   });
 });
-

@@ -1,6 +1,10 @@
 import { render, screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { CommissioningDiagram, expectedWheelMotion, rollerPatternWords } from '@/features/robot-editor/components/commissioning-diagram';
+import {
+  CommissioningDiagram,
+  expectedWheelMotion,
+  rollerPatternWords,
+} from '@/features/robot-editor/components/commissioning-diagram';
 import { makeConfig } from '../../factories/engine';
 
 describe('the commissioning diagram', () => {

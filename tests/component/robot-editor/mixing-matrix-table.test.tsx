@@ -8,7 +8,11 @@ describe('the mixing matrix table', () => {
   it('shows each motor’s command for each stick, signed', () => {
     render(<MixingMatrixTable mixing={computeMixing(makeConfig('trio-omni'))} />);
     const rearLeft = screen.getByRole('row', { name: /^Rear left/ });
-    expect(within(rearLeft).getAllByRole('cell').map((c) => c.textContent)).toEqual(['+1.00', '\u22120.50', '+1.00']);
+    expect(
+      within(rearLeft)
+        .getAllByRole('cell')
+        .map((c) => c.textContent),
+    ).toEqual(['+1.00', '\u22120.50', '+1.00']);
   });
 
   it('says in words that a differential pair ignores its strafe stick', () => {

@@ -79,7 +79,17 @@ describe('dragging an on-screen stick', () => {
     render(<Stick seen={seen} />);
     const stick = screen.getByRole('slider');
     // A 148 px stick at the page's origin: centre (74, 74), knob travel 74 − 0.13·148 − 6 = 48.76 px.
-    stick.getBoundingClientRect = () => ({ left: 0, top: 0, width: 148, height: 148, right: 148, bottom: 148, x: 0, y: 0, toJSON: () => ({}) });
+    stick.getBoundingClientRect = () => ({
+      left: 0,
+      top: 0,
+      width: 148,
+      height: 148,
+      right: 148,
+      bottom: 148,
+      x: 0,
+      y: 0,
+      toJSON: () => ({}),
+    });
     const travel = 74 - 0.13 * 148 - 6;
     fireEvent.pointerDown(stick, { clientX: 74 + travel / 2, clientY: 74, pointerId: 1 });
     expect(seen.at(-1)!.x).toBeCloseTo(0.5, 9);

@@ -8,7 +8,12 @@ describe('the what-if-reversed panel', () => {
   it('offers one toggle per motor, none pressed at first', () => {
     render(<WhatIfReversedPanel config={makeConfig('quad-mecanum')} />);
     const toggles = screen.getAllByRole('button');
-    expect(toggles.map((t) => t.textContent?.replace(/^\W+/, ''))).toEqual(['Front left', 'Front right', 'Rear right', 'Rear left']);
+    expect(toggles.map((t) => t.textContent?.replace(/^\W+/, ''))).toEqual([
+      'Front left',
+      'Front right',
+      'Rear right',
+      'Rear left',
+    ]);
     expect(toggles.every((t) => t.getAttribute('aria-pressed') === 'false')).toBe(true);
   });
 
@@ -23,7 +28,8 @@ describe('the what-if-reversed panel', () => {
   it('turns the reversed motor’s wheel the other way in the drawing', () => {
     const config = makeConfig('differential');
     const { container } = render(<WhatIfReversedPanel config={config} defaultMotor="Right" />);
-    const push = (name: string) => container.querySelector(`[data-testid="command-${name}"]`)!.getAttribute('data-push');
+    const push = (name: string) =>
+      container.querySelector(`[data-testid="command-${name}"]`)!.getAttribute('data-push');
     // Forward stick: both wheels ahead, but the reversed right motor turns its wheel back.
     expect([push('Left'), push('Right')]).toEqual(['1', '-1']);
     expect(container.querySelector('[data-testid="resulting-motion"]')).toBeTruthy();

@@ -9,7 +9,10 @@ export function renderWithQuery(ui: ReactElement) {
 }
 
 /** Replaces fetch with one that answers every call with the given status and JSON body. */
-export function answerFetch(status: number, body: unknown): { calls: { url: string; init: RequestInit | undefined }[] } {
+export function answerFetch(
+  status: number,
+  body: unknown,
+): { calls: { url: string; init: RequestInit | undefined }[] } {
   const calls: { url: string; init: RequestInit | undefined }[] = [];
   globalThis.fetch = (async (url: string, init?: RequestInit) => {
     calls.push({ url, init });

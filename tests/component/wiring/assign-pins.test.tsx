@@ -8,7 +8,11 @@ import { pickerFor, renderWiring } from './render-wiring';
 describe('assigning free pins', () => {
   it('fills every role, keeps a locked pin where it is, and lists what changed', () => {
     // D6 is a legal but unusual choice (timer 0); the search would not pick it first.
-    const config = withPins(buildConfig({ board: 'uno', driver: 'pwm-dir', source: 'ppm' }), { 'Driver 1/b.pwm': 'D6' }, true);
+    const config = withPins(
+      buildConfig({ board: 'uno', driver: 'pwm-dir', source: 'ppm' }),
+      { 'Driver 1/b.pwm': 'D6' },
+      true,
+    );
     const view = renderWiring(config);
     fireEvent.click(screen.getByRole('button', { name: 'Assign free pins' }));
 
@@ -37,7 +41,9 @@ describe('assigning free pins', () => {
     const config = buildConfig({ board: 'uno', layout: 'quad-mecanum', driver: 'dual-pwm', source: 'ppm' });
     const view = renderWiring(config);
     fireEvent.click(screen.getByRole('button', { name: 'Assign free pins' }));
-    expect(screen.getByRole('alert').textContent).toBe('No pins were changed. The Uno has 6 PWM pins, this layout needs 8.');
+    expect(screen.getByRole('alert').textContent).toBe(
+      'No pins were changed. The Uno has 6 PWM pins, this layout needs 8.',
+    );
     expect(view.config()).toBe(config);
   });
 });

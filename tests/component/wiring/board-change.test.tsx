@@ -8,7 +8,8 @@ describe('changing the board', () => {
     const view = renderWiring(esp32Plan());
     fireEvent.change(screen.getByLabelText('Board'), { target: { value: 'uno' } });
     const message = screen.getByText(/The robot is now on the Uno/).textContent!;
-    for (const cleared of ['GPIO25 (Driver 1 A PWM)', 'GPIO35 (PPM signal)', 'GPIO13 (status LED)']) expect(message).toContain(cleared);
+    for (const cleared of ['GPIO25 (Driver 1 A PWM)', 'GPIO35 (PPM signal)', 'GPIO13 (status LED)'])
+      expect(message).toContain(cleared);
     expect(message).toContain('Every role is kept');
     const next = view.config();
     expect(next.wiring.board).toBe('uno');

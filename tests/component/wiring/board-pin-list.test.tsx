@@ -41,6 +41,13 @@ describe('the board’s pin list', () => {
   it('narrows to the pins in use', () => {
     const { container } = renderWiring(unoPlan());
     fireEvent.click(screen.getByRole('radio', { name: 'In use' }));
-    expect([...container.querySelectorAll<HTMLElement>('li[data-pin]')].map((r) => r.dataset.pin)).toEqual(['D2', 'D7', 'D8', 'D9', 'D10', 'D13']);
+    expect([...container.querySelectorAll<HTMLElement>('li[data-pin]')].map((r) => r.dataset.pin)).toEqual([
+      'D2',
+      'D7',
+      'D8',
+      'D9',
+      'D10',
+      'D13',
+    ]);
   });
 });

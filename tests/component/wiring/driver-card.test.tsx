@@ -37,7 +37,9 @@ describe('a driver card', () => {
 
   it('adds the motor supply range when the ratings’ source does not state it', () => {
     renderWiring(unoPlan({ driver: 'pwm-dir' }));
-    expect(within(card('Driver 1')).getByText(/Leave empty for the kind’s typical figures/).textContent).toContain('motor supply 6–30 V');
+    expect(within(card('Driver 1')).getByText(/Leave empty for the kind’s typical figures/).textContent).toContain(
+      'motor supply 6–30 V',
+    );
   });
 
   it('keeps shared roles’ pins when the kind changes and says what it cleared', () => {

@@ -11,7 +11,10 @@ beforeEach(() => localStorage.clear());
 
 /** The whole editor with the Wiring section, opened at `path` (below the robot). */
 function openEditor(config: RobotConfig, path: string) {
-  return renderEditor(robotDetail({ head: revisionDetail(3, config) }), { sections: { wiring: WiringSection }, path: `/teams/team-1/robots/robot-1/${path}` });
+  return renderEditor(robotDetail({ head: revisionDetail(3, config) }), {
+    sections: { wiring: WiringSection },
+    path: `/teams/team-1/robots/robot-1/${path}`,
+  });
 }
 
 const withRemote = () => unoPlan({ source: 'nrf24', remoteBoard: 'nano' });

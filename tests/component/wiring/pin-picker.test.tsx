@@ -46,11 +46,15 @@ describe('the pin picker', () => {
   });
 
   it('lists a pin the board does not have, so the stored value stays visible', () => {
-    const config = withPins(buildConfig({ board: 'uno', driver: 'pwm-dir', source: 'ppm' }), { 'Driver 1/a.pwm': 'GPIO25' });
+    const config = withPins(buildConfig({ board: 'uno', driver: 'pwm-dir', source: 'ppm' }), {
+      'Driver 1/a.pwm': 'GPIO25',
+    });
     const { container } = renderWiring(config);
     const select = pickerFor(container, 'driver:0:a.pwm');
     expect(select.value).toBe('GPIO25');
-    expect(within(roleRow(container, 'driver:0:a.pwm')).getByText(/GPIO25 \(for Driver 1 A PWM\) is not a pin of the Uno/)).toBeTruthy();
+    expect(
+      within(roleRow(container, 'driver:0:a.pwm')).getByText(/GPIO25 \(for Driver 1 A PWM\) is not a pin of the Uno/),
+    ).toBeTruthy();
   });
 
   it('writes the chosen pin into the draft and lets a viewer only look', () => {

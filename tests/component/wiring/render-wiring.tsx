@@ -8,11 +8,28 @@ import { WiringSection } from '@/features/robot-editor/sections/wiring-section';
 
 /** A saved revision of a configuration, as the server returns it. */
 export function revisionOf(config: RobotConfig, number = 3): RevisionDetail {
-  return { number, message: 'Moved the receiver', authorName: 'Tamsin Reed', createdAt: '2026-02-10T09:30:00.000Z', config };
+  return {
+    number,
+    message: 'Moved the receiver',
+    authorName: 'Tamsin Reed',
+    createdAt: '2026-02-10T09:30:00.000Z',
+    config,
+  };
 }
 
 export function robotOf(config: RobotConfig): RobotDetail['robot'] {
-  return { id: 'robot-7', teamId: 'team-2', name: config.name, createdAt: '2026-01-05T10:00:00.000Z', headRevision: 3, updatedAt: '2026-02-10T09:30:00.000Z', lastFlash: null, photoUrl: null, teamName: 'Quarry Lane Robotics', role: 'editor' };
+  return {
+    id: 'robot-7',
+    teamId: 'team-2',
+    name: config.name,
+    createdAt: '2026-01-05T10:00:00.000Z',
+    headRevision: 3,
+    updatedAt: '2026-02-10T09:30:00.000Z',
+    lastFlash: null,
+    photoUrl: null,
+    teamName: 'Quarry Lane Robotics',
+    role: 'editor',
+  };
 }
 
 /**
@@ -26,7 +43,14 @@ export function renderWiring(initial: RobotConfig, options: { canEdit?: boolean 
     latest = config;
     return (
       <MemoryRouter>
-        <WiringSection robot={robotOf(initial)} head={revisionOf(initial)} config={config} onChange={setConfig} problems={robotProblems(config)} canEdit={options.canEdit ?? true} />
+        <WiringSection
+          robot={robotOf(initial)}
+          head={revisionOf(initial)}
+          config={config}
+          onChange={setConfig}
+          problems={robotProblems(config)}
+          canEdit={options.canEdit ?? true}
+        />
       </MemoryRouter>
     );
   }

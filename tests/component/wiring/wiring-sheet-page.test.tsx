@@ -18,7 +18,11 @@ function serve(routes: Record<string, unknown>): string[] {
   globalThis.fetch = (async (url: string) => {
     asked.push(url);
     const body = routes[url];
-    if (body === undefined) return new Response(JSON.stringify({ error: { code: 'not_found', message: 'Not found' } }), { status: 404, headers: { 'Content-Type': 'application/json' } });
+    if (body === undefined)
+      return new Response(JSON.stringify({ error: { code: 'not_found', message: 'Not found' } }), {
+        status: 404,
+        headers: { 'Content-Type': 'application/json' },
+      });
     return new Response(JSON.stringify(body), { status: 200, headers: { 'Content-Type': 'application/json' } });
   }) as typeof fetch;
   return asked;
@@ -32,7 +36,12 @@ function renderPage(revision: number | null, badRevision?: string) {
   return render(
     <QueryClientProvider client={client}>
       <MemoryRouter>
-        <WiringSheetPage robotId="robot-7" revision={revision} badRevision={badRevision} backTo="/teams/team-2/robots/robot-7" />
+        <WiringSheetPage
+          robotId="robot-7"
+          revision={revision}
+          badRevision={badRevision}
+          backTo="/teams/team-2/robots/robot-7"
+        />
       </MemoryRouter>
     </QueryClientProvider>,
   );

@@ -6,12 +6,21 @@ import { WiringSheet } from '@/features/wiring/components/wiring-sheet';
 import { unoPlan } from '../../fixtures/pin-plans';
 import { revisionOf } from './render-wiring';
 
-const cellsOf = (row: HTMLElement) => within(row).getAllByRole('cell').map((c) => c.textContent?.trim());
+const cellsOf = (row: HTMLElement) =>
+  within(row)
+    .getAllByRole('cell')
+    .map((c) => c.textContent?.trim());
 
 function renderSheet(photoUrl?: string) {
   return render(
     <MemoryRouter>
-      <WiringSheet robotName="Test robot" teamName="Quarry Lane Robotics" revision={revisionOf(unoPlan(), 5)} photoUrl={photoUrl} printedAt={new Date('2026-03-01T12:00:00Z')} />
+      <WiringSheet
+        robotName="Test robot"
+        teamName="Quarry Lane Robotics"
+        revision={revisionOf(unoPlan(), 5)}
+        photoUrl={photoUrl}
+        printedAt={new Date('2026-03-01T12:00:00Z')}
+      />
     </MemoryRouter>,
   );
 }
@@ -40,7 +49,10 @@ describe('the wiring sheet', () => {
     expect(header.textContent).toContain('PWM + direction');
     expect(header.textContent).toContain('stop: brake');
     expect(header.textContent).toContain('runs at 490.2 Hz');
-    const rows = within(table).getAllByRole('row').filter((r) => within(r).queryAllByRole('cell').length > 0).map(cellsOf);
+    const rows = within(table)
+      .getAllByRole('row')
+      .filter((r) => within(r).queryAllByRole('cell').length > 0)
+      .map(cellsOf);
     expect(rows).toEqual([
       ['A', 'Left', 'PWM', 'D9', '~9', '9'],
       ['A', 'Left', 'Direction', 'D8', '8', '8'],
@@ -62,18 +74,30 @@ describe('the wiring sheet', () => {
   it('names every role still without a pin in one line of its open problems', () => {
     render(
       <MemoryRouter>
-        <WiringSheet robotName="Test robot" teamName="Quarry Lane Robotics" revision={revisionOf(unoPlan({}, { 'Driver 1/a.pwm': null, 'input/ppm': null }), 5)} />
+        <WiringSheet
+          robotName="Test robot"
+          teamName="Quarry Lane Robotics"
+          revision={revisionOf(unoPlan({}, { 'Driver 1/a.pwm': null, 'input/ppm': null }), 5)}
+        />
       </MemoryRouter>,
     );
     const open = screen.getByRole('region', { name: /2 open wiring problems/ });
-    expect(within(open).getAllByRole('listitem').map((li) => li.textContent)).toEqual(['Error: no pin yet for Driver 1 A PWM, PPM signal.']);
+    expect(
+      within(open)
+        .getAllByRole('listitem')
+        .map((li) => li.textContent),
+    ).toEqual(['Error: no pin yet for Driver 1 A PWM, PPM signal.']);
   });
 
   it('boxes open warnings in amber and keeps brick red for errors', () => {
     const sheetOf = (overrides: Record<string, string | null>) =>
       render(
         <MemoryRouter>
-          <WiringSheet robotName="Test robot" teamName="Quarry Lane Robotics" revision={revisionOf(unoPlan({}, overrides), 5)} />
+          <WiringSheet
+            robotName="Test robot"
+            teamName="Quarry Lane Robotics"
+            revision={revisionOf(unoPlan({}, overrides), 5)}
+          />
         </MemoryRouter>,
       );
     const warned = sheetOf({ 'status-led': null });
@@ -91,6 +115,8 @@ describe('the wiring sheet', () => {
     expect(container.querySelector('[data-slot="robot-photo"]')).toBeNull();
     unmount();
     renderSheet('/photos/test-robot.jpg');
-    expect(screen.getByRole('img', { name: 'Test robot, as built' }).getAttribute('src')).toBe('/photos/test-robot.jpg');
+    expect(screen.getByRole('img', { name: 'Test robot, as built' }).getAttribute('src')).toBe(
+      '/photos/test-robot.jpg',
+    );
   });
 });

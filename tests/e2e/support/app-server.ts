@@ -51,7 +51,16 @@ export async function startApp(options: StartOptions): Promise<RunningApp> {
   const url = `http://127.0.0.1:${port}`;
   const client: ClientHandlers = options.client === 'vite' ? await viteClient(server) : staticClient(options.client);
   const mailer = createSmtpMailer({ port: smtp.port, from: 'Mixwright <no-reply@mixwright.invalid>' });
-  server.on('request', createApp({ db: database.db, mailer, config: { ...config, appUrl: url, dataDir: dir }, mailbox: smtp.mailbox, client: client.handlers }));
+  server.on(
+    'request',
+    createApp({
+      db: database.db,
+      mailer,
+      config: { ...config, appUrl: url, dataDir: dir },
+      mailbox: smtp.mailbox,
+      client: client.handlers,
+    }),
+  );
   return {
     url,
     database,

@@ -16,14 +16,24 @@ export interface Browser {
  * One person's browser: Debian's Chromium, headless, with a fresh profile. Two people in one
  * test are two of these, so they share no cookies.
  */
-export async function openBrowser(options: { width?: number; height?: number; deviceScaleFactor?: number } = {}): Promise<Browser> {
+export async function openBrowser(
+  options: { width?: number; height?: number; deviceScaleFactor?: number } = {},
+): Promise<Browser> {
   const profile = mkdtempSync(join(tmpdir(), 'mixwright-chromium-'));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: '/usr/bin/chromium',
     headless: true,
     viewport: { width: options.width ?? 1280, height: options.height ?? 860 },
     deviceScaleFactor: options.deviceScaleFactor ?? 1,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
   });
   context.setDefaultTimeout(15_000);
   const page = context.pages()[0] ?? (await context.newPage());

@@ -9,7 +9,9 @@ type BrowserOptions = Parameters<typeof openBrowser>[0];
  * started before the file's tests and closed after them. Read the fields inside tests, not at
  * the top of the file: they are filled in by the time the first test runs.
  */
-export function useRunningApp<Person extends string>(people: Record<Person, BrowserOptions>): { app: RunningApp } & Record<Person, Browser> {
+export function useRunningApp<Person extends string>(
+  people: Record<Person, BrowserOptions>,
+): { app: RunningApp } & Record<Person, Browser> {
   const names = Object.keys(people) as Person[];
   const running = {} as { app: RunningApp } & Record<Person, Browser>;
   beforeAll(async () => {

@@ -53,7 +53,13 @@ describe('a differential robot fed a PPM sum signal', () => {
     const t = new Timeline('ibus');
     ppmFrames(t, pin, 50, 400, centred);
     // Ten frames with a 400 µs channel: out of range, so bad frames.
-    ppmFrames(t, pin, 400, 625, centred.map((w, i) => (i === 6 ? 400 : w)));
+    ppmFrames(
+      t,
+      pin,
+      400,
+      625,
+      centred.map((w, i) => (i === 6 ? 400 : w)),
+    );
     ppmFrames(t, pin, 625, 2600, moved);
     t.dump(2590, 'moved');
     result = await simulate((await buildForSimulator(config, 1)).elfPath, {
@@ -74,7 +80,10 @@ describe('a differential robot fed a PPM sum signal', () => {
   });
 
   it('reports about 44 good frames a second, the bad frames and then the failsafe in its health lines', () => {
-    const lines = result.uart.toString('latin1').split('\r\n').filter((l) => l.startsWith('health '));
+    const lines = result.uart
+      .toString('latin1')
+      .split('\r\n')
+      .filter((l) => l.startsWith('health '));
     const rates = lines.map((l) => Number(/good=(\d+)\/s/.exec(l)![1]));
     // One frame every 22.5 ms is 44.4 frames a second.
     expect(Math.max(...rates)).toBeGreaterThanOrEqual(43);
@@ -172,7 +181,12 @@ describe('a chosen PWM frequency on the Uno', () => {
     ppmFrames(t, portOf(config, 'ppm'), 50, 400, [1500, 1500, 1500, 1500, 1000, 1500, 1500, 1500]);
     ppmFrames(t, portOf(config, 'ppm'), 400, 800, moved);
     t.dump(790, 'moved');
-    result = await simulate((await buildForSimulator(config, 1)).elfPath, { mcu: 'atmega328p', limitCycles: 800 * cyclesPerMs, registers: unoRegisters(), events: t.events });
+    result = await simulate((await buildForSimulator(config, 1)).elfPath, {
+      mcu: 'atmega328p',
+      limitCycles: 800 * cyclesPerMs,
+      registers: unoRegisters(),
+      events: t.events,
+    });
   });
 
   it('runs timer 1 in phase-correct mode with ICR1 = 400 at clock / 1: 16 MHz / (2 × 400) = 20 kHz', () => {

@@ -18,13 +18,20 @@ const REVERSE = { ...CENTRED, 2: 1200 };
 
 async function run(config: RobotConfig, timeline: Timeline, endMs: number): Promise<SimResult> {
   const build = await buildForSimulator(config, 1);
-  return simulate(build.elfPath, { mcu: 'atmega328p', limitCycles: endMs * cyclesPerMs, registers: unoRegisters(), events: timeline.events });
+  return simulate(build.elfPath, {
+    mcu: 'atmega328p',
+    limitCycles: endMs * cyclesPerMs,
+    registers: unoRegisters(),
+    events: timeline.events,
+  });
 }
 
 /** Within one PWM step of the expected duties (the engine rounds in floating point). */
 function expectNear(actual: number[], expected: number[]): void {
   expect(actual.length).toBe(expected.length);
-  actual.forEach((a, i) => expect(Math.abs(a - expected[i]), `motor ${i}: ${a} vs ${expected[i]}`).toBeLessThanOrEqual(1));
+  actual.forEach((a, i) =>
+    expect(Math.abs(a - expected[i]), `motor ${i}: ${a} vs ${expected[i]}`).toBeLessThanOrEqual(1),
+  );
 }
 
 function duties(config: RobotConfig, result: SimResult, tag: string): number[] {
@@ -44,19 +51,29 @@ describe('start-up, arming, failsafe latch and reverse dwell', () => {
       c.safety.reverseDwellMs = 100;
     });
     const t = new Timeline('ibus')
-      .frames(50, 300, { ...FORWARD, ...ARMED }).dump(295, 'deflected-at-power-on')
-      .frames(300, 600, { ...CENTRED, ...ARMED }).dump(595, 'armed-since-power-on')
+      .frames(50, 300, { ...FORWARD, ...ARMED })
+      .dump(295, 'deflected-at-power-on')
+      .frames(300, 600, { ...CENTRED, ...ARMED })
+      .dump(595, 'armed-since-power-on')
       .frames(600, 700, { ...CENTRED, ...DISARMED })
       .frames(700, 900, { ...CENTRED, ...ARMED })
-      .frames(900, 1100, { ...FORWARD, ...ARMED }).dump(1095, 'running')
-      .frames(1100, 1500, { ...FORWARD, ...ARMED }, { corrupt: true }).dump(1100 + 260, 'bad-checksums')
-      .frames(1500, 1700, { ...FORWARD, ...ARMED }).dump(1695, 'back-but-deflected')
-      .frames(1700, 1800, { ...CENTRED, ...ARMED }).dump(1795, 'centred-not-rearmed')
+      .frames(900, 1100, { ...FORWARD, ...ARMED })
+      .dump(1095, 'running')
+      .frames(1100, 1500, { ...FORWARD, ...ARMED }, { corrupt: true })
+      .dump(1100 + 260, 'bad-checksums')
+      .frames(1500, 1700, { ...FORWARD, ...ARMED })
+      .dump(1695, 'back-but-deflected')
+      .frames(1700, 1800, { ...CENTRED, ...ARMED })
+      .dump(1795, 'centred-not-rearmed')
       .frames(1800, 1900, { ...CENTRED, ...DISARMED })
       .frames(1900, 2000, { ...CENTRED, ...ARMED })
-      .frames(2000, 2200, { ...FORWARD, ...ARMED }).dump(2195, 'running-again')
-      .frames(2200, 2500, { ...REVERSE, ...ARMED }).dump(2250, 'reversing').dump(2495, 'reversed')
-      .frames(2500, 2600, { ...REVERSE, ...DISARMED }).dump(2595, 'disarmed');
+      .frames(2000, 2200, { ...FORWARD, ...ARMED })
+      .dump(2195, 'running-again')
+      .frames(2200, 2500, { ...REVERSE, ...ARMED })
+      .dump(2250, 'reversing')
+      .dump(2495, 'reversed')
+      .frames(2500, 2600, { ...REVERSE, ...DISARMED })
+      .dump(2595, 'disarmed');
     result = await run(config, t, 2650);
   });
 
@@ -106,10 +123,15 @@ describe('the ramp limit', () => {
       c.safety.armingRequired = false;
     });
     const full = { ...CENTRED, 2: 2000 };
-    const t = new Timeline('ibus').frames(50, 300, CENTRED).frames(300, 800, full).dump(400, 'after-100ms').dump(795, 'settled');
+    const t = new Timeline('ibus')
+      .frames(50, 300, CENTRED)
+      .frames(300, 800, full)
+      .dump(400, 'after-100ms')
+      .dump(795, 'settled');
     const result = await run(config, t, 820);
     // 0.4 full scale after 100 ms, give or take one 10 ms control step (0.04).
-    for (const duty of duties(config, result, 'after-100ms')) expect(Math.abs(duty - 0.4 * 255)).toBeLessThanOrEqual(0.05 * 255);
+    for (const duty of duties(config, result, 'after-100ms'))
+      expect(Math.abs(duty - 0.4 * 255)).toBeLessThanOrEqual(0.05 * 255);
     expectNear(duties(config, result, 'settled'), engineDuties(config, full).duties);
   });
 });
@@ -124,8 +146,10 @@ describe('the SBUS receiver failsafe flag', () => {
     const forward = { ...centred, 2: 1600 };
     const t = new Timeline('sbus')
       .frames(50, 300, centred)
-      .frames(300, 500, forward).dump(495, 'running')
-      .frames(500, 900, forward, { flags: 0x08 }).dump(500 + 262, 'receiver-failsafe');
+      .frames(300, 500, forward)
+      .dump(495, 'running')
+      .frames(500, 900, forward, { flags: 0x08 })
+      .dump(500 + 262, 'receiver-failsafe');
     const result = await run(config, t, 900);
     expect(duties(config, result, 'running').every((d) => d > 0)).toBe(true);
     expect(duties(config, result, 'receiver-failsafe')).toEqual([0, 0]);
@@ -141,7 +165,15 @@ describe('the bench test started by a pin held low at power-on', () => {
       c.wiring.benchTestPin = { pin: 'A5', locked: false };
     });
     // A5 is PC5, held low through set-up (again after pinMode turns the pull-up on); no frames.
-    const t = new Timeline('ibus').pin(0, 'C', 5, 0).pin(5, 'C', 5, 0).pin(10, 'C', 5, 0).pin(15, 'C', 5, 0).dump(500, 'first').dump(1200, 'pause').dump(1900, 'second').dump(2600, 'done');
+    const t = new Timeline('ibus')
+      .pin(0, 'C', 5, 0)
+      .pin(5, 'C', 5, 0)
+      .pin(10, 'C', 5, 0)
+      .pin(15, 'C', 5, 0)
+      .dump(500, 'first')
+      .dump(1200, 'pause')
+      .dump(1900, 'second')
+      .dump(2600, 'done');
     result = await run(config, t, 2900);
   });
 

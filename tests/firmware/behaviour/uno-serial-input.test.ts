@@ -38,7 +38,8 @@ function plan(source: 'ibus' | 'sbus', random: () => number): Plan {
   const events: SimEvent[] = [];
   let t = 50;
   const send = (raw: Raw, count: number) => {
-    for (let i = 0; i < count; i++, t += FRAME_MS) events.push({ kind: 'uart', cycle: t * cyclesPerMs, bytes: frameFor(source, raw) });
+    for (let i = 0; i < count; i++, t += FRAME_MS)
+      events.push({ kind: 'uart', cycle: t * cyclesPerMs, bytes: frameFor(source, raw) });
   };
   // Start-up: centred sticks with the arming switch off, then on (the re-arm rule).
   send({ 1: centre, 2: centre, 4: centre, 5: low, 6: low }, 12);
@@ -66,7 +67,10 @@ function tweak(config: RobotConfig): void {
   config.controls.axes.forward.reverse = false;
 }
 
-const cases: [DriveLayoutId, 'ibus' | 'sbus'][] = DRIVE_LAYOUT_IDS.map((layout, i) => [layout, i % 2 === 0 ? 'ibus' : 'sbus']);
+const cases: [DriveLayoutId, 'ibus' | 'sbus'][] = DRIVE_LAYOUT_IDS.map((layout, i) => [
+  layout,
+  i % 2 === 0 ? 'ibus' : 'sbus',
+]);
 
 describe.each(cases)('a %s robot on a simulated Uno fed %s frames', (layout, source) => {
   let config: RobotConfig;

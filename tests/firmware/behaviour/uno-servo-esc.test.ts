@@ -24,7 +24,10 @@ function pulses(result: SimResult, pin: number): Pulse[] {
   const found: Pulse[] = [];
   for (let i = 0; i + 1 < edges.length; i++) {
     if (edges[i][2] === 1 && edges[i + 1][2] === 0) {
-      found.push({ startMs: edges[i][0] / cyclesPerMs, widthUs: (edges[i + 1][0] - edges[i][0]) / (cyclesPerMs / 1000) });
+      found.push({
+        startMs: edges[i][0] / cyclesPerMs,
+        widthUs: (edges[i + 1][0] - edges[i][0]) / (cyclesPerMs / 1000),
+      });
     }
   }
   return found;
@@ -45,7 +48,12 @@ describe('a differential robot with servo-pulse ESCs', () => {
     pins = signals.map((s) => edgePin(s.port, s.bit));
     const t = new Timeline('ibus').frames(50, 400, CENTRED).frames(400, 900, FORWARD);
     const build = await buildForSimulator(config, 1);
-    result = await simulate(build.elfPath, { mcu: 'atmega328p', limitCycles: 900 * cyclesPerMs, watch: signals, events: t.events });
+    result = await simulate(build.elfPath, {
+      mcu: 'atmega328p',
+      limitCycles: 900 * cyclesPerMs,
+      watch: signals,
+      events: t.events,
+    });
   });
 
   it('sends a 1500 µs (stop) pulse every 20 ms on each ESC while waiting for input', () => {
@@ -53,7 +61,8 @@ describe('a differential robot with servo-pulse ESCs', () => {
       const early = pulses(result, pin).filter((p) => p.startMs > 20 && p.startMs < 390);
       expect(early.length).toBeGreaterThanOrEqual(17);
       for (const p of early) expect(Math.abs(p.widthUs - 1500)).toBeLessThanOrEqual(5);
-      for (let i = 1; i < early.length; i++) expect(Math.abs(early[i].startMs - early[i - 1].startMs - 20)).toBeLessThanOrEqual(0.05);
+      for (let i = 1; i < early.length; i++)
+        expect(Math.abs(early[i].startMs - early[i - 1].startMs - 20)).toBeLessThanOrEqual(0.05);
     }
   });
 
@@ -64,7 +73,9 @@ describe('a differential robot with servo-pulse ESCs', () => {
       const last = pulses(result, pin).at(-1)!;
       const expected = 1500 + (duties[i] * 500) / 255;
       // One PWM step is about 2 µs; the interrupt that ends a pulse adds a few µs.
-      expect(Math.abs(last.widthUs - expected), `ESC ${i}: ${last.widthUs} µs vs ${expected} µs`).toBeLessThanOrEqual(6);
+      expect(Math.abs(last.widthUs - expected), `ESC ${i}: ${last.widthUs} µs vs ${expected} µs`).toBeLessThanOrEqual(
+        6,
+      );
     });
   });
 });

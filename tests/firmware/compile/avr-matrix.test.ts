@@ -30,7 +30,8 @@ function compileAll() {
     });
     const results = await runLimited(jobs, availableParallelism());
     const byCase = new Map<string, { folder: string; result: AvrCompileResult }[]>();
-    for (const r of results) byCase.set(r.name, [...(byCase.get(r.name) ?? []), { folder: r.folder, result: r.result }]);
+    for (const r of results)
+      byCase.set(r.name, [...(byCase.get(r.name) ?? []), { folder: r.folder, result: r.result }]);
     return byCase;
   })();
   return builds;
@@ -39,7 +40,11 @@ function compileAll() {
 describe('the AVR compile matrix', () => {
   it('has a board the pin plan can satisfy for every layout and input, and uses every driver kind', () => {
     for (const layout of DRIVE_LAYOUT_IDS) {
-      for (const input of INPUT_SOURCE_IDS) expect(placed.some((c) => c.layout === layout && c.input === input), `${layout} / ${input}`).toBe(true);
+      for (const input of INPUT_SOURCE_IDS)
+        expect(
+          placed.some((c) => c.layout === layout && c.input === input),
+          `${layout} / ${input}`,
+        ).toBe(true);
     }
     expect(new Set(placed.map((c) => c.driver))).toEqual(new Set(DRIVER_KIND_IDS));
   });

@@ -1,6 +1,14 @@
 import { assignPins } from '@shared/pins/assign-pins';
 import { buildStarterConfig } from '@shared/starter';
-import { DRIVE_LAYOUT_IDS, DRIVER_KIND_IDS, INPUT_SOURCE_IDS, type BoardId, type DriveLayoutId, type DriverKindId, type InputSourceId } from '@shared/schemas/ids';
+import {
+  DRIVE_LAYOUT_IDS,
+  DRIVER_KIND_IDS,
+  INPUT_SOURCE_IDS,
+  type BoardId,
+  type DriveLayoutId,
+  type DriverKindId,
+  type InputSourceId,
+} from '@shared/schemas/ids';
 import type { RobotConfig } from '@shared/schemas/robot-config';
 
 export interface MatrixCase {

@@ -158,7 +158,13 @@ describe('the RC pulse decoder (one wire per channel)', () => {
   const pulse = (slot: number, at: number, width: number) => [`edge ${slot} 1 ${at}`, `edge ${slot} 0 ${at + width}`];
 
   it('completes a frame when channel 1 delivers a pulse and every channel is fresh', async () => {
-    const reports = await run(['rc 3', ...pulse(1, 100, 1200), ...pulse(2, 2000, 1800), ...pulse(0, 5000, 1500), 'poll 7000']);
+    const reports = await run([
+      'rc 3',
+      ...pulse(1, 100, 1200),
+      ...pulse(2, 2000, 1800),
+      ...pulse(0, 5000, 1500),
+      'poll 7000',
+    ]);
     expect(reports).toEqual([{ kind: 'rc', result: OK, flags: 0, channels: [1500, 1200, 1800] }]);
   });
 
@@ -201,8 +207,18 @@ describe('the link packet', () => {
     const good = encodeLinkPacket({ robotTag: 0x0001, sequence: 1, retries: 0, channels });
     const flipped = Uint8Array.from(good);
     flipped[7] ^= 0x04;
-    const otherVersion = encodeLinkPacket({ robotTag: 0x0001, sequence: 1, retries: 0, channels, version: LINK_PACKET_VERSION + 1 });
-    const reports = await run([`link 0001 ${hex(flipped)}`, `link 0001 ${hex(otherVersion)}`, `link 0002 ${hex(good)}`]);
+    const otherVersion = encodeLinkPacket({
+      robotTag: 0x0001,
+      sequence: 1,
+      retries: 0,
+      channels,
+      version: LINK_PACKET_VERSION + 1,
+    });
+    const reports = await run([
+      `link 0001 ${hex(flipped)}`,
+      `link 0001 ${hex(otherVersion)}`,
+      `link 0002 ${hex(good)}`,
+    ]);
     expect(reports.map((r) => r.result)).toEqual([BAD, BAD, BAD]);
   });
 

@@ -1,17 +1,25 @@
 import { describe, expect, it } from 'vitest';
-import { applyCalibrationSide, calibrationSide, q15Signed, q15Unsigned } from '@server/features/firmware/model/fixed-point';
+import {
+  applyCalibrationSide,
+  calibrationSide,
+  q15Signed,
+  q15Unsigned,
+} from '@server/features/firmware/model/fixed-point';
 import { calibrate } from '@shared/shaping/input-curves';
 
 // The firmware computes calibration as ((d << shift) × k) >> 16 in 16-bit operands; these
 // checks hold that integer recipe against the engine's calibrate() in floating point.
 
 describe('calibration constants', () => {
-  it.each([1, 3, 1000, 2000, 3276, 16384, 32767])('fit unsigned 16 bits and keep d << shift within 16 bits for a span of %i', (span4) => {
-    const side = calibrationSide(span4);
-    expect(side.k).toBeGreaterThan(0);
-    expect(side.k).toBeLessThanOrEqual(65535);
-    expect((span4 - 1) * 2 ** side.shift).toBeLessThanOrEqual(65535);
-  });
+  it.each([1, 3, 1000, 2000, 3276, 16384, 32767])(
+    'fit unsigned 16 bits and keep d << shift within 16 bits for a span of %i',
+    (span4) => {
+      const side = calibrationSide(span4);
+      expect(side.k).toBeGreaterThan(0);
+      expect(side.k).toBeLessThanOrEqual(65535);
+      expect((span4 - 1) * 2 ** side.shift).toBeLessThanOrEqual(65535);
+    },
+  );
 
   it('match the engine within 2 units of 16384 over the whole travel of a 1000/1500/2000 µs channel', () => {
     const channel = { low: 1000, centre: 1500, high: 2000 };

@@ -14,7 +14,33 @@ import { sampleConfig } from '../../factories/robot-config';
 // every bundle still compiles with -Wall -Wextra -Werror, and user text appears only inside
 // escaped string literals or as part of sanitized identifiers.
 
-const FRAGMENTS = ['"', '\\', '*/', '/*', '\n', '\r\n', '#include <evil.h>', '??/', "'", '`', '|', 'é', 'Ω', '日本', '😀', '\t', '%s', '{{x}}', '}', ';', ' int main() { return 1; } ', '\\"', '\\n', '\0', 'ß'];
+const FRAGMENTS = [
+  '"',
+  '\\',
+  '*/',
+  '/*',
+  '\n',
+  '\r\n',
+  '#include <evil.h>',
+  '??/',
+  "'",
+  '`',
+  '|',
+  'é',
+  'Ω',
+  '日本',
+  '😀',
+  '\t',
+  '%s',
+  '{{x}}',
+  '}',
+  ';',
+  ' int main() { return 1; } ',
+  '\\"',
+  '\\n',
+  '\0',
+  'ß',
+];
 const MARKER = 'Zq';
 
 const nameArb = (index: number, max: number) =>

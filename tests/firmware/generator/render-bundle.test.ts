@@ -54,7 +54,9 @@ describe('the firmware bundle', () => {
   });
 
   it('includes only the decoder of the chosen input and the headers of the chosen driver kinds', () => {
-    const sbus = renderBundle(sampleConfig({ controls: { ...sampleConfig().controls, source: 'sbus' } }), { revision: 1 });
+    const sbus = renderBundle(sampleConfig({ controls: { ...sampleConfig().controls, source: 'sbus' } }), {
+      revision: 1,
+    });
     const paths = sbus.map((f) => f.path);
     expect(paths).toContain('garden_hauler/mw_sbus.h');
     expect(paths.filter((p) => /mw_(ibus|ppm|rc_pulse|nrf24)\.h$/.test(p))).toEqual([]);
@@ -71,7 +73,13 @@ describe('the firmware bundle', () => {
 
   it('defines every assigned pin with the code the core uses', () => {
     const header = file(files, 'garden_hauler/mw_config.h');
-    for (const line of ['MW_PIN_M0_LEFT_PWM 9', 'MW_PIN_M0_LEFT_IN1 7', 'MW_PIN_M1_RIGHT_IN2 4', 'MW_PIN_DRV0_MAIN_DRIVER_STBY 6', 'MW_PIN_STATUS_LED 13']) {
+    for (const line of [
+      'MW_PIN_M0_LEFT_PWM 9',
+      'MW_PIN_M0_LEFT_IN1 7',
+      'MW_PIN_M1_RIGHT_IN2 4',
+      'MW_PIN_DRV0_MAIN_DRIVER_STBY 6',
+      'MW_PIN_STATUS_LED 13',
+    ]) {
       expect(header).toContain(`#define ${line}`);
     }
   });
@@ -88,7 +96,11 @@ describe('the firmware bundle', () => {
 
   it('lists every other file in manifest.json with its SHA-256, the revision and the generator version', () => {
     const manifest = JSON.parse(file(files, 'manifest.json'));
-    expect(manifest).toMatchObject({ revision: 3, generatorVersion: FIRMWARE_GENERATOR_VERSION, configHash: configHash(config) });
+    expect(manifest).toMatchObject({
+      revision: 3,
+      generatorVersion: FIRMWARE_GENERATOR_VERSION,
+      configHash: configHash(config),
+    });
     const others = files.filter((f) => f.path !== 'manifest.json');
     expect(manifest.files.map((f: { path: string }) => f.path)).toEqual(others.map((f) => f.path));
     for (const entry of manifest.files) {
@@ -106,7 +118,9 @@ describe('the firmware bundle', () => {
 
   it('keeps where a figure comes from out of the README, for every input source', () => {
     for (const input of INPUT_SOURCE_IDS) {
-      const assigned = assignPins(buildStarterConfig({ layout: 'quad-mecanum', board: 'mega2560', input, driver: 'pwm-in1-in2-stby' }));
+      const assigned = assignPins(
+        buildStarterConfig({ layout: 'quad-mecanum', board: 'mega2560', input, driver: 'pwm-in1-in2-stby' }),
+      );
       if (!assigned.ok) throw new Error(`No pins for ${input}: ${assigned.reason}`);
       const readme = file(renderBundle(assigned.config, { revision: 1 }), 'README.md');
       expect(readme, input).not.toMatch(/from memory|common practice/i);
@@ -175,6 +189,8 @@ describe('a configuration that cannot become firmware', () => {
   it('refuses a motor that is on no driver', () => {
     const config = sampleConfig();
     config.wiring.drivers[0].motors = ['Left'];
-    expect(issuesOf(() => renderBundle(config, { revision: 1 })).map((i) => i.message)).toContain('Motor "Right" is not connected to any driver');
+    expect(issuesOf(() => renderBundle(config, { revision: 1 })).map((i) => i.message)).toContain(
+      'Motor "Right" is not connected to any driver',
+    );
   });
 });

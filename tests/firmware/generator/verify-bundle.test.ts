@@ -13,7 +13,13 @@ describe('checking that a bundle compiles', () => {
   it('reports flash and RAM use of an Uno bundle', async () => {
     const result = await verifyBundle(uno());
     expect(result.sketches).toHaveLength(1);
-    expect(result.sketches[0]).toMatchObject({ folder: 'garden_hauler', board: 'uno', ok: true, flashMax: 32256, ramMax: 2048 });
+    expect(result.sketches[0]).toMatchObject({
+      folder: 'garden_hauler',
+      board: 'uno',
+      ok: true,
+      flashMax: 32256,
+      ramMax: 2048,
+    });
     expect(result.sketches[0].flashBytes).toBeGreaterThan(1000);
   });
 
@@ -35,7 +41,9 @@ describe('checking that a bundle compiles', () => {
   });
 
   it('says so instead of compiling when the board has no compiler here', async () => {
-    const assigned = assignPins(buildStarterConfig({ layout: 'differential', board: 'esp32-devkitc', input: 'sbus', driver: 'pwm-dir' }));
+    const assigned = assignPins(
+      buildStarterConfig({ layout: 'differential', board: 'esp32-devkitc', input: 'sbus', driver: 'pwm-dir' }),
+    );
     if (!assigned.ok) throw new Error(assigned.reason);
     const [sketch] = (await verifyBundle(renderBundle(assigned.config, { revision: 1 }))).sketches;
     expect(sketch).toMatchObject({ board: 'esp32-devkitc', ok: null });
@@ -43,7 +51,9 @@ describe('checking that a bundle compiles', () => {
   });
 
   it('compiles the remote transmitter sketch for its own board', async () => {
-    const assigned = assignPins(buildStarterConfig({ layout: 'differential', board: 'uno', input: 'nrf24', driver: 'pwm-dir' }));
+    const assigned = assignPins(
+      buildStarterConfig({ layout: 'differential', board: 'uno', input: 'nrf24', driver: 'pwm-dir' }),
+    );
     if (!assigned.ok) throw new Error(assigned.reason);
     const result = await verifyBundle(renderBundle(assigned.config, { revision: 1 }));
     expect(result.sketches.map((s) => [s.folder, s.board, s.ok])).toEqual([

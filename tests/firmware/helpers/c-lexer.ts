@@ -19,7 +19,20 @@ function decodeEscapes(body: string): string {
       continue;
     }
     const next = body[++i];
-    const simple: Record<string, number> = { n: 10, t: 9, r: 13, '\\': 92, '"': 34, "'": 39, '?': 63, '0': 0, a: 7, b: 8, f: 12, v: 11 };
+    const simple: Record<string, number> = {
+      n: 10,
+      t: 9,
+      r: 13,
+      '\\': 92,
+      '"': 34,
+      "'": 39,
+      '?': 63,
+      '0': 0,
+      a: 7,
+      b: 8,
+      f: 12,
+      v: 11,
+    };
     if (/[0-7]/.test(next)) {
       let digits = next;
       while (digits.length < 3 && /[0-7]/.test(body[i + 1] ?? '')) digits += body[++i];

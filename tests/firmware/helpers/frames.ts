@@ -31,7 +31,11 @@ export function ibusFrame(channels: number[]): number[] {
   return frame;
 }
 
-export const parseHex = (text: string) => text.trim().split(/\s+/).map((b) => parseInt(b, 16));
+export const parseHex = (text: string) =>
+  text
+    .trim()
+    .split(/\s+/)
+    .map((b) => parseInt(b, 16));
 
 // REFERENCES §5 [derived]: SBUS frame with every channel 992.
 export const SBUS_ALL_992 = parseHex('0F E0 03 1F F8 C0 07 3E F0 81 0F 7C E0 03 1F F8 C0 07 3E F0 81 0F 7C 00 00');
@@ -39,4 +43,6 @@ export const SBUS_ALL_992 = parseHex('0F E0 03 1F F8 C0 07 3E F0 81 0F 7C E0 03 
 export const IBUS_EXAMPLE = parseHex(
   '20 40 DB 05 DC 05 54 05 DC 05 E8 03 D0 07 D2 05 E8 03 DC 05 DC 05 DC 05 DC 05 DC 05 DC 05 DA F3',
 );
-export const IBUS_EXAMPLE_CHANNELS = [1499, 1500, 1364, 1500, 1000, 2000, 1490, 1000, 1500, 1500, 1500, 1500, 1500, 1500];
+export const IBUS_EXAMPLE_CHANNELS = [
+  1499, 1500, 1364, 1500, 1000, 2000, 1490, 1000, 1500, 1500, 1500, 1500, 1500, 1500,
+];

@@ -11,7 +11,15 @@ export const TEST_META = { generatorVersion: 'test', revision: 0, hash: '0000000
 export async function renderDecoderHeaders(): Promise<string> {
   const dir = await testDir('host-');
   const data = { meta: TEST_META, packet: linkPacketTemplateData() };
-  for (const name of ['mw_frame.h', 'mw_sbus.h', 'mw_ibus.h', 'mw_ppm.h', 'mw_rc_pulse.h', 'mw_nrf24.h', 'mw_link_packet.h']) {
+  for (const name of [
+    'mw_frame.h',
+    'mw_sbus.h',
+    'mw_ibus.h',
+    'mw_ppm.h',
+    'mw_rc_pulse.h',
+    'mw_nrf24.h',
+    'mw_link_packet.h',
+  ]) {
     await writeFile(join(dir, name), renderTemplate(`common/${name}`, data));
   }
   return dir;
@@ -20,9 +28,13 @@ export async function renderDecoderHeaders(): Promise<string> {
 /** Compiles a host C++ program against the headers in `includeDir` with warnings as errors. */
 export async function compileHostProgram(source: string, includeDir: string, std = 'c++11'): Promise<string> {
   const binary = join(includeDir, 'probe');
-  const result = await runTool('g++', [`-std=${std}`, '-Wall', '-Wextra', '-Werror', '-O1', `-I${includeDir}`, source, '-o', binary], {
-    timeoutMs: 120_000,
-  });
+  const result = await runTool(
+    'g++',
+    [`-std=${std}`, '-Wall', '-Wextra', '-Werror', '-O1', `-I${includeDir}`, source, '-o', binary],
+    {
+      timeoutMs: 120_000,
+    },
+  );
   if (result.code !== 0) throw new Error(`Host compile failed:\n${result.stderr}`);
   return binary;
 }

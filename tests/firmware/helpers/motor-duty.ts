@@ -28,9 +28,17 @@ export function signedUnoDuty(config: RobotConfig, motorIndex: number, regs: Rec
     case 'pwm-dir':
       return high('dir') ? duty('pwm') : -duty('pwm');
     case 'dual-pwm':
-      return duty('fwd') > 0 && duty('rev') === 0 ? duty('fwd') : duty('rev') > 0 && duty('fwd') === 0 ? -duty('rev') : 0;
+      return duty('fwd') > 0 && duty('rev') === 0
+        ? duty('fwd')
+        : duty('rev') > 0 && duty('fwd') === 0
+          ? -duty('rev')
+          : 0;
     case 'two-input':
-      return duty('in1') > 0 && duty('in2') === 0 ? duty('in1') : duty('in2') > 0 && duty('in1') === 0 ? -duty('in2') : 0;
+      return duty('in1') > 0 && duty('in2') === 0
+        ? duty('in1')
+        : duty('in2') > 0 && duty('in1') === 0
+          ? -duty('in2')
+          : 0;
     default:
       throw new Error(`No register reading for ${driver.kind}`);
   }

@@ -18,7 +18,11 @@ export interface SimBuild {
  * Renders a bundle and compiles its robot sketch for the Uno with simulator marks on GPIOR0
  * (`MW_SIM_MARKS_ATOMIC` also holds interrupts off inside the marked control step).
  */
-export async function buildForSimulator(config: RobotConfig, revision: number, marks = 'MW_SIM_MARKS'): Promise<SimBuild> {
+export async function buildForSimulator(
+  config: RobotConfig,
+  revision: number,
+  marks = 'MW_SIM_MARKS',
+): Promise<SimBuild> {
   const files = renderBundle(config, { revision });
   const root = await writeBundle(files, 'sim-');
   const folder = sketchFolders(files)[0];
@@ -50,7 +54,11 @@ export function engineDuties(config: RobotConfig, raw: RawByChannel): { duties: 
  * so the firmware may see a width a few µs from the one sent; it must then drive like the
  * engine does for some width within that error.
  */
-export function engineDutyRange(config: RobotConfig, raw: RawByChannel, errorUs: number): { low: number[]; high: number[] } {
+export function engineDutyRange(
+  config: RobotConfig,
+  raw: RawByChannel,
+  errorUs: number,
+): { low: number[]; high: number[] } {
   const channels = Object.keys(raw).map(Number);
   let low: number[] | null = null;
   let high: number[] | null = null;

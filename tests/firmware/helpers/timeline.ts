@@ -24,7 +24,11 @@ export class Timeline {
   /** Frames with these readings from `fromMs` until just before `toMs`. */
   frames(fromMs: number, toMs: number, raw: Raw, options: { corrupt?: boolean; flags?: number } = {}): this {
     for (let t = fromMs; t < toMs; t += this.frameMs) {
-      this.events.push({ kind: 'uart', cycle: t * cyclesPerMs, bytes: this.frame(raw, options.corrupt ?? false, options.flags ?? 0) });
+      this.events.push({
+        kind: 'uart',
+        cycle: t * cyclesPerMs,
+        bytes: this.frame(raw, options.corrupt ?? false, options.flags ?? 0),
+      });
     }
     return this;
   }

@@ -8,7 +8,12 @@ import { buildStarterConfig } from '@shared/starter';
  * the timer outputs in order, other roles plain digital pins, a shared standby pin, the status
  * LED on D13 and a serial receiver on D0.
  */
-export function unoWiredConfig(layout: DriveLayoutId, input: InputSourceId, driver: DriverKindId, tweak: (c: RobotConfig) => void = () => {}): RobotConfig {
+export function unoWiredConfig(
+  layout: DriveLayoutId,
+  input: InputSourceId,
+  driver: DriverKindId,
+  tweak: (c: RobotConfig) => void = () => {},
+): RobotConfig {
   const config = structuredClone(buildStarterConfig({ layout, board: 'uno', input, driver }));
   const pwm = ['D9', 'D10', 'D5', 'D6', 'D3', 'D11'];
   const digital = ['D2', 'D4', 'D7', 'D8', 'D12', 'A0', 'A1', 'A2', 'A4', 'A5'];

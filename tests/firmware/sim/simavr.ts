@@ -84,7 +84,12 @@ function scriptText(script: SimScript): string {
     const cycle = Math.round(event.cycle);
     if (event.kind === 'uart') {
       for (let i = 0; i < event.bytes.length; i += 64) {
-        lines.push(`uart ${cycle} ${event.bytes.slice(i, i + 64).map((b) => b.toString(16)).join(' ')}`);
+        lines.push(
+          `uart ${cycle} ${event.bytes
+            .slice(i, i + 64)
+            .map((b) => b.toString(16))
+            .join(' ')}`,
+        );
       }
     } else if (event.kind === 'pin') {
       lines.push(`pin ${event.port} ${event.bit} ${cycle} ${event.level}`);

@@ -36,7 +36,8 @@ describe('compiling a sketch folder against the Arduino AVR core', () => {
 
 describe('reading avr-size output', () => {
   it('takes flash as text plus data and RAM as data plus bss', () => {
-    const text = 'firmware.elf  :\nsection   size      addr\n.data        22   8388864\n.text      2330         0\n.bss        168   8388886\n';
+    const text =
+      'firmware.elf  :\nsection   size      addr\n.data        22   8388864\n.text      2330         0\n.bss        168   8388886\n';
     expect(parseSizeOutput(text)).toEqual({ text: 2330, data: 22, bss: 168 });
   });
 });

@@ -23,7 +23,9 @@ describe('reading the environment', () => {
 
   it('insists on SMTP_URL in production', () => {
     expect(() => readEnv({ NODE_ENV: 'production' })).toThrow(/SMTP_URL: SMTP_URL is required in production/);
-    expect(readEnv({ NODE_ENV: 'production', SMTP_URL: 'smtp://mail.example.org:587' }).SMTP_URL).toBe('smtp://mail.example.org:587');
+    expect(readEnv({ NODE_ENV: 'production', SMTP_URL: 'smtp://mail.example.org:587' }).SMTP_URL).toBe(
+      'smtp://mail.example.org:587',
+    );
   });
 
   it('treats an empty variable as unset', () => {

@@ -23,7 +23,8 @@ describe('starter configurations', () => {
 
   it("calibrates every channel with the input source's defaults", () => {
     const config = buildStarterConfig({ layout: 'quad-mecanum', input: 'sbus' });
-    for (const channel of config.controls.channels) expect(channel).toMatchObject(INPUT_SOURCES.sbus.defaultCalibration);
+    for (const channel of config.controls.channels)
+      expect(channel).toMatchObject(INPUT_SOURCES.sbus.defaultCalibration);
   });
 
   it('maps strafe to channel 1, forward to 2, yaw to 4, the rate switch to 5 and arming to 6', () => {

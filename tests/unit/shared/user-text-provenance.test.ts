@@ -33,7 +33,11 @@ describe('text shown to builders', () => {
     for (const board of BOARD_IDS)
       for (const driver of DRIVER_KIND_IDS) {
         const config = buildStarterConfig({ layout: 'quad-mecanum', board, driver, input: 'nrf24' });
-        const overloaded = { ...config, motors: config.motors.map((m) => ({ ...m, stallCurrentA: 60, ratedVoltage: 3 })), power: { ...config.power, logicSupply: 'board-vin' as const, cells: 6 } };
+        const overloaded = {
+          ...config,
+          motors: config.motors.map((m) => ({ ...m, stallCurrentA: 60, ratedVoltage: 3 })),
+          power: { ...config.power, logicSupply: 'board-vin' as const, cells: 6 },
+        };
         for (const c of [config, overloaded]) {
           const texts = [...stringsIn(powerAdvice(c)), ...stringsIn(pwmAdvice(c)), ...stringsIn(robotProblems(c))];
           expect(leaks(texts), `${board}/${driver}`).toEqual([]);
@@ -42,6 +46,13 @@ describe('text shown to builders', () => {
   });
 
   it('would catch a marker left in a sentence', () => {
-    expect(leaks(['Runs at 1 kHz (from memory).', 'The usual 125 % rule (common practice).', 'A listing (quoted).', 'Runs at about 1 kHz.'])).toHaveLength(3);
+    expect(
+      leaks([
+        'Runs at 1 kHz (from memory).',
+        'The usual 125 % rule (common practice).',
+        'A listing (quoted).',
+        'Runs at about 1 kHz.',
+      ]),
+    ).toHaveLength(3);
   });
 });

@@ -21,13 +21,24 @@ function configFor(layout: DriveLayoutId) {
   const config = buildStarterConfig({ layout });
   // names=long: motors named apart from their wheels, long enough to test the labels' room.
   if (params.get('names') === 'long') {
-    const rename = (name: string) => `M${config.motors.findIndex((m) => m.name === name) + 1} ${name.toLowerCase()} gearmotor`;
+    const rename = (name: string) =>
+      `M${config.motors.findIndex((m) => m.name === name) + 1} ${name.toLowerCase()} gearmotor`;
     config.chassis.wheels = config.chassis.wheels.map((w) => ({ ...w, motor: rename(w.motor) }));
     config.wiring.drivers = config.wiring.drivers.map((d) => ({ ...d, motors: d.motors.map(rename) }));
     config.motors = config.motors.map((m) => ({ ...m, name: rename(m.name) }));
   }
-  if (reversed) config.chassis.wheels = config.chassis.wheels.map((w) => (w.motor === reversed ? { ...w, reversed: true } : w));
-  if (params.get('expo')) STICK_AXES.forEach((a) => (config.controls.axes[a] = { ...config.controls.axes[a], expo: Number(params.get('expo')), deadband: 0.08, rate: 0.8 }));
+  if (reversed)
+    config.chassis.wheels = config.chassis.wheels.map((w) => (w.motor === reversed ? { ...w, reversed: true } : w));
+  if (params.get('expo'))
+    STICK_AXES.forEach(
+      (a) =>
+        (config.controls.axes[a] = {
+          ...config.controls.axes[a],
+          expo: Number(params.get('expo')),
+          deadband: 0.08,
+          rate: 0.8,
+        }),
+    );
   return config;
 }
 
@@ -53,7 +64,13 @@ function Part({ layout }: { layout: DriveLayoutId }) {
     case 'commissioning':
       return <CommissioningDiagram config={config} />;
     default:
-      return <ChassisDrawing wheels={config.chassis.wheels} title={`${LAYOUT_LABELS[layout]}, top view`} showGroundRollers={params.has('ground')} />;
+      return (
+        <ChassisDrawing
+          wheels={config.chassis.wheels}
+          title={`${LAYOUT_LABELS[layout]}, top view`}
+          showGroundRollers={params.has('ground')}
+        />
+      );
   }
 }
 
@@ -63,7 +80,10 @@ export function Harness() {
     <main className="drafting-grid min-h-screen p-6 text-ink">
       <div className={`grid gap-4 ${wide ? 'grid-cols-1' : 'grid-cols-3'}`}>
         {layouts.map((layout) => (
-          <section key={layout} className={`rounded border border-rule bg-paper-raised p-3 ${layouts.length === 1 && part === 'chassis' ? 'max-w-xl' : ''}`}>
+          <section
+            key={layout}
+            className={`rounded border border-rule bg-paper-raised p-3 ${layouts.length === 1 && part === 'chassis' ? 'max-w-xl' : ''}`}
+          >
             <h2 className="mb-2 text-sm font-semibold">{LAYOUT_LABELS[layout]}</h2>
             <Part layout={layout} />
           </section>

@@ -19,10 +19,18 @@ try {
     harness: import.meta.url,
     title: 'Mixwright firmware harness',
     settleMs: 2000,
-    proxy: { '/api': { target: app.url, configure: (proxy) => proxy.on('proxyReq', (req) => req.setHeader('origin', app.url)) } },
+    proxy: {
+      '/api': {
+        target: app.url,
+        configure: (proxy) => proxy.on('proxyReq', (req) => req.setHeader('origin', app.url)),
+      },
+    },
     // Cookies belong to the host, not the port: signing in on the app counts for the harness too.
     prepare: async (page) => {
-      const signIn = await page.request.post(`${app.url}/api/auth/sign-in`, { data: { email: mentor.email, password: mentor.password }, headers: { origin: app.url } });
+      const signIn = await page.request.post(`${app.url}/api/auth/sign-in`, {
+        data: { email: mentor.email, password: mentor.password },
+        headers: { origin: app.url },
+      });
       if (!signIn.ok()) throw new Error(`Sign-in failed: ${signIn.status()}`);
     },
     beforeShot: async ({ page, params }) => {

@@ -32,7 +32,14 @@ export function Harness() {
       <MemoryRouter>
         <div className="mx-auto max-w-6xl p-6">
           {part === 'history' && (
-            <HistorySection robot={robot} head={detail.head} config={detail.head.config} onChange={() => {}} problems={[]} canEdit />
+            <HistorySection
+              robot={robot}
+              head={detail.head}
+              config={detail.head.config}
+              onChange={() => {}}
+              problems={[]}
+              canEdit
+            />
           )}
           {part === 'dashboard' && (
             <div className="grid gap-6">
@@ -40,7 +47,9 @@ export function Harness() {
               <DeletedRobotsPanel teamId={robot.teamId} />
             </div>
           )}
-          {part === 'audit' && <AuditLog teamId={robot.teamId} renderEvents={(events) => <ActivityList events={events} />} />}
+          {part === 'audit' && (
+            <AuditLog teamId={robot.teamId} renderEvents={(events) => <ActivityList events={events} />} />
+          )}
         </div>
       </MemoryRouter>
     </QueryClientProvider>

@@ -25,14 +25,22 @@ function fixture() {
   runMigrations(database.db);
   const ctx = { db: database.db, config: { dataDir: dir } } as unknown as AppContext;
   const mentor = insertUser(database.db, { name: 'Mentor Ada', email: 'mentor@larkspur.invalid', passwordHash: 'x' });
-  const lead = insertUser(database.db, { name: 'Student Lead Ravi', email: 'lead@larkspur.invalid', passwordHash: 'x' });
+  const lead = insertUser(database.db, {
+    name: 'Student Lead Ravi',
+    email: 'lead@larkspur.invalid',
+    passwordHash: 'x',
+  });
   const team = insertTeamWithOwner(database.db, 'Larkspur Makers Club', mentor.id);
   insertMembership(database.db, team.id, lead.id, 'editor');
   const base = sampleConfig();
   const robot = createRobot(ctx, mentor, team.id, { name: base.name, config: base });
   const flipped = structuredClone(base);
   flipped.chassis.wheels[0].reversed = true;
-  saveRevision(ctx, lead, robot.id, { baseRevision: 1, message: 'Left track ran backwards on the bench', config: flipped });
+  saveRevision(ctx, lead, robot.id, {
+    baseRevision: 1,
+    message: 'Left track ran backwards on the bench',
+    config: flipped,
+  });
   recordFlash(ctx, lead, robot.id, { revision: 2, note: 'Club night, wheels up' });
   const tuned = structuredClone(flipped);
   tuned.safety.failsafeTimeoutMs = 150;
@@ -49,9 +57,17 @@ function fixture() {
     [`GET /api/robots/${id}/history`]: robotHistory(ctx, id),
     [`GET /api/robots/${id}/flashes`]: { flashes: flashLog(ctx, id) },
     [`GET /api/teams/${team.id}/robot-bin`]: { robots: listBin(ctx, team.id) },
-    [`GET /api/teams/${team.id}/audit`]: { events: listAuditLog(database.db, team.id, { kind: 'all', limit: 50 }), nextBefore: null },
+    [`GET /api/teams/${team.id}/audit`]: {
+      events: listAuditLog(database.db, team.id, { kind: 'all', limit: 50 }),
+      nextBefore: null,
+    },
   };
-  for (const [from, to] of [[3, 4], [2, 3], [1, 3]]) answers[`GET /api/robots/${id}/diff?from=${from}&to=${to}`] = revisionDiff(ctx, id, from, to, renderBundle);
+  for (const [from, to] of [
+    [3, 4],
+    [2, 3],
+    [1, 3],
+  ])
+    answers[`GET /api/robots/${id}/diff?from=${from}&to=${to}`] = revisionDiff(ctx, id, from, to, renderBundle);
   database.close();
   rmSync(dir, { recursive: true, force: true });
   return { answers, detail };

@@ -70,7 +70,12 @@ async function startHarnessServer(options: ShootOptions) {
     root: fileURLToPath(new URL('.', options.harness)),
     plugins: [react(), tailwindcss(), harnessPage(options.title)],
     define: options.define,
-    resolve: { alias: [{ find: /^mixwright-theme$/, replacement: theme }, ...Object.entries(aliases).map(([find, replacement]) => ({ find, replacement }))] },
+    resolve: {
+      alias: [
+        { find: /^mixwright-theme$/, replacement: theme },
+        ...Object.entries(aliases).map(([find, replacement]) => ({ find, replacement })),
+      ],
+    },
     server: { port: 0, strictPort: false, host: '127.0.0.1', fs: { strict: false }, proxy: options.proxy },
     logLevel: 'warn',
   });
@@ -96,7 +101,13 @@ export async function shootHarness(options: ShootOptions): Promise<void> {
     for (const [i, query] of (queries.length ? queries : [options.defaultQuery ?? '']).entries()) {
       await page.goto(`${server.url}/?${query}`);
       await page.waitForTimeout(options.settleMs);
-      const shot: Shot = { page, query, params: new URLSearchParams(query), name: `${String(i).padStart(2, '0')}-${query.replace(/[^a-z0-9]+/gi, '_') || 'all'}`, outDir };
+      const shot: Shot = {
+        page,
+        query,
+        params: new URLSearchParams(query),
+        name: `${String(i).padStart(2, '0')}-${query.replace(/[^a-z0-9]+/gi, '_') || 'all'}`,
+        outDir,
+      };
       await options.beforeShot?.(shot);
       const file = join(outDir, `${shot.name}.png`);
       await page.screenshot({ path: file, fullPage: process.env.FULL === '1' });

@@ -32,14 +32,39 @@ function startConfig(): RobotConfig {
   if (params.get('clash') === '1') {
     const [first, second] = config.wiring.drivers[0].pins ? Object.keys(config.wiring.drivers[0].pins) : [];
     const pin = config.wiring.drivers[0].pins[first].pin;
-    config = { ...config, wiring: { ...config.wiring, drivers: config.wiring.drivers.map((d, i) => (i === 0 ? { ...d, pins: { ...d.pins, [second]: { pin, locked: false } } } : d)) } };
+    config = {
+      ...config,
+      wiring: {
+        ...config.wiring,
+        drivers: config.wiring.drivers.map((d, i) =>
+          i === 0 ? { ...d, pins: { ...d.pins, [second]: { pin, locked: false } } } : d,
+        ),
+      },
+    };
   }
   return config;
 }
 
 const initial = startConfig();
-const head: RevisionDetail = { number: 4, message: 'Moved the receiver to its own pins', authorName: 'Maple Okafor', createdAt: '2026-03-14T16:20:00.000Z', config: initial };
-const robot: RobotDetail['robot'] = { id: 'robot-1', teamId: 'team-1', name: initial.name, createdAt: head.createdAt, headRevision: 4, updatedAt: head.createdAt, lastFlash: null, photoUrl: null, teamName: 'Larkspur Makers Club', role: 'editor' };
+const head: RevisionDetail = {
+  number: 4,
+  message: 'Moved the receiver to its own pins',
+  authorName: 'Maple Okafor',
+  createdAt: '2026-03-14T16:20:00.000Z',
+  config: initial,
+};
+const robot: RobotDetail['robot'] = {
+  id: 'robot-1',
+  teamId: 'team-1',
+  name: initial.name,
+  createdAt: head.createdAt,
+  headRevision: 4,
+  updatedAt: head.createdAt,
+  lastFlash: null,
+  photoUrl: null,
+  teamName: 'Larkspur Makers Club',
+  role: 'editor',
+};
 
 export function Harness() {
   const [config, setConfig] = useState(initial);
@@ -54,7 +79,14 @@ export function Harness() {
     <MemoryRouter>
       <main className="drafting-grid min-h-screen p-6 text-ink">
         <div className="mx-auto max-w-[1180px]">
-          <WiringSection robot={robot} head={head} config={config} onChange={setConfig} problems={robotProblems(config)} canEdit={params.get('viewer') !== '1'} />
+          <WiringSection
+            robot={robot}
+            head={head}
+            config={config}
+            onChange={setConfig}
+            problems={robotProblems(config)}
+            canEdit={params.get('viewer') !== '1'}
+          />
         </div>
       </main>
     </MemoryRouter>

@@ -11,7 +11,14 @@ async function printSheet(page: Page, outDir: string, name: string) {
   const margin = process.env.PDF_MARGIN;
   for (const format of ['A4', 'Letter'] as const) {
     const pdf = join(outDir, `${name}-${format}.pdf`);
-    await page.pdf({ path: pdf, format, printBackground: true, ...(margin ? { margin: { top: margin, bottom: margin, left: margin, right: margin } } : { preferCSSPageSize: true }) });
+    await page.pdf({
+      path: pdf,
+      format,
+      printBackground: true,
+      ...(margin
+        ? { margin: { top: margin, bottom: margin, left: margin, right: margin } }
+        : { preferCSSPageSize: true }),
+    });
     console.log(pdf);
   }
   // A4 width is 210 mm at 96 px per inch, less 11 mm margins.
@@ -19,7 +26,10 @@ async function printSheet(page: Page, outDir: string, name: string) {
   await page.setViewportSize({ width: 711, height: 400 });
   const wide = await page.evaluate(() => {
     const limit = document.documentElement.clientWidth;
-    return [...document.querySelectorAll('body *')].filter((e) => e.getBoundingClientRect().right > limit + 1).slice(0, 5).map((e) => `${e.tagName}.${e.className}`);
+    return [...document.querySelectorAll('body *')]
+      .filter((e) => e.getBoundingClientRect().right > limit + 1)
+      .slice(0, 5)
+      .map((e) => `${e.tagName}.${e.className}`);
   });
   if (wide.length) console.log('wider than the page:', wide);
   const printed = join(outDir, `${name}-print.png`);

@@ -42,13 +42,22 @@ export interface ControlsModel {
 // Raw readings are held ×4 in int16: calibration points must stay below 8192.
 const MAX_RAW = 8191;
 
-function slotModel(config: RobotConfig, number: number, slot: number, input: InputModel, issues: IssueList): SlotModel | null {
+function slotModel(
+  config: RobotConfig,
+  number: number,
+  slot: number,
+  input: InputModel,
+  issues: IssueList,
+): SlotModel | null {
   const index = config.controls.channels.findIndex((c) => c.number === number);
   const channel = config.controls.channels[index];
   if (!channel) return null;
   const values = [channel.low, channel.centre, channel.high];
   if (values.some((v) => v < 0 || v > MAX_RAW)) {
-    issues.add(['controls', 'channels', index], `Channel ${number}'s end points and centre must be between 0 and ${MAX_RAW}`);
+    issues.add(
+      ['controls', 'channels', index],
+      `Channel ${number}'s end points and centre must be between 0 and ${MAX_RAW}`,
+    );
     return null;
   }
   const [low4, centre4, high4] = values.map((v) => Math.round(v * 4));
@@ -89,11 +98,16 @@ export function buildControlsModel(config: RobotConfig, input: InputModel, issue
   const used = usedChannelNumbers(config);
   const slots = used.map((n, i) => slotModel(config, n, i, input, issues)).filter((s): s is SlotModel => s !== null);
   const slotOf = (channel: number | null) => (channel === null ? -1 : used.indexOf(channel));
-  if (controls.axes.forward.channel === null && controls.axes.strafe.channel === null && controls.axes.yaw.channel === null) {
+  if (
+    controls.axes.forward.channel === null &&
+    controls.axes.strafe.channel === null &&
+    controls.axes.yaw.channel === null
+  ) {
     issues.add(['controls', 'axes'], 'Map at least one stick axis (forward, strafe or yaw) to a channel');
   }
   const rateSwitch = controls.rateSwitch;
-  const rates = rateSwitch.channel === null ? [1, 1, 1] : [0, 1, 2].map((p) => rateSwitch.rates[p] ?? rateSwitch.rates[0]);
+  const rates =
+    rateSwitch.channel === null ? [1, 1, 1] : [0, 1, 2].map((p) => rateSwitch.rates[p] ?? rateSwitch.rates[0]);
   const axes = STICK_AXES.map((name) => {
     const axis = controls.axes[name];
     return {
@@ -113,7 +127,15 @@ export function buildControlsModel(config: RobotConfig, input: InputModel, issue
   return {
     slots,
     axes,
-    rateSwitch: { slot: slotOf(rateSwitch.channel), positions: rateSwitchPositions(rateSwitch), ...switchThresholds(slots, rateSwitch.channel) },
-    arming: { slot: slotOf(controls.armingSwitch.channel), whenHigh: controls.armingSwitch.armedWhen === 'high', required: safety.armingRequired },
+    rateSwitch: {
+      slot: slotOf(rateSwitch.channel),
+      positions: rateSwitchPositions(rateSwitch),
+      ...switchThresholds(slots, rateSwitch.channel),
+    },
+    arming: {
+      slot: slotOf(controls.armingSwitch.channel),
+      whenHigh: controls.armingSwitch.armedWhen === 'high',
+      required: safety.armingRequired,
+    },
   };
 }

@@ -26,7 +26,16 @@ export const CORE_NAMES: Record<BoardProfile['family'], string> = {
 export interface FirmwareModel extends ControlsModel {
   meta: { generatorVersion: string; revision: number; hash: string };
   robot: { nameLiteral: string; name: string };
-  board: { id: string; name: string; family: string; core: string; isAvr: boolean; isEsp32: boolean; isRp2040: boolean; fqbn: string };
+  board: {
+    id: string;
+    name: string;
+    family: string;
+    core: string;
+    isAvr: boolean;
+    isEsp32: boolean;
+    isRp2040: boolean;
+    fqbn: string;
+  };
   input: InputModel;
   motors: MotorModel[];
   driverHeaders: string[];
@@ -51,8 +60,22 @@ export interface FirmwareModel extends ControlsModel {
 }
 
 function optionalPins(config: RobotConfig, pins: PinRegistry) {
-  const led = pins.use(config.wiring.statusLed.pin, ['wiring', 'statusLed', 'pin'], 'MW_PIN_STATUS_LED', 'status LED (with a resistor)', 'status LED', false);
-  const bench = pins.use(config.wiring.benchTestPin.pin, ['wiring', 'benchTestPin', 'pin'], 'MW_PIN_BENCH_TEST', 'bench-test switch to ground', 'bench-test switch', false);
+  const led = pins.use(
+    config.wiring.statusLed.pin,
+    ['wiring', 'statusLed', 'pin'],
+    'MW_PIN_STATUS_LED',
+    'status LED (with a resistor)',
+    'status LED',
+    false,
+  );
+  const bench = pins.use(
+    config.wiring.benchTestPin.pin,
+    ['wiring', 'benchTestPin', 'pin'],
+    'MW_PIN_BENCH_TEST',
+    'bench-test switch to ground',
+    'bench-test switch',
+    false,
+  );
   return { led: led !== null, bench: bench !== null };
 }
 
@@ -65,7 +88,8 @@ export function buildFirmwareModel(config: RobotConfig, revision: number): Firmw
   const issues = new IssueList();
   // The pin plan's errors first (two roles on one pin, timer and bus clashes …): firmware for a
   // plan that cannot work is not generated. Its warnings are for the wiring screen.
-  for (const problem of checkPinPlan(config)) if (problem.severity === 'error') issues.add(problem.path, problem.message);
+  for (const problem of checkPinPlan(config))
+    if (problem.severity === 'error') issues.add(problem.path, problem.message);
   const board = getBoard(config.wiring.board);
   const pins = new PinRegistry(board, issues);
   const input = buildInputModel(config, pins, issues);

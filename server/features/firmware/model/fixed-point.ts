@@ -39,7 +39,8 @@ export interface CalibrationSide {
  * Q14 result is the high word of one 16 × 16 → 32-bit product.
  */
 export function calibrationSide(span4: number): CalibrationSide {
-  if (!Number.isInteger(span4) || span4 < 1 || span4 > INT16_MAX) throw new Error(`Internal: span ${span4} out of range`);
+  if (!Number.isInteger(span4) || span4 < 1 || span4 > INT16_MAX)
+    throw new Error(`Internal: span ${span4} out of range`);
   let shift = 0;
   while (span4 * 2 ** (shift + 1) <= INT16_MAX) shift++;
   const k = Math.min(65535, Math.round(2 ** 30 / (span4 * 2 ** shift)));

@@ -55,7 +55,13 @@ export interface InputModel {
 /** Channel numbers the firmware reads (axes and switches), lowest first. */
 export function usedChannelNumbers(config: RobotConfig): number[] {
   const { axes, rateSwitch, armingSwitch } = config.controls;
-  const numbers = [axes.forward.channel, axes.strafe.channel, axes.yaw.channel, rateSwitch.channel, armingSwitch.channel];
+  const numbers = [
+    axes.forward.channel,
+    axes.strafe.channel,
+    axes.yaw.channel,
+    rateSwitch.channel,
+    armingSwitch.channel,
+  ];
   return [...new Set(numbers.filter((n): n is number => n !== null))].sort((a, b) => a - b);
 }
 
@@ -66,7 +72,10 @@ export function buildInputModel(config: RobotConfig, pins: PinRegistry, issues: 
   for (const number of used) {
     if (number > spec.maxChannels) {
       const index = config.controls.channels.findIndex((c) => c.number === number);
-      issues.add(['controls', 'channels', index, 'number'], `${spec.name} carries channels 1 to ${spec.maxChannels}, not ${number}`);
+      issues.add(
+        ['controls', 'channels', index, 'number'],
+        `${spec.name} carries channels 1 to ${spec.maxChannels}, not ${number}`,
+      );
     }
   }
   const decoder = DECODERS[source];
@@ -123,8 +132,20 @@ function rcModel(config: RobotConfig, used: number[], pins: PinRegistry, issues:
 
 function nrfModel(config: RobotConfig, pins: PinRegistry): InputModel['nrf'] {
   const { link } = config.controls;
-  pins.use(inputPin(config, 'ce'), ['wiring', 'inputPins', 'ce', 'pin'], 'MW_PIN_NRF_CE', 'transceiver CE', 'nRF24L01+');
-  pins.use(inputPin(config, 'csn'), ['wiring', 'inputPins', 'csn', 'pin'], 'MW_PIN_NRF_CSN', 'transceiver CSN', 'nRF24L01+');
+  pins.use(
+    inputPin(config, 'ce'),
+    ['wiring', 'inputPins', 'ce', 'pin'],
+    'MW_PIN_NRF_CE',
+    'transceiver CE',
+    'nRF24L01+',
+  );
+  pins.use(
+    inputPin(config, 'csn'),
+    ['wiring', 'inputPins', 'csn', 'pin'],
+    'MW_PIN_NRF_CSN',
+    'transceiver CSN',
+    'nRF24L01+',
+  );
   const bus = pins.board.spi;
   pins.use(bus.sck, ['wiring'], 'MW_PIN_NRF_SCK', 'transceiver SCK (SPI clock)', 'nRF24L01+');
   pins.use(bus.mosi, ['wiring'], 'MW_PIN_NRF_MOSI', 'transceiver MOSI', 'nRF24L01+');

@@ -77,7 +77,8 @@ function motorPlacement(config: RobotConfig, issues: IssueList): Map<number, { d
       const path = ['wiring', 'drivers', d, 'motors', channel];
       const m = config.motors.findIndex((motor) => motor.name === name);
       if (m < 0) issues.add(path, `No motor is named "${name}"`);
-      else if (channel >= spec.channels) issues.add(path, `A ${spec.name} drives ${spec.channels} motor(s); "${name}" has no channel`);
+      else if (channel >= spec.channels)
+        issues.add(path, `A ${spec.name} drives ${spec.channels} motor(s); "${name}" has no channel`);
       else if (placed.has(m)) issues.add(path, `Motor "${name}" is already on another driver`);
       else placed.set(m, { driver: d, channel });
     });
@@ -98,7 +99,14 @@ function wireMotor(config: RobotConfig, m: number, d: number, channel: number, p
     const roleId = `${prefix}.${role.key}`;
     const macro = `MW_PIN_M${m}_${macroPart(motor.name, 'MOTOR')}_${role.key.toUpperCase()}`;
     const path = ['wiring', 'drivers', d, 'pins', roleId, 'pin'];
-    const entry = pins.use(driver.pins[roleId]?.pin, path, macro, `${role.label} of motor ${motor.name}`, driver.name, !role.optional);
+    const entry = pins.use(
+      driver.pins[roleId]?.pin,
+      path,
+      macro,
+      `${role.label} of motor ${motor.name}`,
+      driver.name,
+      !role.optional,
+    );
     if (!entry) continue;
     result.pins[role.key] = macro;
     if (role.need === 'pwm') result.pwmPins.push({ macro, pinId: entry.pinId });
@@ -113,7 +121,11 @@ function callsFor(kind: DriverKindId, wiring: MotorWiring, servoSlot: number, dr
   }
   const args = ARGUMENTS[kind].map((key) => wiring.pins[key] ?? '-1').join(', ');
   const brake = driver.stopMode === 'brake' ? 1 : 0;
-  return { drive: `${fn}_drive(${args}, direction, duty)`, stop: `${fn}_stop(${args}, ${brake})`, setup: `${fn}_setup(${args})` };
+  return {
+    drive: `${fn}_drive(${args}, direction, duty)`,
+    stop: `${fn}_stop(${args}, ${brake})`,
+    setup: `${fn}_setup(${args})`,
+  };
 }
 
 export interface OutputModel {
@@ -124,7 +136,12 @@ export interface OutputModel {
   servoPinMacros: string[];
 }
 
-export function buildOutputModel(config: RobotConfig, matrix: number[][], pins: PinRegistry, issues: IssueList): OutputModel {
+export function buildOutputModel(
+  config: RobotConfig,
+  matrix: number[][],
+  pins: PinRegistry,
+  issues: IssueList,
+): OutputModel {
   const placed = motorPlacement(config, issues);
   const motors: MotorModel[] = [];
   const wiring: MotorWiring[] = [];
@@ -133,7 +150,13 @@ export function buildOutputModel(config: RobotConfig, matrix: number[][], pins: 
   config.motors.forEach((motor, m) => {
     const place = placed.get(m);
     const row = (matrix[m] ?? [0, 0, 0]).map((v) => q15Signed(Math.max(-1, Math.min(1, v))));
-    const base = { index: m, mixExpression: mixExpression(m, row), nameLiteral: cString(motor.name), row, thresholdQ: q14(Math.min(motor.startThreshold, 0.99, config.safety.outputLimitPercent / 100)) };
+    const base = {
+      index: m,
+      mixExpression: mixExpression(m, row),
+      nameLiteral: cString(motor.name),
+      row,
+      thresholdQ: q14(Math.min(motor.startThreshold, 0.99, config.safety.outputLimitPercent / 100)),
+    };
     if (!place) {
       motors.push({ ...base, driveCall: '(void)direction; (void)duty', stopCall: '(void)0' });
       return;

@@ -95,7 +95,8 @@ function avrModel(settings: PinSetting[], board: BoardProfile) {
         asked,
       });
     }
-    if (avr.topRegister === 'ICR' && channel) topPins.push({ macro, timer: avr.timer, channel, scale: Math.round(avr.top * 257) });
+    if (avr.topRegister === 'ICR' && channel)
+      topPins.push({ macro, timer: avr.timer, channel, scale: Math.round(avr.top * 257) });
   }
   return { timers: [...timers.values()].sort((a, b) => a.timer - b.timer), topPins };
 }
@@ -108,9 +109,10 @@ export function buildPwmModel(config: RobotConfig, board: BoardProfile, wiring: 
   for (const { setting, asked } of settings) {
     if (asked === null) continue;
     const where = setting.avr ? `timer ${setting.avr.timer}` : 'the PWM outputs';
-    const text = setting.avr?.timer === 0
-      ? `PWM on timer 0 stays at ${formatHz(setting.actualHz)}: millis() and micros() run on that timer.`
-      : `PWM on ${where}: ${setting.formula}${setting.exact ? '' : ` (asked for ${formatHz(asked)})`}.`;
+    const text =
+      setting.avr?.timer === 0
+        ? `PWM on timer 0 stays at ${formatHz(setting.actualHz)}: millis() and micros() run on that timer.`
+        : `PWM on ${where}: ${setting.formula}${setting.exact ? '' : ` (asked for ${formatHz(asked)})`}.`;
     if (!described.has(text)) notes.push(text);
     described.add(text);
   }
@@ -118,7 +120,9 @@ export function buildPwmModel(config: RobotConfig, board: BoardProfile, wiring: 
     const { timers, topPins } = avrModel(settings, board);
     return { max: 255, avrTimers: timers, topPins, frequencyHz: 0, bits: 8, pinMacros, notes };
   }
-  const frequencyHz = Math.round(settings.find((s) => s.asked !== null)?.setting.actualHz ?? board.defaultPwmHz['*'] ?? 1000);
+  const frequencyHz = Math.round(
+    settings.find((s) => s.asked !== null)?.setting.actualHz ?? board.defaultPwmHz['*'] ?? 1000,
+  );
   if (board.family === 'esp32') {
     const bits = Math.min(MAX_DUTY_BITS, Math.max(...settings.map((s) => s.setting.ledc?.bits ?? MAX_DUTY_BITS), 1));
     return { max: 2 ** bits - 1, avrTimers: [], topPins: [], frequencyHz, bits, pinMacros, notes };

@@ -31,23 +31,51 @@ export function buildRemoteModel(config: RobotConfig, robot: FirmwareModel): Rem
   const pins = new PinRegistry(board, issues);
   // The pin plan places the remote's roles too (controls.link.remotePins).
   const chosen = (role: string) => link.remotePins[role]?.pin ?? null;
-  pins.use(chosen('ce'), ['controls', 'link', 'remotePins', 'ce', 'pin'], 'MW_PIN_NRF_CE', 'transceiver CE', 'remote nRF24L01+');
-  pins.use(chosen('csn'), ['controls', 'link', 'remotePins', 'csn', 'pin'], 'MW_PIN_NRF_CSN', 'transceiver CSN', 'remote nRF24L01+');
+  pins.use(
+    chosen('ce'),
+    ['controls', 'link', 'remotePins', 'ce', 'pin'],
+    'MW_PIN_NRF_CE',
+    'transceiver CE',
+    'remote nRF24L01+',
+  );
+  pins.use(
+    chosen('csn'),
+    ['controls', 'link', 'remotePins', 'csn', 'pin'],
+    'MW_PIN_NRF_CSN',
+    'transceiver CSN',
+    'remote nRF24L01+',
+  );
   pins.use(board.spi.sck, ['controls', 'link'], 'MW_PIN_NRF_SCK', 'transceiver SCK (SPI clock)', 'remote nRF24L01+');
   pins.use(board.spi.mosi, ['controls', 'link'], 'MW_PIN_NRF_MOSI', 'transceiver MOSI', 'remote nRF24L01+');
   pins.use(board.spi.miso, ['controls', 'link'], 'MW_PIN_NRF_MISO', 'transceiver MISO', 'remote nRF24L01+');
   const switches = twoPositionSwitches(config);
   const channels: RemoteModel['channels'] = [];
-  const listed = [...config.controls.channels].filter((c) => c.number <= LINK_CHANNEL_COUNT).sort((a, b) => a.number - b.number);
+  const listed = [...config.controls.channels]
+    .filter((c) => c.number <= LINK_CHANNEL_COUNT)
+    .sort((a, b) => a.number - b.number);
   for (const channel of listed) {
     const isSwitch = switches.has(channel.number);
     const macro = `MW_PIN_CH${channel.number}`;
-    const what = isSwitch ? `switch for channel ${channel.number} (to ground)` : `stick or knob for channel ${channel.number} (wiper)`;
-    const entry = pins.use(chosen(`ch${channel.number}`), ['controls', 'link', 'remotePins', `ch${channel.number}`, 'pin'], macro, what, 'remote');
+    const what = isSwitch
+      ? `switch for channel ${channel.number} (to ground)`
+      : `stick or knob for channel ${channel.number} (wiper)`;
+    const entry = pins.use(
+      chosen(`ch${channel.number}`),
+      ['controls', 'link', 'remotePins', `ch${channel.number}`, 'pin'],
+      macro,
+      what,
+      'remote',
+    );
     if (!entry) continue;
     const pin = findPin(board, entry.pinId)!;
-    if (!pin.analogIn && !pin.digital) issues.add(['controls', 'link', 'remotePins', `ch${channel.number}`, 'pin'], `Pin ${pin.label} cannot be read`);
-    channels.push({ number: channel.number, index: channel.number - 1, pinMacro: macro, analog: pin.analogIn && !(isSwitch && pin.digital) });
+    if (!pin.analogIn && !pin.digital)
+      issues.add(['controls', 'link', 'remotePins', `ch${channel.number}`, 'pin'], `Pin ${pin.label} cannot be read`);
+    channels.push({
+      number: channel.number,
+      index: channel.number - 1,
+      pinMacro: macro,
+      analog: pin.analogIn && !(isSwitch && pin.digital),
+    });
   }
   issues.throwIfAny();
   return {
@@ -59,4 +87,3 @@ export function buildRemoteModel(config: RobotConfig, robot: FirmwareModel): Rem
     sendRateHz: link.sendRateHz,
   };
 }
-

@@ -19,10 +19,20 @@ const SETTINGS = {
   ibus: { baud: 115200, frame: 'SERIAL_8N1', invert: false },
 } as const;
 
-
-export function uartModel(config: RobotConfig, source: 'sbus' | 'ibus', pins: PinRegistry, issues: IssueList): UartModel | null {
+export function uartModel(
+  config: RobotConfig,
+  source: 'sbus' | 'ibus',
+  pins: PinRegistry,
+  issues: IssueList,
+): UartModel | null {
   const path = ['wiring', 'inputPins', 'rx', 'pin'];
-  const entry = pins.use(config.wiring.inputPins.rx?.pin, path, 'MW_PIN_INPUT_RX', `the receiver's serial output`, 'receiver');
+  const entry = pins.use(
+    config.wiring.inputPins.rx?.pin,
+    path,
+    'MW_PIN_INPUT_RX',
+    `the receiver's serial output`,
+    'receiver',
+  );
   if (!entry) return null;
   const s = SETTINGS[source];
   const board = pins.board;
@@ -31,16 +41,27 @@ export function uartModel(config: RobotConfig, source: 'sbus' | 'ibus', pins: Pi
   if (board.family === 'avr') {
     const uart = board.uarts.find((u) => u.port === rxPort);
     if (!uart) {
-      const choices = board.uarts.map((u) => u.rx).filter(Boolean).join(', ');
+      const choices = board.uarts
+        .map((u) => u.rx)
+        .filter(Boolean)
+        .join(', ');
       issues.add(path, `Pin ${entry.pinLabel} is not a serial receive pin on ${board.name} (use ${choices})`);
       return null;
     }
-    const inverter = s.invert ? `SBUS is an inverted signal: ${board.name} needs an inverter between the receiver and ${entry.pinLabel}. ` : '';
+    const inverter = s.invert
+      ? `SBUS is an inverted signal: ${board.name} needs an inverter between the receiver and ${entry.pinLabel}. `
+      : '';
     const usb = uart.usb
       ? `${entry.pinLabel} is also the USB serial port: disconnect the receiver from it while uploading.`
       : `The receiver uses ${uart.port}.`;
     const note = `${inverter}${usb}`;
-    return { port: uart.port, beginCode: `MW_INPUT_SERIAL.begin(${s.baud}UL, ${s.frame});`, usb: uart.usb, baud: s.baud, note };
+    return {
+      port: uart.port,
+      beginCode: `MW_INPUT_SERIAL.begin(${s.baud}UL, ${s.frame});`,
+      usb: uart.usb,
+      baud: s.baud,
+      note,
+    };
   }
   if (board.family === 'esp32') {
     const uart = board.uarts.find((u) => !u.usb && u.remappable);
@@ -55,7 +76,10 @@ export function uartModel(config: RobotConfig, source: 'sbus' | 'ibus', pins: Pi
   }
   const port = rxPort;
   if (!port) {
-    const choices = board.uarts.map((u) => u.rx).filter(Boolean).join(', ');
+    const choices = board.uarts
+      .map((u) => u.rx)
+      .filter(Boolean)
+      .join(', ');
     issues.add(path, `Pin ${entry.pinLabel} is not a UART receive pin on ${board.name} (use ${choices})`);
     return null;
   }

@@ -20,9 +20,30 @@ export interface AvrBuildTarget {
 // mega.menu.cpu.atmega2560: maximum_size = 253952; the ATmega2560 has 8192 bytes of SRAM
 // (ATmega2560 datasheet, memory overview).
 export const AVR_TARGETS: Partial<Record<BoardId, AvrBuildTarget>> = {
-  uno: { board: 'uno', mcu: 'atmega328p', variant: 'standard', boardDefine: 'ARDUINO_AVR_UNO', flashMax: 32256, ramMax: 2048 },
-  nano: { board: 'nano', mcu: 'atmega328p', variant: 'eightanaloginputs', boardDefine: 'ARDUINO_AVR_NANO', flashMax: 30720, ramMax: 2048 },
-  mega2560: { board: 'mega2560', mcu: 'atmega2560', variant: 'mega', boardDefine: 'ARDUINO_AVR_MEGA2560', flashMax: 253952, ramMax: 8192 },
+  uno: {
+    board: 'uno',
+    mcu: 'atmega328p',
+    variant: 'standard',
+    boardDefine: 'ARDUINO_AVR_UNO',
+    flashMax: 32256,
+    ramMax: 2048,
+  },
+  nano: {
+    board: 'nano',
+    mcu: 'atmega328p',
+    variant: 'eightanaloginputs',
+    boardDefine: 'ARDUINO_AVR_NANO',
+    flashMax: 30720,
+    ramMax: 2048,
+  },
+  mega2560: {
+    board: 'mega2560',
+    mcu: 'atmega2560',
+    variant: 'mega',
+    boardDefine: 'ARDUINO_AVR_MEGA2560',
+    flashMax: 253952,
+    ramMax: 8192,
+  },
 };
 
 export function avrTarget(board: BoardId): AvrBuildTarget {

@@ -3,7 +3,14 @@ import { mkdir, mkdtemp, readdir, readFile, rm } from 'node:fs/promises';
 import { basename, join, resolve } from 'node:path';
 import type { BoardId } from '@shared/schemas/ids';
 import { avrTarget, type AvrBuildTarget } from './avr-boards';
-import { AVR_CXX_FLAGS, AVR_C_FLAGS, avrCommonFlags, avrIncludeFlags, cachedCore, cachedLibrary } from './avr-core-cache';
+import {
+  AVR_CXX_FLAGS,
+  AVR_C_FLAGS,
+  avrCommonFlags,
+  avrIncludeFlags,
+  cachedCore,
+  cachedLibrary,
+} from './avr-core-cache';
 import { runTool, type ToolResult } from './run-tool';
 import { toolchainPaths, type ToolchainOptions } from './toolchain-paths';
 
@@ -68,16 +75,30 @@ export async function compileAvrSketch(
     for (const source of sources) {
       const object = join(work, `${basename(source)}.o`);
       objects.push(object);
-      const result = await runTool('avr-gcc', [...sourceFlags(source, target), ...includes, '-c', source, '-o', object], {
-        timeoutMs,
-      });
+      const result = await runTool(
+        'avr-gcc',
+        [...sourceFlags(source, target), ...includes, '-c', source, '-o', object],
+        {
+          timeoutMs,
+        },
+      );
       const failure = stepFailure(result, 'compile', board, clean);
       if (failure) return failure;
     }
     const elf = join(work, 'firmware.elf');
     const link = await runTool(
       'avr-gcc',
-      [...avrCommonFlags(target), '-fuse-linker-plugin', '-Wl,--gc-sections', '-o', elf, ...objects, ...libArchives, core, '-lm'],
+      [
+        ...avrCommonFlags(target),
+        '-fuse-linker-plugin',
+        '-Wl,--gc-sections',
+        '-o',
+        elf,
+        ...objects,
+        ...libArchives,
+        core,
+        '-lm',
+      ],
       { timeoutMs },
     );
     const linkFailure = stepFailure(link, 'link', board, clean);
@@ -110,7 +131,8 @@ function stepFailure(
   board: BoardId,
   clean: (text: string) => string,
 ): AvrCompileResult | null {
-  if (result.timedOut) return { ok: false, board, stage: 'timeout', messages: `The ${stage} step took too long and was stopped.` };
+  if (result.timedOut)
+    return { ok: false, board, stage: 'timeout', messages: `The ${stage} step took too long and was stopped.` };
   if (result.code === 0) return null;
   return { ok: false, board, stage, messages: clean(`${result.stderr}${result.stdout}`).trim() };
 }

@@ -92,8 +92,9 @@ async function buildArchive(
     }
     const objects = sources.map((source, i) => join(work, `${i}-${basename(source)}.o`));
     const results = await runLimited(
-      sources.map((source, i) => () =>
-        runTool('avr-gcc', [...flagsFor(source, target, includes), source, '-o', objects[i]], { timeoutMs: 120_000 }),
+      sources.map(
+        (source, i) => () =>
+          runTool('avr-gcc', [...flagsFor(source, target, includes), source, '-o', objects[i]], { timeoutMs: 120_000 }),
       ),
       availableParallelism(),
     );
@@ -119,7 +120,11 @@ export function cachedCore(target: AvrBuildTarget, options: ToolchainOptions = {
 }
 
 /** A library bundled with the core (SPI, Wire, EEPROM …), built once per board. */
-export function cachedLibrary(library: string, target: AvrBuildTarget, options: ToolchainOptions = {}): Promise<string> {
+export function cachedLibrary(
+  library: string,
+  target: AvrBuildTarget,
+  options: ToolchainOptions = {},
+): Promise<string> {
   const { coreRoot } = toolchainPaths(options);
   const src = join(coreRoot, 'libraries', library, 'src');
   return cachedArchive(`lib-${library}`, [src], target, [`-I${src}`], options);

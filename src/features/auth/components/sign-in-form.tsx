@@ -11,7 +11,13 @@ import { useSignIn } from '../api/sign-in';
 
 type Values = z.input<typeof SignInInputSchema>;
 
-export function SignInForm({ defaultEmail = '', onSignedIn }: { defaultEmail?: string; onSignedIn: (user: CurrentUser) => void }) {
+export function SignInForm({
+  defaultEmail = '',
+  onSignedIn,
+}: {
+  defaultEmail?: string;
+  onSignedIn: (user: CurrentUser) => void;
+}) {
   const signIn = useSignIn();
   const form = useForm<Values, unknown, z.output<typeof SignInInputSchema>>({
     resolver: zodResolver(SignInInputSchema),
@@ -26,7 +32,13 @@ export function SignInForm({ defaultEmail = '', onSignedIn }: { defaultEmail?: s
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
       <FormError message={errors.root?.server?.message} />
-      <TextField label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...form.register('email')} />
+      <TextField
+        label="E-mail"
+        type="email"
+        autoComplete="email"
+        error={errors.email?.message}
+        {...form.register('email')}
+      />
       <TextField
         label="Password"
         type="password"

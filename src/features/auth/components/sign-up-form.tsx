@@ -10,7 +10,13 @@ import { useSignUp } from '../api/sign-up';
 
 type Values = z.input<typeof SignUpInputSchema>;
 
-export function SignUpForm({ defaultEmail = '', onSignedUp }: { defaultEmail?: string; onSignedUp: (user: CurrentUser) => void }) {
+export function SignUpForm({
+  defaultEmail = '',
+  onSignedUp,
+}: {
+  defaultEmail?: string;
+  onSignedUp: (user: CurrentUser) => void;
+}) {
   const signUp = useSignUp();
   const form = useForm<Values, unknown, z.output<typeof SignUpInputSchema>>({
     resolver: zodResolver(SignUpInputSchema),
@@ -26,7 +32,13 @@ export function SignUpForm({ defaultEmail = '', onSignedUp }: { defaultEmail?: s
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
       <FormError message={errors.root?.server?.message} />
       <TextField label="Your name" autoComplete="name" error={errors.name?.message} {...form.register('name')} />
-      <TextField label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...form.register('email')} />
+      <TextField
+        label="E-mail"
+        type="email"
+        autoComplete="email"
+        error={errors.email?.message}
+        {...form.register('email')}
+      />
       <TextField
         label="Password"
         type="password"

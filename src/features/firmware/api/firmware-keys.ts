@@ -5,6 +5,7 @@ export const firmwareKeys = {
   all: ['firmware'] as const,
   robot: (robotId: string) => [...firmwareKeys.all, robotId] as const,
   files: (robotId: string, revision: number) => [...firmwareKeys.robot(robotId), 'files', revision] as const,
-  draftFiles: (robotId: string, config: RobotConfig) => [...firmwareKeys.robot(robotId), 'draft-files', config] as const,
+  draftFiles: (robotId: string, config: RobotConfig) =>
+    [...firmwareKeys.robot(robotId), 'draft-files', config] as const,
   verify: (robotId: string, revision: number) => [...firmwareKeys.robot(robotId), 'verify', revision] as const,
 };

@@ -6,7 +6,11 @@ import { firmwareKeys } from './firmware-keys';
 
 /** Renders an unsaved draft on the server (a POST: the draft travels in the body; nothing is stored). */
 export function previewDraftFiles(robotId: string, config: RobotConfig, signal?: AbortSignal): Promise<FirmwareFiles> {
-  return apiRequest<FirmwareFiles>(`/robots/${encodeURIComponent(robotId)}/preview-files`, { method: 'POST', body: { config }, signal });
+  return apiRequest<FirmwareFiles>(`/robots/${encodeURIComponent(robotId)}/preview-files`, {
+    method: 'POST',
+    body: { config },
+    signal,
+  });
 }
 
 export const draftFilesQueryOptions = (robotId: string, config: RobotConfig) =>

@@ -5,7 +5,9 @@ import { firmwareKeys } from './firmware-keys';
 
 /** Compiles a saved revision's sketches on the server (cached there by content). */
 export function verifyRevision(robotId: string, revision: number): Promise<VerifyResult> {
-  return apiRequest<VerifyResult>(`/robots/${encodeURIComponent(robotId)}/revisions/${revision}/verify`, { method: 'POST' });
+  return apiRequest<VerifyResult>(`/robots/${encodeURIComponent(robotId)}/revisions/${revision}/verify`, {
+    method: 'POST',
+  });
 }
 
 /**

@@ -5,8 +5,15 @@ import { fieldLink } from '../lib/field-link';
 /** Reasons the firmware cannot be generated, each leading to the field to change. */
 export function BlockerList({ title, blockers }: { title: string; blockers: FirmwareBlocker[] }) {
   return (
-    <section role="alert" aria-labelledby="fw-blockers-title" className="rounded-lg border border-error/40 bg-error-soft/40">
-      <h2 id="fw-blockers-title" className="border-b border-error/25 px-4 py-2 text-base font-semibold text-error-strong">
+    <section
+      role="alert"
+      aria-labelledby="fw-blockers-title"
+      className="rounded-lg border border-error/40 bg-error-soft/40"
+    >
+      <h2
+        id="fw-blockers-title"
+        className="border-b border-error/25 px-4 py-2 text-base font-semibold text-error-strong"
+      >
         {title}
       </h2>
       <ul className="max-h-64 divide-y divide-error/15 overflow-y-auto">
@@ -22,7 +29,11 @@ export function BlockerList({ title, blockers }: { title: string; blockers: Firm
                 <code className="text-xs text-ink-muted">{blocker.path.join('.')}</code>
               </span>
               {href && (
-                <Link to={href} relative="path" className="shrink-0 rounded px-1 font-semibold text-accent-strong hover:underline">
+                <Link
+                  to={href}
+                  relative="path"
+                  className="shrink-0 rounded px-1 font-semibold text-accent-strong hover:underline"
+                >
                   Show field
                 </Link>
               )}

@@ -5,12 +5,20 @@ import { formatBytes } from '../lib/file-groups';
 import { highlightHtml, lineCount } from '../lib/highlight';
 import './code-view.css';
 
-const LANGUAGE_NAMES: Record<FirmwareFile['language'], string> = { cpp: 'C++', json: 'JSON', markdown: 'Markdown', text: 'Text' };
+const LANGUAGE_NAMES: Record<FirmwareFile['language'], string> = {
+  cpp: 'C++',
+  json: 'JSON',
+  markdown: 'Markdown',
+  text: 'Text',
+};
 
 /** One file of the bundle, highlighted, with line numbers and a copy button. */
 export function CodeView({ file }: { file: FirmwareFile }) {
   const html = useMemo(() => highlightHtml(file.content, file.language), [file.content, file.language]);
-  const lines = useMemo(() => Array.from({ length: lineCount(file.content) }, (_, i) => i + 1).join('\n'), [file.content]);
+  const lines = useMemo(
+    () => Array.from({ length: lineCount(file.content) }, (_, i) => i + 1).join('\n'),
+    [file.content],
+  );
   const [copied, setCopied] = useState<string | null>(null);
   const copy = async () => {
     try {
@@ -34,8 +42,15 @@ export function CodeView({ file }: { file: FirmwareFile }) {
           </Button>
         </span>
       </figcaption>
-      <div className="flex max-h-[34rem] overflow-auto font-mono text-[0.8rem] leading-5" tabIndex={0} aria-label={`Contents of ${file.path}`}>
-        <pre aria-hidden="true" className="sticky left-0 shrink-0 border-r border-rule bg-paper-raised px-2 py-2 text-right text-ink-faint select-none">
+      <div
+        className="flex max-h-[34rem] overflow-auto font-mono text-[0.8rem] leading-5"
+        tabIndex={0}
+        aria-label={`Contents of ${file.path}`}
+      >
+        <pre
+          aria-hidden="true"
+          className="sticky left-0 shrink-0 border-r border-rule bg-paper-raised px-2 py-2 text-right text-ink-faint select-none"
+        >
           {lines}
         </pre>
         <pre className="mw-code min-w-0 flex-1 px-3 py-2 text-ink">

@@ -11,7 +11,11 @@ import { UsageBar } from './usage-bar';
 function Outcome({ sketch }: { sketch: SketchCheck }) {
   if (sketch.ok === true) return <Badge tone="accent">Compiles</Badge>;
   if (sketch.ok === null) return <Badge tone="neutral">Not checked here</Badge>;
-  return <span className="inline-flex items-center rounded border border-error/30 bg-error-soft px-1.5 py-0.5 text-xs font-semibold text-error-strong">{sketch.timedOut ? 'Stopped at the time limit' : 'Does not compile'}</span>;
+  return (
+    <span className="inline-flex items-center rounded border border-error/30 bg-error-soft px-1.5 py-0.5 text-xs font-semibold text-error-strong">
+      {sketch.timedOut ? 'Stopped at the time limit' : 'Does not compile'}
+    </span>
+  );
 }
 
 function SketchResult({ sketch, remote }: { sketch: SketchCheck; remote: boolean }) {
@@ -58,21 +62,35 @@ export function CompileCheck({ robotId, revision, blocked, remoteFolder }: Compi
       titleId="fw-compile-title"
       description={`Revision ${revision} as saved, built for its board on the server.`}
       actions={
-        <Button variant="secondary" size="sm" onClick={() => verify.check()} busy={verify.isFetching} disabled={blocked}>
+        <Button
+          variant="secondary"
+          size="sm"
+          onClick={() => verify.check()}
+          busy={verify.isFetching}
+          disabled={blocked}
+        >
           {result ? 'Check again' : 'Check that it compiles'}
         </Button>
       }
     >
       <div aria-live="polite" className="space-y-2">
-        {blocked && <p className="text-sm text-ink-muted">Revision {revision} cannot become firmware, so there is nothing to compile yet.</p>}
-        {!blocked && verify.isFetching && <p className="text-sm text-ink-muted">Compiling… the server builds one bundle at a time; this takes a few seconds.</p>}
+        {blocked && (
+          <p className="text-sm text-ink-muted">
+            Revision {revision} cannot become firmware, so there is nothing to compile yet.
+          </p>
+        )}
+        {!blocked && verify.isFetching && (
+          <p className="text-sm text-ink-muted">
+            Compiling… the server builds one bundle at a time; this takes a few seconds.
+          </p>
+        )}
         {!blocked && !verify.isFetching && verify.isError && (
           <ErrorState message={errorMessage(verify.error)} onRetry={() => verify.check()} />
         )}
         {!blocked && !verify.isFetching && !result && !verify.isError && (
           <p className="text-sm text-ink-muted">
-            AVR boards (Uno, Nano, Mega 2560) are compiled with avr-gcc against the Arduino AVR core, with warnings treated as
-            errors. ESP32 and RP2040 sketches are not compiled on this server.
+            AVR boards (Uno, Nano, Mega 2560) are compiled with avr-gcc against the Arduino AVR core, with warnings
+            treated as errors. ESP32 and RP2040 sketches are not compiled on this server.
           </p>
         )}
         {result && !verify.isFetching && (

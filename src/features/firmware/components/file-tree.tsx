@@ -4,13 +4,27 @@ import { fileName, formatBytes, type FileGroup } from '../lib/file-groups';
 function FolderGlyph() {
   return (
     <svg viewBox="0 0 16 16" className="size-3.5 shrink-0 text-ink-faint" aria-hidden="true">
-      <path d="M1.5 3.5h4.2l1.4 1.6h7.4v7.4h-13z" fill="none" stroke="currentColor" strokeWidth="1.3" strokeLinejoin="round" />
+      <path
+        d="M1.5 3.5h4.2l1.4 1.6h7.4v7.4h-13z"
+        fill="none"
+        stroke="currentColor"
+        strokeWidth="1.3"
+        strokeLinejoin="round"
+      />
     </svg>
   );
 }
 
 /** The bundle's files by folder; choosing one shows it in the preview. */
-export function FileTree({ groups, selected, onSelect }: { groups: FileGroup[]; selected: string | null; onSelect: (path: string) => void }) {
+export function FileTree({
+  groups,
+  selected,
+  onSelect,
+}: {
+  groups: FileGroup[];
+  selected: string | null;
+  onSelect: (path: string) => void;
+}) {
   return (
     <nav aria-label="Files in the bundle" className="space-y-3 text-sm">
       {groups.map((group) => (

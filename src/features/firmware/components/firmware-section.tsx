@@ -70,7 +70,10 @@ export function FirmwareSection({ robot, head, config, validConfig, fieldErrors,
         bootLine={shown.data?.bootLine ?? null}
       />
       {unsaved && invalidFields.length > 0 && (
-        <BlockerList title="Correct these fields; until then the files follow your last valid change" blockers={invalidFields} />
+        <BlockerList
+          title="Correct these fields; until then the files follow your last valid change"
+          blockers={invalidFields}
+        />
       )}
       {shown.isPending && <LoadingState label="Rendering the firmware…" />}
       {shown.isError && shownBlockers && (
@@ -79,8 +82,12 @@ export function FirmwareSection({ robot, head, config, validConfig, fieldErrors,
           blockers={shownBlockers}
         />
       )}
-      {shown.isError && !shownBlockers && <ErrorState message={errorMessage(shown.error)} onRetry={() => shown.refetch()} />}
-      {shown.data && !shown.isError && <BundleFiles bundle={shown.data} updating={shown.isPlaceholderData && shown.isFetching} />}
+      {shown.isError && !shownBlockers && (
+        <ErrorState message={errorMessage(shown.error)} onRetry={() => shown.refetch()} />
+      )}
+      {shown.data && !shown.isError && (
+        <BundleFiles bundle={shown.data} updating={shown.isPlaceholderData && shown.isFetching} />
+      )}
       <div className="grid items-start gap-4 lg:grid-cols-2">
         <CompileCheck
           robotId={robot.id}
@@ -88,7 +95,12 @@ export function FirmwareSection({ robot, head, config, validConfig, fieldErrors,
           blocked={headUnavailable}
           remoteFolder={headFiles.data?.remoteFolder ?? null}
         />
-        <FirmwareSettings config={config} onChange={onChange} canEdit={canEdit} derivedName={config.firmware.sketchName === null ? (shown.data?.sketchFolder ?? null) : null} />
+        <FirmwareSettings
+          config={config}
+          onChange={onChange}
+          canEdit={canEdit}
+          derivedName={config.firmware.sketchName === null ? (shown.data?.sketchFolder ?? null) : null}
+        />
       </div>
     </div>
   );

@@ -5,7 +5,10 @@ import { TextField } from '@/components/ui/text-field';
 
 type Firmware = RobotConfig['firmware'];
 
-const BAUD_OPTIONS = [9600, 57600, 115200].map((b) => ({ value: String(b), label: `${b.toLocaleString('en-GB')} baud` }));
+const BAUD_OPTIONS = [9600, 57600, 115200].map((b) => ({
+  value: String(b),
+  label: `${b.toLocaleString('en-GB')} baud`,
+}));
 
 /** Why a sketch name is refused (the schema's own words), or undefined. */
 function sketchNameError(name: string | null): string | undefined {
@@ -55,7 +58,9 @@ export function FirmwareSettings({ config, onChange, canEdit, derivedName }: Fir
           />
           <span>
             <span className="font-semibold text-ink-soft">Print link health on the serial port</span>
-            <span className="block text-ink-muted">Good and bad frames, time since the last good frame and retries, at a slow rate.</span>
+            <span className="block text-ink-muted">
+              Good and bad frames, time since the last good frame and retries, at a slow rate.
+            </span>
           </span>
         </label>
         <div data-field="firmware.diagnosticsIntervalMs">
@@ -68,7 +73,9 @@ export function FirmwareSettings({ config, onChange, canEdit, derivedName }: Fir
             step={250}
             disabled={!fw.serialDiagnostics}
             value={Number.isFinite(fw.diagnosticsIntervalMs) ? fw.diagnosticsIntervalMs : ''}
-            onChange={(e) => set({ diagnosticsIntervalMs: e.target.value === '' ? Number.NaN : Number(e.target.value) })}
+            onChange={(e) =>
+              set({ diagnosticsIntervalMs: e.target.value === '' ? Number.NaN : Number(e.target.value) })
+            }
             error={intervalError(fw.diagnosticsIntervalMs)}
           />
         </div>

@@ -14,7 +14,13 @@ export interface FirmwareStatusProps {
 }
 
 /** Which configuration the files are from, the download, and the boot line to look for on the robot. */
-export function FirmwareStatus({ showingDraft, headRevision, downloadHref, blockedReason, bootLine }: FirmwareStatusProps) {
+export function FirmwareStatus({
+  showingDraft,
+  headRevision,
+  downloadHref,
+  blockedReason,
+  bootLine,
+}: FirmwareStatusProps) {
   return (
     <div
       className={cx(
@@ -26,19 +32,23 @@ export function FirmwareStatus({ showingDraft, headRevision, downloadHref, block
         <p role="status" className={cx('text-sm', showingDraft ? 'text-warn-strong' : 'text-ink-soft')}>
           {showingDraft ? (
             <>
-              <span className="font-semibold">Showing the firmware of your unsaved changes</span> (it becomes revision {headRevision + 1} when
-              saved). The download and the compile check use revision {headRevision} as saved; save to include your changes.
+              <span className="font-semibold">Showing the firmware of your unsaved changes</span> (it becomes revision{' '}
+              {headRevision + 1} when saved). The download and the compile check use revision {headRevision} as saved;
+              save to include your changes.
             </>
           ) : (
             <>
-              <span className="font-semibold">Revision {headRevision} as saved.</span> This is the firmware the download holds.
+              <span className="font-semibold">Revision {headRevision} as saved.</span> This is the firmware the download
+              holds.
             </>
           )}
         </p>
         {bootLine && (
           <p className="text-sm text-ink-muted">
             At start the robot prints{' '}
-            <code className="rounded bg-paper-sunken px-1.5 py-0.5 font-mono text-[0.8rem] break-all text-ink">{bootLine}</code>
+            <code className="rounded bg-paper-sunken px-1.5 py-0.5 font-mono text-[0.8rem] break-all text-ink">
+              {bootLine}
+            </code>
           </p>
         )}
       </div>
@@ -52,7 +62,9 @@ export function FirmwareStatus({ showingDraft, headRevision, downloadHref, block
             Download revision {headRevision} (.zip)
           </span>
         )}
-        {!downloadHref && blockedReason && <span className="max-w-64 text-right text-xs text-ink-muted">{blockedReason}</span>}
+        {!downloadHref && blockedReason && (
+          <span className="max-w-64 text-right text-xs text-ink-muted">{blockedReason}</span>
+        )}
       </div>
     </div>
   );

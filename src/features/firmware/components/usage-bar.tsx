@@ -2,10 +2,24 @@ import { cx } from '@/components/ui/cx';
 import { formatUsage, usageOf, type UsageTone } from '../lib/usage';
 
 const FILL: Record<UsageTone, string> = { ok: 'bg-accent', warn: 'bg-warn', error: 'bg-error' };
-const TEXT: Record<UsageTone, string> = { ok: 'text-ink-muted', warn: 'text-warn-strong font-semibold', error: 'text-error-strong font-semibold' };
+const TEXT: Record<UsageTone, string> = {
+  ok: 'text-ink-muted',
+  warn: 'text-warn-strong font-semibold',
+  error: 'text-error-strong font-semibold',
+};
 
 /** How much of the board's flash or RAM the build takes, as a bar against the limit. */
-export function UsageBar({ label, bytes, max, kind }: { label: string; bytes: number; max: number; kind: 'flash' | 'ram' }) {
+export function UsageBar({
+  label,
+  bytes,
+  max,
+  kind,
+}: {
+  label: string;
+  bytes: number;
+  max: number;
+  kind: 'flash' | 'ram';
+}) {
   const usage = usageOf(bytes, max, kind);
   const text = `${usage.percent} % (${formatUsage(bytes, max)})`;
   return (

@@ -15,10 +15,15 @@ export function blockersOf(error: unknown): FirmwareBlocker[] | null {
   if (!isApiError(error)) return null;
   if (error.status === 422 && error.code === 'firmware_blocked') {
     const issues = Array.isArray(error.details.issues) ? error.details.issues.filter(isBlocker) : [];
-    return issues.length > 0 ? issues : Object.entries(error.fields).map(([key, message]) => ({ path: key.split('.'), message }));
+    return issues.length > 0
+      ? issues
+      : Object.entries(error.fields).map(([key, message]) => ({ path: key.split('.'), message }));
   }
   if (error.status === 400 && Object.keys(error.fields).length > 0) {
-    return Object.entries(error.fields).map(([key, message]) => ({ path: key.replace(/^config\./, '').split('.'), message }));
+    return Object.entries(error.fields).map(([key, message]) => ({
+      path: key.replace(/^config\./, '').split('.'),
+      message,
+    }));
   }
   return null;
 }

@@ -24,9 +24,19 @@ export function groupFiles(bundle: FirmwareFiles): FileGroup[] {
     { id: 'robot', title: 'Robot sketch', folder: bundle.sketchFolder, files: inFolder(bundle.sketchFolder) },
   ];
   if (bundle.remoteFolder) {
-    groups.push({ id: 'remote', title: 'Remote transmitter sketch', folder: bundle.remoteFolder, files: inFolder(bundle.remoteFolder) });
+    groups.push({
+      id: 'remote',
+      title: 'Remote transmitter sketch',
+      folder: bundle.remoteFolder,
+      files: inFolder(bundle.remoteFolder),
+    });
   }
-  groups.push({ id: 'documents', title: 'Bundle documents', folder: null, files: bundle.files.filter((f) => !f.path.includes('/')) });
+  groups.push({
+    id: 'documents',
+    title: 'Bundle documents',
+    folder: null,
+    files: bundle.files.filter((f) => !f.path.includes('/')),
+  });
   return groups.filter((g) => g.files.length > 0);
 }
 

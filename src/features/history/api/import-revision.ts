@@ -14,7 +14,10 @@ export function importRevision(robotId: string, input: ImportRevisionInput): Pro
   form.set('baseRevision', String(input.baseRevision));
   if (input.message) form.set('message', input.message);
   form.set('file', input.file);
-  return apiRequest<ImportAnswer>(`/robots/${encodeURIComponent(robotId)}/revisions/import`, { method: 'POST', body: form });
+  return apiRequest<ImportAnswer>(`/robots/${encodeURIComponent(robotId)}/revisions/import`, {
+    method: 'POST',
+    body: form,
+  });
 }
 
 export function useImportRevision(robotId: string) {

@@ -17,7 +17,10 @@ export function importRobot(teamId: string, input: ImportRobotInput): Promise<Im
   if (input.name) form.set('name', input.name);
   if (input.message) form.set('message', input.message);
   form.set('file', input.file);
-  return apiRequest<ImportRobotAnswer>(`/teams/${encodeURIComponent(teamId)}/robots/import`, { method: 'POST', body: form });
+  return apiRequest<ImportRobotAnswer>(`/teams/${encodeURIComponent(teamId)}/robots/import`, {
+    method: 'POST',
+    body: form,
+  });
 }
 
 export function useImportRobot(teamId: string) {

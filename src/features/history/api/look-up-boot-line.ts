@@ -3,7 +3,10 @@ import { apiRequest } from '@/lib/api-client';
 import type { BootLineAnswer } from '@shared/schemas/history';
 
 export function lookUpBootLine(robotId: string, line: string): Promise<BootLineAnswer> {
-  return apiRequest<BootLineAnswer>(`/robots/${encodeURIComponent(robotId)}/boot-line`, { method: 'POST', body: { line } });
+  return apiRequest<BootLineAnswer>(`/robots/${encodeURIComponent(robotId)}/boot-line`, {
+    method: 'POST',
+    body: { line },
+  });
 }
 
 /** A question, not a change: nothing to refresh afterwards. */

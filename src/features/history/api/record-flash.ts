@@ -5,7 +5,12 @@ import type { FlashEntry, RecordFlashInput } from '@shared/schemas/history';
 import { historyKeys } from './history-keys';
 
 export async function recordFlash(robotId: string, input: RecordFlashInput): Promise<FlashEntry> {
-  return (await apiRequest<{ flash: FlashEntry }>(`/robots/${encodeURIComponent(robotId)}/flashes`, { method: 'POST', body: input })).flash;
+  return (
+    await apiRequest<{ flash: FlashEntry }>(`/robots/${encodeURIComponent(robotId)}/flashes`, {
+      method: 'POST',
+      body: input,
+    })
+  ).flash;
 }
 
 export function useRecordFlash(robotId: string) {

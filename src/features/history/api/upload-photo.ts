@@ -6,7 +6,12 @@ import type { RobotSummary } from '@shared/schemas/robots';
 export async function uploadPhoto(robotId: string, file: File): Promise<RobotSummary> {
   const form = new FormData();
   form.set('photo', file);
-  return (await apiRequest<{ robot: RobotSummary }>(`/robots/${encodeURIComponent(robotId)}/photo`, { method: 'PUT', body: form })).robot;
+  return (
+    await apiRequest<{ robot: RobotSummary }>(`/robots/${encodeURIComponent(robotId)}/photo`, {
+      method: 'PUT',
+      body: form,
+    })
+  ).robot;
 }
 
 export function useUploadPhoto(robotId: string) {

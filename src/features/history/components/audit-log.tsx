@@ -19,7 +19,13 @@ const KIND_LABELS: Record<AuditKind, string> = {
  * The owners' audit log: every action in the team and the members' sign-ins, filtered by kind,
  * fifty at a time. `renderEvents` draws a page of events (the team feature's activity list).
  */
-export function AuditLog({ teamId, renderEvents }: { teamId: string; renderEvents: (events: TeamActivity[]) => ReactNode }) {
+export function AuditLog({
+  teamId,
+  renderEvents,
+}: {
+  teamId: string;
+  renderEvents: (events: TeamActivity[]) => ReactNode;
+}) {
   const [kind, setKind] = useState<AuditKind>('all');
   const log = useAuditLog(teamId, kind);
   const id = useId();
@@ -28,7 +34,12 @@ export function AuditLog({ teamId, renderEvents }: { teamId: string; renderEvent
     <div className="space-y-3">
       <label htmlFor={id} className="flex items-center gap-2 text-sm font-semibold text-ink-soft">
         Show
-        <select id={id} value={kind} onChange={(e) => setKind(e.target.value as AuditKind)} className="rounded-md border border-rule-strong bg-paper-raised px-2 py-1 font-normal text-ink">
+        <select
+          id={id}
+          value={kind}
+          onChange={(e) => setKind(e.target.value as AuditKind)}
+          className="rounded-md border border-rule-strong bg-paper-raised px-2 py-1 font-normal text-ink"
+        >
           {AUDIT_KINDS.map((k) => (
             <option key={k} value={k}>
               {KIND_LABELS[k]}

@@ -8,21 +8,33 @@ import { useLookUpBootLine } from '../api/look-up-boot-line';
 
 function Answer({ answer }: { answer: BootLineAnswer }) {
   const { match } = answer;
-  const tone = match && answer.nameMatches ? (match.isHead ? 'border-accent/40 bg-accent-soft' : 'border-warn/40 bg-warn-soft') : 'border-error/30 bg-error-soft';
+  const tone =
+    match && answer.nameMatches
+      ? match.isHead
+        ? 'border-accent/40 bg-accent-soft'
+        : 'border-warn/40 bg-warn-soft'
+      : 'border-error/30 bg-error-soft';
   return (
     <div role="status" className={`space-y-1.5 rounded-md border px-3 py-2 ${tone}`}>
       <p className="font-semibold">{answer.verdict}</p>
       {match && (
         <p className="text-sm text-ink-soft">
           <span className="font-mono">r{match.number}</span> “{match.message}”, saved {formatDateTime(match.createdAt)}{' '}
-          {match.isHead ? <Badge tone="accent">head</Badge> : <Badge tone="warn">behind head r{answer.headRevision}</Badge>}
+          {match.isHead ? (
+            <Badge tone="accent">head</Badge>
+          ) : (
+            <Badge tone="warn">behind head r{answer.headRevision}</Badge>
+          )}
         </p>
       )}
       {answer.sameConfiguration.length > 0 && (
-        <p className="text-sm text-ink-muted">Same configuration as {answer.sameConfiguration.map((n) => `r${n}`).join(', ')}.</p>
+        <p className="text-sm text-ink-muted">
+          Same configuration as {answer.sameConfiguration.map((n) => `r${n}`).join(', ')}.
+        </p>
       )}
       <p className="font-mono text-xs text-ink-muted">
-        read: {answer.parsed.device} “{answer.parsed.robotName}” revision {answer.parsed.revision} hash {answer.parsed.hash}
+        read: {answer.parsed.device} “{answer.parsed.robotName}” revision {answer.parsed.revision} hash{' '}
+        {answer.parsed.hash}
       </p>
     </div>
   );
@@ -33,7 +45,11 @@ export function BootLineBox({ robotId }: { robotId: string }) {
   const [line, setLine] = useState('');
   const lookUp = useLookUpBootLine(robotId);
   const id = useId();
-  const fieldError = isApiError(lookUp.error) ? (lookUp.error.fields.line ?? errorMessage(lookUp.error)) : lookUp.isError ? errorMessage(lookUp.error) : undefined;
+  const fieldError = isApiError(lookUp.error)
+    ? (lookUp.error.fields.line ?? errorMessage(lookUp.error))
+    : lookUp.isError
+      ? errorMessage(lookUp.error)
+      : undefined;
   return (
     <form
       className="space-y-3"

@@ -8,14 +8,29 @@ import { NotesList } from './notes-list';
 
 export const IMPORT_ACCEPT = '.json,.zip,application/json,application/zip';
 
-function ExportLink({ robotId, robotName, revisions, headRevision }: { robotId: string; robotName: string; revisions: number[]; headRevision: number }) {
+function ExportLink({
+  robotId,
+  robotName,
+  revisions,
+  headRevision,
+}: {
+  robotId: string;
+  robotName: string;
+  revisions: number[];
+  headRevision: number;
+}) {
   const [revision, setRevision] = useState(headRevision);
   const id = useId();
   return (
     <div className="flex flex-wrap items-end gap-3">
       <label htmlFor={id} className="flex flex-col gap-1 text-sm font-semibold text-ink-soft">
         Revision
-        <select id={id} value={revision} onChange={(e) => setRevision(Number(e.target.value))} className="rounded-md border border-rule-strong bg-paper-raised px-2 py-1.5 font-mono font-normal text-ink">
+        <select
+          id={id}
+          value={revision}
+          onChange={(e) => setRevision(Number(e.target.value))}
+          className="rounded-md border border-rule-strong bg-paper-raised px-2 py-1.5 font-mono font-normal text-ink"
+        >
           {revisions.map((n) => (
             <option key={n} value={n}>
               r{n}
@@ -48,11 +63,24 @@ function ImportRevisionForm({ robotId, headRevision }: { robotId: string; headRe
       <label htmlFor={ids.file} className="block text-sm font-semibold text-ink-soft">
         Configuration file (.json) or firmware bundle (.zip)
       </label>
-      <input id={ids.file} type="file" accept={IMPORT_ACCEPT} onChange={(e) => setFile(e.target.files?.[0] ?? null)} className="block text-sm" />
+      <input
+        id={ids.file}
+        type="file"
+        accept={IMPORT_ACCEPT}
+        onChange={(e) => setFile(e.target.files?.[0] ?? null)}
+        className="block text-sm"
+      />
       <label htmlFor={ids.message} className="block text-sm font-semibold text-ink-soft">
         Message (optional)
       </label>
-      <input id={ids.message} value={message} maxLength={500} onChange={(e) => setMessage(e.target.value)} placeholder="Imported from the file name" className="block w-full rounded-md border border-rule-strong bg-paper-raised px-3 py-1.5" />
+      <input
+        id={ids.message}
+        value={message}
+        maxLength={500}
+        onChange={(e) => setMessage(e.target.value)}
+        placeholder="Imported from the file name"
+        className="block w-full rounded-md border border-rule-strong bg-paper-raised px-3 py-1.5"
+      />
       <Button type="submit" busy={importing.isPending} disabled={!file}>
         Import as revision {headRevision + 1}
       </Button>
@@ -68,7 +96,13 @@ function ImportRevisionForm({ robotId, headRevision }: { robotId: string; headRe
 }
 
 /** Download any revision's configuration as JSON; editors bring one back in as the next revision. */
-export function ExportImportPanel(props: { robotId: string; robotName: string; revisions: number[]; headRevision: number; canEdit: boolean }) {
+export function ExportImportPanel(props: {
+  robotId: string;
+  robotName: string;
+  revisions: number[];
+  headRevision: number;
+  canEdit: boolean;
+}) {
   return (
     <div className="space-y-5">
       <ExportLink {...props} />

@@ -54,7 +54,11 @@ function Row({ row }: { row: DiffRow }) {
   );
 }
 
-const STATUS_WORDS: Record<FileDiff['status'], string> = { changed: 'changed', added: 'new file', removed: 'file removed' };
+const STATUS_WORDS: Record<FileDiff['status'], string> = {
+  changed: 'changed',
+  added: 'new file',
+  removed: 'file removed',
+};
 
 /** One generated file's change, collapsible, with its counts in the summary. */
 export function FileDiffView({ file, from, to, open }: { file: FileDiff; from: number; to: number; open?: boolean }) {

@@ -14,7 +14,15 @@ function localNow(): string {
   return new Date(now.getTime() - now.getTimezoneOffset() * 60_000).toISOString().slice(0, 16);
 }
 
-function FlashForm({ robotId, revisions, headRevision }: { robotId: string; revisions: number[]; headRevision: number }) {
+function FlashForm({
+  robotId,
+  revisions,
+  headRevision,
+}: {
+  robotId: string;
+  revisions: number[];
+  headRevision: number;
+}) {
   const [revision, setRevision] = useState(headRevision);
   const [when, setWhen] = useState(localNow);
   const [note, setNote] = useState('');
@@ -29,7 +37,12 @@ function FlashForm({ robotId, revisions, headRevision }: { robotId: string; revi
     <form onSubmit={submit} className="flex flex-wrap items-end gap-3" aria-label="Record a flash">
       <label className="flex flex-col gap-1 text-sm font-semibold text-ink-soft" htmlFor={ids.revision}>
         Revision
-        <select id={ids.revision} value={revision} onChange={(e) => setRevision(Number(e.target.value))} className="rounded-md border border-rule-strong bg-paper-raised px-2 py-1.5 font-mono font-normal text-ink">
+        <select
+          id={ids.revision}
+          value={revision}
+          onChange={(e) => setRevision(Number(e.target.value))}
+          className="rounded-md border border-rule-strong bg-paper-raised px-2 py-1.5 font-mono font-normal text-ink"
+        >
           {revisions.map((n) => (
             <option key={n} value={n}>
               r{n}
@@ -40,11 +53,25 @@ function FlashForm({ robotId, revisions, headRevision }: { robotId: string; revi
       </label>
       <label className="flex flex-col gap-1 text-sm font-semibold text-ink-soft" htmlFor={ids.when}>
         Flashed at
-        <input id={ids.when} type="datetime-local" value={when} onChange={(e) => setWhen(e.target.value)} aria-invalid={fieldError('flashedAt') ? true : undefined} className="rounded-md border border-rule-strong bg-paper-raised px-2 py-1.5 font-normal text-ink" />
+        <input
+          id={ids.when}
+          type="datetime-local"
+          value={when}
+          onChange={(e) => setWhen(e.target.value)}
+          aria-invalid={fieldError('flashedAt') ? true : undefined}
+          className="rounded-md border border-rule-strong bg-paper-raised px-2 py-1.5 font-normal text-ink"
+        />
       </label>
       <label className="flex min-w-48 flex-1 flex-col gap-1 text-sm font-semibold text-ink-soft" htmlFor={ids.note}>
         Note
-        <input id={ids.note} value={note} maxLength={500} onChange={(e) => setNote(e.target.value)} placeholder="Which board, what was tested" className="rounded-md border border-rule-strong bg-paper-raised px-2 py-1.5 font-normal text-ink" />
+        <input
+          id={ids.note}
+          value={note}
+          maxLength={500}
+          onChange={(e) => setNote(e.target.value)}
+          placeholder="Which board, what was tested"
+          className="rounded-md border border-rule-strong bg-paper-raised px-2 py-1.5 font-normal text-ink"
+        />
       </label>
       <Button type="submit" busy={record.isPending}>
         Record flash
@@ -55,7 +82,10 @@ function FlashForm({ robotId, revisions, headRevision }: { robotId: string; revi
 }
 
 function FlashTable({ flashes }: { flashes: FlashEntry[] }) {
-  if (flashes.length === 0) return <p className="text-ink-muted">Nothing recorded yet. Record each upload, so everyone knows what the robot runs.</p>;
+  if (flashes.length === 0)
+    return (
+      <p className="text-ink-muted">Nothing recorded yet. Record each upload, so everyone knows what the robot runs.</p>
+    );
   return (
     <ol className="divide-y divide-rule">
       {flashes.map((flash) => (
@@ -73,7 +103,17 @@ function FlashTable({ flashes }: { flashes: FlashEntry[] }) {
 }
 
 /** Record that a revision went onto the robot, and the log of every such upload. */
-export function FlashLogPanel({ robotId, revisions, headRevision, canEdit }: { robotId: string; revisions: number[]; headRevision: number; canEdit: boolean }) {
+export function FlashLogPanel({
+  robotId,
+  revisions,
+  headRevision,
+  canEdit,
+}: {
+  robotId: string;
+  revisions: number[];
+  headRevision: number;
+  canEdit: boolean;
+}) {
   const log = useFlashLog(robotId);
   return (
     <div className="space-y-4">

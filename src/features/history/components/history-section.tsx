@@ -34,31 +34,70 @@ export function HistorySection({ robot, canEdit }: SectionProps) {
   const numbers = revisions.map((r) => r.number);
   return (
     <div className="grid gap-6">
-      <Panel title="Revisions" titleId={`revisions-${robot.id}`} description="Every saved revision, newest first. Choose a “from” and a “to” to compare.">
-        <RevisionList robotId={robot.id} revisions={revisions} headRevision={headRevision} onRobot={lastFlash?.revisionNumber ?? null} pair={pair} onPairChange={setPicked} canEdit={canEdit} />
+      <Panel
+        title="Revisions"
+        titleId={`revisions-${robot.id}`}
+        description="Every saved revision, newest first. Choose a “from” and a “to” to compare."
+      >
+        <RevisionList
+          robotId={robot.id}
+          revisions={revisions}
+          headRevision={headRevision}
+          onRobot={lastFlash?.revisionNumber ?? null}
+          pair={pair}
+          onPairChange={setPicked}
+          canEdit={canEdit}
+        />
       </Panel>
       <Panel title="What changed" titleId={`compare-${robot.id}`}>
         <RevisionCompare robotId={robot.id} pair={pair} />
       </Panel>
       <div className="grid items-start gap-6 lg:grid-cols-2">
-        <Panel title="Flash log" titleId={`flashes-${robot.id}`} description="Which revision went onto the robot, when, and by whom.">
+        <Panel
+          title="Flash log"
+          titleId={`flashes-${robot.id}`}
+          description="Which revision went onto the robot, when, and by whom."
+        >
           <FlashLogPanel robotId={robot.id} revisions={numbers} headRevision={headRevision} canEdit={canEdit} />
         </Panel>
-        <Panel title="What is on the robot?" titleId={`boot-${robot.id}`} description="The firmware prints its revision and configuration hash when it starts.">
+        <Panel
+          title="What is on the robot?"
+          titleId={`boot-${robot.id}`}
+          description="The firmware prints its revision and configuration hash when it starts."
+        >
           <BootLineBox robotId={robot.id} />
         </Panel>
       </div>
       <div className="grid items-start gap-6 lg:grid-cols-2">
-        <Panel title="Export and import" titleId={`files-${robot.id}`} description="A revision’s configuration as a JSON file; a firmware bundle carries the same file.">
-          <ExportImportPanel robotId={robot.id} robotName={robot.name} revisions={numbers} headRevision={headRevision} canEdit={canEdit} />
+        <Panel
+          title="Export and import"
+          titleId={`files-${robot.id}`}
+          description="A revision’s configuration as a JSON file; a firmware bundle carries the same file."
+        >
+          <ExportImportPanel
+            robotId={robot.id}
+            robotName={robot.name}
+            revisions={numbers}
+            headRevision={headRevision}
+            canEdit={canEdit}
+          />
         </Panel>
-        <Panel title="Photo" titleId={`photo-${robot.id}`} description="Shown on the dashboard and the printed wiring sheet; only team members see it.">
+        <Panel
+          title="Photo"
+          titleId={`photo-${robot.id}`}
+          description="Shown on the dashboard and the printed wiring sheet; only team members see it."
+        >
           <RobotPhotoControl robotId={robot.id} name={robot.name} photoUrl={robot.photoUrl} canEdit={canEdit} />
         </Panel>
       </div>
       {robot.role === 'owner' && (
         <Panel title="Bin" titleId={`bin-${robot.id}`}>
-          <DeleteRobotButton robotId={robot.id} teamId={robot.teamId} name={robot.name} onDeleted={() => navigate(`/teams/${robot.teamId}`)} />
+          <DeleteRobotButton
+            robotId={robot.id}
+            teamId={robot.teamId}
+            name={robot.name}
+            onDeleted={() => navigate(`/teams/${robot.teamId}`)}
+          />
         </Panel>
       )}
     </div>

@@ -13,7 +13,15 @@ interface ImportRobotDialogProps {
   onImported?: (robot: RobotSummary) => void;
 }
 
-function ImportForm({ teamId, onDone, onCancel }: { teamId: string; onDone: (answer: ImportRobotAnswer) => void; onCancel: () => void }) {
+function ImportForm({
+  teamId,
+  onDone,
+  onCancel,
+}: {
+  teamId: string;
+  onDone: (answer: ImportRobotAnswer) => void;
+  onCancel: () => void;
+}) {
   const [file, setFile] = useState<File | null>(null);
   const [name, setName] = useState('');
   const importing = useImportRobot(teamId);
@@ -30,11 +38,25 @@ function ImportForm({ teamId, onDone, onCancel }: { teamId: string; onDone: (ans
       <label htmlFor={ids.file} className="block text-sm font-semibold text-ink-soft">
         Configuration file (.json) or firmware bundle (.zip)
       </label>
-      <input id={ids.file} type="file" accept={IMPORT_ACCEPT} onChange={(e) => setFile(e.target.files?.[0] ?? null)} className="block text-sm" autoFocus />
+      <input
+        id={ids.file}
+        type="file"
+        accept={IMPORT_ACCEPT}
+        onChange={(e) => setFile(e.target.files?.[0] ?? null)}
+        className="block text-sm"
+        autoFocus
+      />
       <label htmlFor={ids.name} className="block text-sm font-semibold text-ink-soft">
         Robot name (optional: the file’s own name otherwise)
       </label>
-      <input id={ids.name} value={name} maxLength={60} onChange={(e) => setName(e.target.value)} aria-invalid={nameError ? true : undefined} className="block w-full rounded-md border border-rule-strong bg-paper-raised px-3 py-1.5" />
+      <input
+        id={ids.name}
+        value={name}
+        maxLength={60}
+        onChange={(e) => setName(e.target.value)}
+        aria-invalid={nameError ? true : undefined}
+        className="block w-full rounded-md border border-rule-strong bg-paper-raised px-3 py-1.5"
+      />
       {nameError && <p className="text-sm font-semibold text-error">{nameError}</p>}
       <FormError message={importing.isError && !nameError ? errorMessage(importing.error) : undefined} />
       <div className="flex gap-2">
@@ -72,8 +94,16 @@ export function ImportRobotDialog({ teamId, onImported }: ImportRobotDialogProps
         Import a robot
       </Button>
       {open && (
-        <div className="fixed inset-0 z-40 flex items-start justify-center bg-ink/30 p-4 pt-[12vh]" onMouseDown={(e) => e.target === e.currentTarget && close()}>
-          <div role="dialog" aria-modal="true" aria-labelledby={titleId} className="w-full max-w-md space-y-4 rounded-lg border border-rule bg-paper-raised p-5 shadow-lg">
+        <div
+          className="fixed inset-0 z-40 flex items-start justify-center bg-ink/30 p-4 pt-[12vh]"
+          onMouseDown={(e) => e.target === e.currentTarget && close()}
+        >
+          <div
+            role="dialog"
+            aria-modal="true"
+            aria-labelledby={titleId}
+            className="w-full max-w-md space-y-4 rounded-lg border border-rule bg-paper-raised p-5 shadow-lg"
+          >
             <h2 id={titleId} className="text-lg font-semibold">
               Import a robot
             </h2>

@@ -4,7 +4,15 @@ import { errorMessage } from '@/lib/api-client';
 import { useRestoreRevision } from '../api/restore-revision';
 
 /** "Restore" on a revision row: asks for an optional note, then makes a new revision copying it. */
-export function RestoreAction({ robotId, revision, headRevision }: { robotId: string; revision: number; headRevision: number }) {
+export function RestoreAction({
+  robotId,
+  revision,
+  headRevision,
+}: {
+  robotId: string;
+  revision: number;
+  headRevision: number;
+}) {
   const [open, setOpen] = useState(false);
   const [note, setNote] = useState('');
   const restore = useRestoreRevision(robotId);
@@ -17,7 +25,10 @@ export function RestoreAction({ robotId, revision, headRevision }: { robotId: st
     );
   }
   const submit = () =>
-    restore.mutate({ revision, baseRevision: headRevision, note: note.trim() || undefined }, { onSuccess: () => setOpen(false) });
+    restore.mutate(
+      { revision, baseRevision: headRevision, note: note.trim() || undefined },
+      { onSuccess: () => setOpen(false) },
+    );
   return (
     <div className="flex min-w-64 flex-col items-end gap-1.5 text-left">
       <label htmlFor={noteId} className="self-start text-sm font-semibold text-ink-soft">

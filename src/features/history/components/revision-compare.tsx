@@ -11,7 +11,9 @@ function GeneratedFiles({ files, from, to }: { files: RevisionDiff['files']; fro
   const { changed, stampOnly, unchanged } = files;
   return (
     <div className="space-y-2">
-      {changed.length === 0 && <p className="text-ink-muted">The generated code is the same apart from the revision stamp.</p>}
+      {changed.length === 0 && (
+        <p className="text-ink-muted">The generated code is the same apart from the revision stamp.</p>
+      )}
       {changed.map((file) => (
         <FileDiffView key={file.path} file={file} from={from} to={to} open={changed.length <= 3} />
       ))}

@@ -25,7 +25,9 @@ function FlashedBadge({ entry, onRobot }: { entry: HistoryEntry; onRobot: number
   const last = entry.flashes[0];
   const times = entry.flashes.length > 1 ? ` (${entry.flashes.length}×)` : '';
   return (
-    <span title={entry.flashes.map((f) => `${formatDateTime(f.flashedAt)} by ${f.flashedByName ?? 'someone'}`).join('\n')}>
+    <span
+      title={entry.flashes.map((f) => `${formatDateTime(f.flashedAt)} by ${f.flashedByName ?? 'someone'}`).join('\n')}
+    >
       <Badge tone={entry.number === onRobot ? 'accent' : 'neutral'}>
         {entry.number === onRobot ? 'on the robot' : 'flashed'} {formatDate(last.flashedAt)}
         {times}
@@ -35,26 +37,57 @@ function FlashedBadge({ entry, onRobot }: { entry: HistoryEntry; onRobot: number
 }
 
 /** Every revision, newest first, with two radio columns that choose what to compare. */
-export function RevisionList({ robotId, revisions, headRevision, onRobot, pair, onPairChange, canEdit }: RevisionListProps) {
+export function RevisionList({
+  robotId,
+  revisions,
+  headRevision,
+  onRobot,
+  pair,
+  onPairChange,
+  canEdit,
+}: RevisionListProps) {
   return (
     <div className="overflow-x-auto">
       <table className="w-full border-collapse text-left text-[0.95rem]">
         <caption className="sr-only">Revisions, newest first; choose two to compare</caption>
         <thead className="border-b border-rule-strong text-xs tracking-wide text-ink-muted uppercase">
           <tr>
-            <th scope="col" className="py-2 pr-1 font-semibold">From</th>
-            <th scope="col" className="py-2 pr-3 font-semibold">To</th>
-            <th scope="col" className="px-3 py-2 font-semibold">Revision</th>
-            <th scope="col" className="px-3 py-2 font-semibold">Message</th>
-            <th scope="col" className="px-3 py-2 font-semibold">Saved</th>
-            <th scope="col" className="px-3 py-2 font-semibold">Problems</th>
-            <th scope="col" className="px-3 py-2 font-semibold">Flashed</th>
-            {canEdit && <th scope="col" className="py-2 pl-3 font-semibold"><span className="sr-only">Actions</span></th>}
+            <th scope="col" className="py-2 pr-1 font-semibold">
+              From
+            </th>
+            <th scope="col" className="py-2 pr-3 font-semibold">
+              To
+            </th>
+            <th scope="col" className="px-3 py-2 font-semibold">
+              Revision
+            </th>
+            <th scope="col" className="px-3 py-2 font-semibold">
+              Message
+            </th>
+            <th scope="col" className="px-3 py-2 font-semibold">
+              Saved
+            </th>
+            <th scope="col" className="px-3 py-2 font-semibold">
+              Problems
+            </th>
+            <th scope="col" className="px-3 py-2 font-semibold">
+              Flashed
+            </th>
+            {canEdit && (
+              <th scope="col" className="py-2 pl-3 font-semibold">
+                <span className="sr-only">Actions</span>
+              </th>
+            )}
           </tr>
         </thead>
         <tbody className="divide-y divide-rule">
           {revisions.map((entry) => (
-            <tr key={entry.number} className={pair && (entry.number === pair.from || entry.number === pair.to) ? 'bg-accent-soft/40' : undefined}>
+            <tr
+              key={entry.number}
+              className={
+                pair && (entry.number === pair.from || entry.number === pair.to) ? 'bg-accent-soft/40' : undefined
+              }
+            >
               <td className="py-2 pr-1">
                 <input
                   type="radio"
@@ -76,7 +109,8 @@ export function RevisionList({ robotId, revisions, headRevision, onRobot, pair, 
                 />
               </td>
               <td className="px-3 py-2 whitespace-nowrap">
-                <span className="font-mono">r{entry.number}</span> {entry.number === headRevision && <Badge tone="accent">head</Badge>}
+                <span className="font-mono">r{entry.number}</span>{' '}
+                {entry.number === headRevision && <Badge tone="accent">head</Badge>}
               </td>
               <td className="px-3 py-2">{entry.message}</td>
               <td className="px-3 py-2 whitespace-nowrap text-ink-muted">
@@ -93,7 +127,9 @@ export function RevisionList({ robotId, revisions, headRevision, onRobot, pair, 
               </td>
               {canEdit && (
                 <td className="py-2 pl-3 text-right">
-                  {entry.number !== headRevision && <RestoreAction robotId={robotId} revision={entry.number} headRevision={headRevision} />}
+                  {entry.number !== headRevision && (
+                    <RestoreAction robotId={robotId} revision={entry.number} headRevision={headRevision} />
+                  )}
                 </td>
               )}
             </tr>

@@ -13,7 +13,11 @@ export function DeletedRobotsPanel({ teamId }: { teamId: string }) {
   const restore = useRestoreBinnedRobot(teamId);
   if (bin.isPending || (bin.data && bin.data.length === 0)) return null;
   return (
-    <Panel title="Deleted robots" titleId="robot-bin-title" description="Restorable for 30 days after deletion, with all their revisions; after that they are removed for good.">
+    <Panel
+      title="Deleted robots"
+      titleId="robot-bin-title"
+      description="Restorable for 30 days after deletion, with all their revisions; after that they are removed for good."
+    >
       {bin.isError && <ErrorState message={errorMessage(bin.error)} onRetry={() => bin.refetch()} />}
       {bin.data && (
         <ul className="divide-y divide-rule">
@@ -22,10 +26,16 @@ export function DeletedRobotsPanel({ teamId }: { teamId: string }) {
               <span>
                 <span className="font-semibold">{robot.name}</span>{' '}
                 <span className="text-sm text-ink-muted">
-                  r{robot.headRevision} · deleted {formatDate(robot.deletedAt)} by {robot.deletedByName ?? 'someone'} · restorable until {formatDate(robot.restorableUntil)}
+                  r{robot.headRevision} · deleted {formatDate(robot.deletedAt)} by {robot.deletedByName ?? 'someone'} ·
+                  restorable until {formatDate(robot.restorableUntil)}
                 </span>
               </span>
-              <Button size="sm" variant="secondary" busy={restore.isPending && restore.variables === robot.id} onClick={() => restore.mutate(robot.id)}>
+              <Button
+                size="sm"
+                variant="secondary"
+                busy={restore.isPending && restore.variables === robot.id}
+                onClick={() => restore.mutate(robot.id)}
+              >
                 Restore {robot.name}
               </Button>
             </li>

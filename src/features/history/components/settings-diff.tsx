@@ -10,7 +10,12 @@ function Value({ value, tone }: { value: string | null; tone: 'old' | 'new' }) {
 
 /** Each changed setting in words, grouped by section, old value beside new. */
 export function SettingsDiff({ changes, from, to }: { changes: SettingChange[]; from: number; to: number }) {
-  if (changes.length === 0) return <p className="text-ink-muted">No setting differs between r{from} and r{to}.</p>;
+  if (changes.length === 0)
+    return (
+      <p className="text-ink-muted">
+        No setting differs between r{from} and r{to}.
+      </p>
+    );
   const sections = SECTION_ORDER.filter((s) => changes.some((c) => c.section === s));
   return (
     <table className="w-full border-collapse text-left text-[0.95rem]">
@@ -32,7 +37,11 @@ export function SettingsDiff({ changes, from, to }: { changes: SettingChange[]; 
       {sections.map((section) => (
         <tbody key={section} className="divide-y divide-rule">
           <tr>
-            <th scope="colgroup" colSpan={4} className="pt-3 pb-1 text-left text-sm font-semibold tracking-wide text-ink-muted uppercase">
+            <th
+              scope="colgroup"
+              colSpan={4}
+              className="pt-3 pb-1 text-left text-sm font-semibold tracking-wide text-ink-muted uppercase"
+            >
               {section}
             </th>
           </tr>

@@ -48,7 +48,12 @@ export function AxisCurvePlot({ axis, label, rateScale = 1, input = null, size =
     `rate ${Math.round(rate * 100)} %${axis.reverse ? ', reversed' : ''}. Half stick gives ${halfStick}.`;
   return (
     <figure className={`font-sans text-ink ${className ?? ''}`}>
-      <svg viewBox={`0 0 ${size} ${size}`} role="img" aria-labelledby={`${id}-title ${id}-desc`} className="block h-auto w-full bg-paper-raised">
+      <svg
+        viewBox={`0 0 ${size} ${size}`}
+        role="img"
+        aria-labelledby={`${id}-title ${id}-desc`}
+        className="block h-auto w-full bg-paper-raised"
+      >
         <title id={`${id}-title`}>{`${label} stick curve`}</title>
         <desc id={`${id}-desc`}>{words}</desc>
         <g aria-hidden="true">
@@ -60,13 +65,38 @@ export function AxisCurvePlot({ axis, label, rateScale = 1, input = null, size =
             </g>
           ))}
           {axis.deadband > 0 && (
-            <rect x={sx(-axis.deadband)} y={sy(1)} width={2 * axis.deadband * half} height={2 * half} className="fill-warn-soft" data-testid="deadband" />
+            <rect
+              x={sx(-axis.deadband)}
+              y={sy(1)}
+              width={2 * axis.deadband * half}
+              height={2 * half}
+              className="fill-warn-soft"
+              data-testid="deadband"
+            />
           )}
           <line x1={sx(-1)} y1={sy(0)} x2={sx(1)} y2={sy(0)} className="stroke-rule-strong" />
           <line x1={sx(0)} y1={sy(-1)} x2={sx(0)} y2={sy(1)} className="stroke-rule-strong" />
-          <line x1={sx(-1)} y1={sy(axis.reverse ? 1 : -1)} x2={sx(1)} y2={sy(axis.reverse ? -1 : 1)} className="stroke-ink-faint" strokeDasharray="3 3" />
+          <line
+            x1={sx(-1)}
+            y1={sy(axis.reverse ? 1 : -1)}
+            x2={sx(1)}
+            y2={sy(axis.reverse ? -1 : 1)}
+            className="stroke-ink-faint"
+            strokeDasharray="3 3"
+          />
           {rate < 0.999 &&
-            [-rate, rate].map((r) => <line key={r} x1={sx(-1)} y1={sy(r)} x2={sx(1)} y2={sy(r)} className="stroke-ink-muted" strokeDasharray="1 3" strokeLinecap="round" />)}
+            [-rate, rate].map((r) => (
+              <line
+                key={r}
+                x1={sx(-1)}
+                y1={sy(r)}
+                x2={sx(1)}
+                y2={sy(r)}
+                className="stroke-ink-muted"
+                strokeDasharray="1 3"
+                strokeLinecap="round"
+              />
+            ))}
           <text x={sx(1) - 2} y={sy(0) - 4} textAnchor="end" fontSize={10} className="fill-ink-faint">
             in
           </text>
@@ -74,11 +104,28 @@ export function AxisCurvePlot({ axis, label, rateScale = 1, input = null, size =
             out
           </text>
         </g>
-        <polyline points={curve} fill="none" className="stroke-accent-strong" strokeWidth={2.2} strokeLinejoin="round" data-testid="axis-curve" />
-        {marked && <circle cx={sx(marked.x)} cy={sy(marked.y)} r={4} className="fill-accent stroke-paper-raised" strokeWidth={1.5} data-testid="axis-marker" />}
+        <polyline
+          points={curve}
+          fill="none"
+          className="stroke-accent-strong"
+          strokeWidth={2.2}
+          strokeLinejoin="round"
+          data-testid="axis-curve"
+        />
+        {marked && (
+          <circle
+            cx={sx(marked.x)}
+            cy={sy(marked.y)}
+            r={4}
+            className="fill-accent stroke-paper-raised"
+            strokeWidth={1.5}
+            data-testid="axis-marker"
+          />
+        )}
       </svg>
       <figcaption className="mt-1 text-xs text-ink-muted">
-        <span className="font-semibold text-ink">{label}</span>: half stick gives <span className="font-mono">{halfStick}</span>
+        <span className="font-semibold text-ink">{label}</span>: half stick gives{' '}
+        <span className="font-mono">{halfStick}</span>
         {axis.reverse ? ', reversed' : ''}
       </figcaption>
     </figure>

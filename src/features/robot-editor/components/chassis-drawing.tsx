@@ -4,7 +4,14 @@ import type { DrawingFrame, WheelLike, WheelShape } from '../lib/chassis-geometr
 import { describeChassis } from '../lib/describe-chassis';
 import { topRollerAngleDeg } from '@shared/kinematics/roller-pattern';
 import { screenDirection, type ScreenPoint } from '../lib/screen-frame';
-import { fitDrawing, LABEL_FONT_SIZE, LABEL_LINE_HEIGHT, wheelLabelLines, type LabelTone, type WheelLabelLayout } from '../lib/wheel-labels';
+import {
+  fitDrawing,
+  LABEL_FONT_SIZE,
+  LABEL_LINE_HEIGHT,
+  wheelLabelLines,
+  type LabelTone,
+  type WheelLabelLayout,
+} from '../lib/wheel-labels';
 import { Arrow, DrawingGrid, ForwardMark, ScaleBar, TurnArrow } from './drawing-parts';
 import { CommandArrow, WheelGlyph } from './wheel-glyph';
 
@@ -52,7 +59,9 @@ export function ChassisDrawing({
   const id = useId();
   const overlay = motorCommands !== undefined;
   // The robot is drawn as large as the labels leave room for, so no label is cut at the edge.
-  const { frame, shapes, labels } = fitDrawing(wheels, width, height, (wheel) => wheelLabelLines(wheel, overlay ? (motorCommands[wheel.motor] ?? 0) : undefined));
+  const { frame, shapes, labels } = fitDrawing(wheels, width, height, (wheel) =>
+    wheelLabelLines(wheel, overlay ? (motorCommands[wheel.motor] ?? 0) : undefined),
+  );
   return (
     <svg
       viewBox={`0 0 ${width} ${height}`}
@@ -77,7 +86,10 @@ export function ChassisDrawing({
           highlighted={highlightMotor !== null && shape.wheel.motor === highlightMotor}
         />
       ))}
-      {overlay && shapes.map((shape, i) => <CommandArrow key={`c${i}`} shape={shape} command={motorCommands[shape.wheel.motor] ?? 0} />)}
+      {overlay &&
+        shapes.map((shape, i) => (
+          <CommandArrow key={`c${i}`} shape={shape} command={motorCommands[shape.wheel.motor] ?? 0} />
+        ))}
       {intendedMotion && <MotionMark frame={frame} motion={intendedMotion} intended />}
       {motion && <MotionMark frame={frame} motion={motion} />}
       {labels.map((label, i) => (
@@ -131,25 +143,68 @@ function CentreLines({ frame }: { frame: DrawingFrame }) {
 function BodyPlate({ frame }: { frame: DrawingFrame }) {
   const { outline, origin, scale } = frame;
   if (outline.kind === 'circle') {
-    return <circle cx={origin.x} cy={origin.y} r={outline.radiusMm * scale} className="fill-paper stroke-ink-soft" strokeWidth={1.4} opacity={0.92} />;
+    return (
+      <circle
+        cx={origin.x}
+        cy={origin.y}
+        r={outline.radiusMm * scale}
+        className="fill-paper stroke-ink-soft"
+        strokeWidth={1.4}
+        opacity={0.92}
+      />
+    );
   }
   const x = origin.x - outline.left * scale;
   const y = origin.y - outline.front * scale;
   const w = (outline.left - outline.right) * scale;
   const h = (outline.front - outline.rear) * scale;
-  return <rect x={x} y={y} width={w} height={h} rx={Math.min(w, h) * 0.08} className="fill-paper stroke-ink-soft" strokeWidth={1.4} opacity={0.92} />;
+  return (
+    <rect
+      x={x}
+      y={y}
+      width={w}
+      height={h}
+      rx={Math.min(w, h) * 0.08}
+      className="fill-paper stroke-ink-soft"
+      strokeWidth={1.4}
+      opacity={0.92}
+    />
+  );
 }
 
-function MotionMark({ frame, motion, intended = false }: { frame: DrawingFrame; motion: MotionFractions; intended?: boolean }) {
+function MotionMark({
+  frame,
+  motion,
+  intended = false,
+}: {
+  frame: DrawingFrame;
+  motion: MotionFractions;
+  intended?: boolean;
+}) {
   const { origin, outline, scale } = frame;
-  const reach = (outline.kind === 'circle' ? outline.radiusMm : Math.min(outline.front - outline.rear, outline.left - outline.right) / 2) * scale * 0.75;
+  const reach =
+    (outline.kind === 'circle'
+      ? outline.radiusMm
+      : Math.min(outline.front - outline.rear, outline.left - outline.right) / 2) *
+    scale *
+    0.75;
   const tip: ScreenPoint = { x: origin.x + motion.strafe * reach, y: origin.y - motion.forward * reach };
   const moving = Math.hypot(motion.strafe, motion.forward) >= 0.05;
   const turning = Math.abs(motion.yaw) >= 0.05;
   const className = intended ? 'stroke-ink-faint fill-ink-faint' : 'stroke-warn-strong fill-warn-strong';
   return (
     <g data-testid={intended ? 'intended-motion' : 'resulting-motion'} aria-hidden="true">
-      {moving && <Arrow from={origin} to={tip} className={className} width={intended ? 2 : 3.2} head={11} dashed={intended} halo={!intended} />}
+      {moving && (
+        <Arrow
+          from={origin}
+          to={tip}
+          className={className}
+          width={intended ? 2 : 3.2}
+          head={11}
+          dashed={intended}
+          halo={!intended}
+        />
+      )}
       {turning && (
         <TurnArrow
           centre={origin}
@@ -189,7 +244,13 @@ function WheelLabel({ label, wheel }: { label: WheelLabelLayout; wheel: string }
       data-testid={`label-${wheel}`}
     >
       {lines.map((line, i) => (
-        <tspan key={i} x={at.x} dy={i === 0 ? 0 : LABEL_LINE_HEIGHT} className={TONE[line.tone].className} fontWeight={TONE[line.tone].weight}>
+        <tspan
+          key={i}
+          x={at.x}
+          dy={i === 0 ? 0 : LABEL_LINE_HEIGHT}
+          className={TONE[line.tone].className}
+          fontWeight={TONE[line.tone].weight}
+        >
           {line.text}
         </tspan>
       ))}

@@ -32,7 +32,11 @@ export function expectedWheelMotion(
   if (Math.abs(command) < 0.005) return { moving: false, towardDeg: 0, words: 'stays still' };
   const flipped = command < 0 !== wheel.reversed;
   const towardDeg = wheel.driveAngleDeg + (flipped ? 180 : 0);
-  return { moving: true, towardDeg, words: `top moves ${directionWords(towardDeg)}, ${Math.round(Math.abs(command) * 100)} %` };
+  return {
+    moving: true,
+    towardDeg,
+    words: `top moves ${directionWords(towardDeg)}, ${Math.round(Math.abs(command) * 100)} %`,
+  };
 }
 
 /** What the builder should see on the mecanum wheels, in words. */
@@ -40,18 +44,21 @@ export function rollerPatternWords(pattern: RollerPattern | null): { expect: str
   if (pattern === null) return null;
   if (pattern === 'x') {
     return {
-      expect: 'Looking down on the robot, the rollers on top of the four wheels form an X: each top roller leans toward the robot’s centre (on a square base its line runs straight through the middle).',
+      expect:
+        'Looking down on the robot, the rollers on top of the four wheels form an X: each top roller leans toward the robot’s centre (on a square base its line runs straight through the middle).',
       fix: 'If you see an O instead (top rollers leaning away from the centre), the left and right wheels are swapped: exchange front left with front right and rear left with rear right.',
     };
   }
   if (pattern === 'o') {
     return {
-      expect: 'Looking down on the robot, the rollers on top of the four wheels form an O: each top roller leans away from the robot’s centre, like a ring around it.',
+      expect:
+        'Looking down on the robot, the rollers on top of the four wheels form an O: each top roller leans away from the robot’s centre, like a ring around it.',
       fix: 'This wheel table asks for the O pattern, which turns poorly (on a square base it cannot turn at all). The usual build is the X; check the wheel table if the robot was built as an X.',
     };
   }
   return {
-    expect: 'The top rollers of these mecanum wheels form neither an X nor an O: some lean toward the centre and some away.',
+    expect:
+      'The top rollers of these mecanum wheels form neither an X nor an O: some lean toward the centre and some away.',
     fix: 'Check each wheel’s roller angle in the wheel table against the wheel fitted on that corner.',
   };
 }
@@ -74,8 +81,8 @@ export function CommissioningDiagram({ config, highlightMotor = null, className 
   return (
     <div className={`space-y-4 font-sans text-ink ${className ?? ''}`}>
       <p className="text-sm text-ink-soft">
-        With the wheels off the ground, the top of each wheel should move the way its arrow points. A wheel that turns the
-        other way is reversed; a wheel that moves when another was expected is on the wrong motor.
+        With the wheels off the ground, the top of each wheel should move the way its arrow points. A wheel that turns
+        the other way is reversed; a wheel that moves when another was expected is on the wrong motor.
       </p>
       <div className="grid gap-3 sm:grid-cols-3">
         {cases.map((c) => (
@@ -95,13 +102,17 @@ export function CommissioningDiagram({ config, highlightMotor = null, className 
                 height={400}
               />
             ) : (
-              <p className="px-2 py-8 text-center text-sm text-ink-muted">This layout cannot do this; the stick is ignored.</p>
+              <p className="px-2 py-8 text-center text-sm text-ink-muted">
+                This layout cannot do this; the stick is ignored.
+              </p>
             )}
           </figure>
         ))}
       </div>
       <table className="w-full border-collapse text-sm">
-        <caption className="mb-1 text-left font-semibold">Expected direction of each wheel (wheels off the ground)</caption>
+        <caption className="mb-1 text-left font-semibold">
+          Expected direction of each wheel (wheels off the ground)
+        </caption>
         <thead>
           <tr className="border-b border-rule-strong text-left">
             <th scope="col" className="px-2 py-1 font-semibold">
@@ -116,7 +127,10 @@ export function CommissioningDiagram({ config, highlightMotor = null, className 
         </thead>
         <tbody>
           {wheels.map((wheel) => (
-            <tr key={wheel.name} className={`border-b border-rule ${highlightMotor === wheel.motor ? 'bg-accent-soft' : ''}`}>
+            <tr
+              key={wheel.name}
+              className={`border-b border-rule ${highlightMotor === wheel.motor ? 'bg-accent-soft' : ''}`}
+            >
               <th scope="row" className="px-2 py-1 text-left font-normal">
                 {wheel.name}
                 {wheel.motor !== wheel.name && <span className="text-ink-muted"> (motor {wheel.motor})</span>}
@@ -131,15 +145,24 @@ export function CommissioningDiagram({ config, highlightMotor = null, className 
         </tbody>
       </table>
       {pattern && (
-        <section aria-label="Mecanum rollers seen from above" className="grid items-start gap-4 rounded border border-rule bg-paper-raised p-3 sm:grid-cols-[minmax(0,1fr)_minmax(0,1.3fr)]">
-          <ChassisDrawing wheels={wheels} title="Mecanum rollers seen from above, with their lines extended" rollerGuides width={420} height={400} />
+        <section
+          aria-label="Mecanum rollers seen from above"
+          className="grid items-start gap-4 rounded border border-rule bg-paper-raised p-3 sm:grid-cols-[minmax(0,1fr)_minmax(0,1.3fr)]"
+        >
+          <ChassisDrawing
+            wheels={wheels}
+            title="Mecanum rollers seen from above, with their lines extended"
+            rollerGuides
+            width={420}
+            height={400}
+          />
           <div className="space-y-2 text-sm">
             <h3 className="font-semibold">Mecanum rollers, seen from above</h3>
             <p>{pattern.expect}</p>
             <p className="text-ink-soft">{pattern.fix}</p>
             <p className="text-ink-muted">
-              The drawing shows the rollers on top of each wheel, where you look. The rollers touching the ground lie the other way
-              (mirrored across the wheel), so the pattern seen from below is the opposite one.
+              The drawing shows the rollers on top of each wheel, where you look. The rollers touching the ground lie
+              the other way (mirrored across the wheel), so the pattern seen from below is the opposite one.
             </p>
           </div>
         </section>

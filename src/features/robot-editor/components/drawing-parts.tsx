@@ -32,8 +32,21 @@ export function Arrow({
     <g>
       {halo && (
         <>
-          <line x1={from.x} y1={from.y} x2={base.x} y2={base.y} className="stroke-paper-raised" strokeWidth={width + 3} strokeLinecap="round" />
-          <polygon points={points} className="fill-paper-raised stroke-paper-raised" strokeWidth={3} strokeLinejoin="round" />
+          <line
+            x1={from.x}
+            y1={from.y}
+            x2={base.x}
+            y2={base.y}
+            className="stroke-paper-raised"
+            strokeWidth={width + 3}
+            strokeLinecap="round"
+          />
+          <polygon
+            points={points}
+            className="fill-paper-raised stroke-paper-raised"
+            strokeWidth={3}
+            strokeLinejoin="round"
+          />
         </>
       )}
       <line
@@ -74,7 +87,11 @@ export function DrawingGrid({
     for (let k = first; k <= last; k += 1) {
       const p = start + k * step;
       const major = k % majorEvery === 0;
-      lines.push(axis === 'x' ? { key: `x${k}`, x1: p, y1: 0, x2: p, y2: height, major } : { key: `y${k}`, x1: 0, y1: p, x2: width, y2: p, major });
+      lines.push(
+        axis === 'x'
+          ? { key: `x${k}`, x1: p, y1: 0, x2: p, y2: height, major }
+          : { key: `y${k}`, x1: 0, y1: p, x2: width, y2: p, major },
+      );
     }
   };
   add('x', 0, width, origin.x);
@@ -103,7 +120,14 @@ export function ScaleBar({ at, lengthMm, scale }: { at: ScreenPoint; lengthMm: n
   return (
     <g data-testid="scale-bar" data-length={length} data-length-mm={lengthMm}>
       <rect x={at.x} y={at.y - 3} width={length / 2} height={6} className="fill-ink stroke-ink" strokeWidth={1} />
-      <rect x={at.x + length / 2} y={at.y - 3} width={length / 2} height={6} className="fill-paper-raised stroke-ink" strokeWidth={1} />
+      <rect
+        x={at.x + length / 2}
+        y={at.y - 3}
+        width={length / 2}
+        height={6}
+        className="fill-paper-raised stroke-ink"
+        strokeWidth={1}
+      />
       <text x={at.x} y={at.y - 8} fontSize={11} className="fill-ink-muted font-sans">
         0
       </text>
@@ -118,8 +142,21 @@ export function ScaleBar({ at, lengthMm, scale }: { at: ScreenPoint; lengthMm: n
 export function ForwardMark({ at, length = 26 }: { at: ScreenPoint; length?: number }) {
   return (
     <g aria-hidden="true">
-      <Arrow from={{ x: at.x, y: at.y }} to={{ x: at.x, y: at.y - length }} className="stroke-ink-soft fill-ink-soft" width={1.8} head={8} halo={false} />
-      <text x={at.x + 8} y={at.y - length / 2 + 4} fontSize={11} className="fill-ink-soft font-sans" letterSpacing={1.5}>
+      <Arrow
+        from={{ x: at.x, y: at.y }}
+        to={{ x: at.x, y: at.y - length }}
+        className="stroke-ink-soft fill-ink-soft"
+        width={1.8}
+        head={8}
+        halo={false}
+      />
+      <text
+        x={at.x + 8}
+        y={at.y - length / 2 + 4}
+        fontSize={11}
+        className="fill-ink-soft font-sans"
+        letterSpacing={1.5}
+      >
         FORWARD
       </text>
     </g>
@@ -148,7 +185,10 @@ export function TurnArrow({
   // Start at the top (−90° on screen) and run the sweep the asked way round.
   const start = -90 - (clockwise ? sweep / 2 : -sweep / 2);
   const end = start + (clockwise ? sweep : -sweep);
-  const at = (deg: number) => ({ x: centre.x + radius * Math.cos((deg * Math.PI) / 180), y: centre.y + radius * Math.sin((deg * Math.PI) / 180) });
+  const at = (deg: number) => ({
+    x: centre.x + radius * Math.cos((deg * Math.PI) / 180),
+    y: centre.y + radius * Math.sin((deg * Math.PI) / 180),
+  });
   const p0 = at(start);
   const p1 = at(end);
   const large = sweep > 180 ? 1 : 0;

@@ -59,7 +59,13 @@ export function DrivePreview({ config, defaultRamp = true, className }: DrivePre
           onKeyUp={arenaKeys.onKeyUp}
           onBlur={arenaKeys.onBlur}
         >
-          <PreviewArena wheels={config.chassis.wheels} pose={frame.pose} trail={trail} motorCommands={commands} description={`The robot ${step.motion.words}.`} />
+          <PreviewArena
+            wheels={config.chassis.wheels}
+            pose={frame.pose}
+            trail={trail}
+            motorCommands={commands}
+            description={`The robot ${step.motion.words}.`}
+          />
         </div>
         <p id={helpId} className="text-xs text-ink-muted">
           {KEY_HELP.arena}
@@ -97,7 +103,9 @@ export function DrivePreview({ config, defaultRamp = true, className }: DrivePre
           />
         </div>
         <p className="text-xs text-ink-muted" aria-live="polite">
-          {padName ? `Gamepad: ${padName}. ${KEY_HELP.gamepad}` : `No gamepad found: plug one in and press a button. ${KEY_HELP.gamepad}`}
+          {padName
+            ? `Gamepad: ${padName}. ${KEY_HELP.gamepad}`
+            : `No gamepad found: plug one in and press a button. ${KEY_HELP.gamepad}`}
         </p>
         <MotorBars motors={mixing.motors} outputs={step.outputs} targets={step.targets} />
         <DriveReadout step={step} sticks={sticks} outputLimitPercent={config.safety.outputLimitPercent} />

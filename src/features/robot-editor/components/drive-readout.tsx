@@ -16,10 +16,19 @@ const SMALL = 0.005;
 
 /** Body speeds in words with units, e.g. "ahead 0.42 m/s · right 0.10 m/s · turning 35 °/s right". */
 export function twistWords(twist: DriveStep['motion']['twist']): string {
-  const along = Math.abs(twist.vxMps) < SMALL ? 'ahead 0.00 m/s' : `${twist.vxMps > 0 ? 'ahead' : 'back'} ${Math.abs(twist.vxMps).toFixed(2)} m/s`;
-  const side = Math.abs(twist.vyMps) < SMALL ? 'sideways 0.00 m/s' : `${twist.vyMps > 0 ? 'left' : 'right'} ${Math.abs(twist.vyMps).toFixed(2)} m/s`;
+  const along =
+    Math.abs(twist.vxMps) < SMALL
+      ? 'ahead 0.00 m/s'
+      : `${twist.vxMps > 0 ? 'ahead' : 'back'} ${Math.abs(twist.vxMps).toFixed(2)} m/s`;
+  const side =
+    Math.abs(twist.vyMps) < SMALL
+      ? 'sideways 0.00 m/s'
+      : `${twist.vyMps > 0 ? 'left' : 'right'} ${Math.abs(twist.vyMps).toFixed(2)} m/s`;
   const degPerS = (twist.omegaRadps * 180) / Math.PI;
-  const turn = Math.abs(degPerS) < 0.5 ? 'turning 0 °/s' : `turning ${Math.abs(degPerS).toFixed(0)} °/s ${degPerS > 0 ? 'left' : 'right'}`;
+  const turn =
+    Math.abs(degPerS) < 0.5
+      ? 'turning 0 °/s'
+      : `turning ${Math.abs(degPerS).toFixed(0)} °/s ${degPerS > 0 ? 'left' : 'right'}`;
   return `${along} · ${side} · ${turn}`;
 }
 
@@ -57,10 +66,12 @@ export function DriveReadout({ step, sticks, outputLimitPercent }: DriveReadoutP
         </tbody>
       </table>
       <p className="font-mono text-[13px] tabular-nums text-ink-soft">{twistWords(twist)}</p>
-      <p className="text-ink">
-        The robot {step.motion.words}.
-      </p>
-      {outputLimitPercent < 100 && <p className="text-xs text-ink-muted">Output limit {outputLimitPercent} %: every motor is scaled to it before the start threshold.</p>}
+      <p className="text-ink">The robot {step.motion.words}.</p>
+      {outputLimitPercent < 100 && (
+        <p className="text-xs text-ink-muted">
+          Output limit {outputLimitPercent} %: every motor is scaled to it before the start threshold.
+        </p>
+      )}
     </div>
   );
 }

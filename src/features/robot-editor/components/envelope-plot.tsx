@@ -19,7 +19,8 @@ const SPOKES = [
   { deg: 270, label: 'Right' },
 ];
 
-const path = (points: ScreenPoint[]) => (points.length ? `M ${points.map((p) => `${p.x.toFixed(2)} ${p.y.toFixed(2)}`).join(' L ')} Z` : '');
+const path = (points: ScreenPoint[]) =>
+  points.length ? `M ${points.map((p) => `${p.x.toFixed(2)} ${p.y.toFixed(2)}`).join(' L ')} Z` : '';
 
 /** Top yaw rate in words. */
 export function yawRateWords(topYawRadps: number): string {
@@ -80,19 +81,47 @@ export function EnvelopePlot({ envelope, title = 'Motion envelope', size = 360, 
         data-scale={scale}
       >
         <title id={`${id}-title`}>{title}</title>
-        <desc id={`${id}-desc`}>{`${topSpeedWords(envelope)} ${yawRateWords(envelope.topYawRadps)} Heading 0° is forward, drawn up; 90° is left.`}</desc>
+        <desc
+          id={`${id}-desc`}
+        >{`${topSpeedWords(envelope)} ${yawRateWords(envelope.topYawRadps)} Heading 0° is forward, drawn up; 90° is left.`}</desc>
         <g aria-hidden="true">
           {rings.map((r) => (
-            <circle key={r} cx={centre.x} cy={centre.y} r={r * scale} fill="none" className={r === outer ? 'stroke-rule-strong' : 'stroke-grid'} strokeWidth={1} />
+            <circle
+              key={r}
+              cx={centre.x}
+              cy={centre.y}
+              r={r * scale}
+              fill="none"
+              className={r === outer ? 'stroke-rule-strong' : 'stroke-grid'}
+              strokeWidth={1}
+            />
           ))}
           {Array.from({ length: 12 }, (_, k) => k * 30).map((deg) => {
             const end = polarPoint(deg, radius, centre);
-            return <line key={deg} x1={centre.x} y1={centre.y} x2={end.x} y2={end.y} className={deg % 90 === 0 ? 'stroke-rule' : 'stroke-grid'} strokeWidth={1} />;
+            return (
+              <line
+                key={deg}
+                x1={centre.x}
+                y1={centre.y}
+                x2={end.x}
+                y2={end.y}
+                className={deg % 90 === 0 ? 'stroke-rule' : 'stroke-grid'}
+                strokeWidth={1}
+              />
+            );
           })}
           {SPOKES.map(({ deg, label }) => {
             const at = polarPoint(deg, radius + 16, centre);
             return (
-              <text key={deg} x={at.x} y={at.y + 4} textAnchor="middle" fontSize={11} className="fill-ink-muted" letterSpacing={0.5}>
+              <text
+                key={deg}
+                x={at.x}
+                y={at.y + 4}
+                textAnchor="middle"
+                fontSize={11}
+                className="fill-ink-muted"
+                letterSpacing={0.5}
+              >
                 {label}
               </text>
             );
@@ -100,24 +129,51 @@ export function EnvelopePlot({ envelope, title = 'Motion envelope', size = 360, 
           {rings.map((r) => {
             const at = polarPoint(-45, r * scale, centre);
             return (
-              <text key={`t${r}`} x={at.x + 3} y={at.y - 3} fontSize={10} className="fill-ink-faint stroke-paper-raised" strokeWidth={3} paintOrder="stroke">
+              <text
+                key={`t${r}`}
+                x={at.x + 3}
+                y={at.y - 3}
+                fontSize={10}
+                className="fill-ink-faint stroke-paper-raised"
+                strokeWidth={3}
+                paintOrder="stroke"
+              >
                 {`${Number(r.toFixed(2))} m/s`}
               </text>
             );
           })}
         </g>
-        <path d={path(limit)} className="fill-accent-soft stroke-accent" strokeWidth={2} strokeLinejoin="round" fillOpacity={0.75} data-testid="envelope-limit" />
+        <path
+          d={path(limit)}
+          className="fill-accent-soft stroke-accent"
+          strokeWidth={2}
+          strokeLinejoin="round"
+          fillOpacity={0.75}
+          data-testid="envelope-limit"
+        />
         {isolated.map((s) => {
           const p = polarPoint(s.headingDeg, s.speedMps * scale, centre);
           return <circle key={s.headingDeg} cx={p.x} cy={p.y} r={4} className="fill-accent" />;
         })}
-        <path d={path(stick)} fill="none" className="stroke-ink-soft" strokeWidth={1.5} strokeDasharray="5 3" strokeLinejoin="round" data-testid="envelope-full-stick" />
+        <path
+          d={path(stick)}
+          fill="none"
+          className="stroke-ink-soft"
+          strokeWidth={1.5}
+          strokeDasharray="5 3"
+          strokeLinejoin="round"
+          data-testid="envelope-full-stick"
+        />
         <circle cx={centre.x} cy={centre.y} r={2.5} className="fill-ink" />
       </svg>
       <figcaption className="mt-2 space-y-1 text-sm">
         <p className="flex flex-wrap gap-x-4 gap-y-1 text-ink-muted">
           <span className="inline-flex items-center gap-1.5">
-            <span className="inline-block h-2.5 w-4 rounded-sm border-2 border-accent bg-accent-soft" aria-hidden="true" /> wheel limit
+            <span
+              className="inline-block h-2.5 w-4 rounded-sm border-2 border-accent bg-accent-soft"
+              aria-hidden="true"
+            />{' '}
+            wheel limit
           </span>
           <span className="inline-flex items-center gap-1.5">
             <span className="inline-block w-4 border-t-2 border-dashed border-ink-soft" aria-hidden="true" /> full stick

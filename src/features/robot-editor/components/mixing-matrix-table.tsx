@@ -21,10 +21,13 @@ const AXIS_HEADINGS: Record<StickAxis, { title: string; hint: string }> = {
 
 /** The words for the rank of the map from body motion to motor commands. */
 export function rankWords(mixing: Pick<Mixing, 'rank' | 'canDrive' | 'canStrafe' | 'canTurn'>): string {
-  const can = [mixing.canDrive && 'drive', mixing.canStrafe && 'strafe', mixing.canTurn && 'turn'].filter(Boolean) as string[];
+  const can = [mixing.canDrive && 'drive', mixing.canStrafe && 'strafe', mixing.canTurn && 'turn'].filter(
+    Boolean,
+  ) as string[];
   if (mixing.rank === 0 || can.length === 0) return 'Rank 0: no motor command moves this robot.';
   const list = can.length === 1 ? can[0] : `${can.slice(0, -1).join(', ')} and ${can[can.length - 1]}`;
-  if (mixing.rank === 3 && can.length === 3) return 'Rank 3: it can drive, strafe and turn at once, each stick on its own.';
+  if (mixing.rank === 3 && can.length === 3)
+    return 'Rank 3: it can drive, strafe and turn at once, each stick on its own.';
   return `Rank ${mixing.rank}: it can ${list}; ${3 - can.length === 1 ? 'one stick is' : `${3 - can.length} sticks are`} ignored.`;
 }
 
@@ -44,13 +47,22 @@ function ValueCell({ value, ignored }: { value: number; ignored: boolean }) {
   return (
     <td className="px-2 py-1.5 text-right">
       <div className="flex items-center justify-end gap-2">
-        <span className={`font-mono text-[13px] tabular-nums ${ignored ? 'text-ink-faint' : value === 0 ? 'text-ink-muted' : 'text-ink'}`}>
+        <span
+          className={`font-mono text-[13px] tabular-nums ${ignored ? 'text-ink-faint' : value === 0 ? 'text-ink-muted' : 'text-ink'}`}
+        >
           {formatSigned(value, 2)}
         </span>
         <svg viewBox="0 0 100 10" className="h-2.5 w-10 shrink-0" aria-hidden="true">
           <rect x={0} y={3.5} width={100} height={3} rx={1.5} className="fill-paper-sunken" />
           {width > 0 && (
-            <rect x={value < 0 ? 50 - width : 50} y={1} width={width} height={8} rx={1} className={value < 0 ? 'fill-warn' : 'fill-accent'} />
+            <rect
+              x={value < 0 ? 50 - width : 50}
+              y={1}
+              width={width}
+              height={8}
+              rx={1}
+              className={value < 0 ? 'fill-warn' : 'fill-accent'}
+            />
           )}
           <line x1={50} y1={0} x2={50} y2={10} className="stroke-ink-soft" strokeWidth={1.2} />
         </svg>
@@ -64,7 +76,13 @@ function ValueCell({ value, ignored }: { value: number; ignored: boolean }) {
  * command for that stick pushed fully (each column peaks at ±1), with the rank and any
  * degeneracy in words beneath.
  */
-export function MixingMatrixTable({ mixing, highlightMotor = null, onHighlightMotor, caption, className }: MixingMatrixTableProps) {
+export function MixingMatrixTable({
+  mixing,
+  highlightMotor = null,
+  onHighlightMotor,
+  caption,
+  className,
+}: MixingMatrixTableProps) {
   const used: Record<StickAxis, boolean> = { forward: mixing.canDrive, strafe: mixing.canStrafe, yaw: mixing.canTurn };
   const full = fullScaleWords(mixing);
   return (
@@ -79,7 +97,11 @@ export function MixingMatrixTable({ mixing, highlightMotor = null, onHighlightMo
               Motor
             </th>
             {STICK_AXES.map((axis) => (
-              <th key={axis} scope="col" className={`px-2 py-1.5 text-right align-bottom font-semibold ${used[axis] ? '' : 'text-ink-faint'}`}>
+              <th
+                key={axis}
+                scope="col"
+                className={`px-2 py-1.5 text-right align-bottom font-semibold ${used[axis] ? '' : 'text-ink-faint'}`}
+              >
                 {AXIS_HEADINGS[axis].title}
                 <span className="block text-xs font-normal text-ink-muted">{AXIS_HEADINGS[axis].hint}</span>
               </th>

@@ -38,10 +38,15 @@ export function MotorBars({ motors, outputs, targets, className }: MotorBarsProp
             >
               <div
                 className={`absolute top-0 h-full ${value < 0 ? 'rounded-l-sm bg-warn' : 'rounded-r-sm bg-accent'}`}
-                style={value < 0 ? { right: '50%', width: `${-value * 50}%` } : { left: '50%', width: `${value * 50}%` }}
+                style={
+                  value < 0 ? { right: '50%', width: `${-value * 50}%` } : { left: '50%', width: `${value * 50}%` }
+                }
               />
               {target !== undefined && (
-                <div className="absolute -top-0.5 h-[calc(100%+4px)] w-0.5 bg-ink-soft" style={{ left: `calc(${50 + Math.max(-1, Math.min(1, target)) * 50}% - 1px)` }} />
+                <div
+                  className="absolute -top-0.5 h-[calc(100%+4px)] w-0.5 bg-ink-soft"
+                  style={{ left: `calc(${50 + Math.max(-1, Math.min(1, target)) * 50}% - 1px)` }}
+                />
               )}
               <div className="absolute left-1/2 top-[-3px] h-[calc(100%+6px)] w-px bg-ink" />
             </div>

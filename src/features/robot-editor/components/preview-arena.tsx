@@ -27,7 +27,15 @@ export function robotReachMm(wheels: WheelLike[]): number {
  * the grid and the path slide past as it drives. World axes are the robot's at the start
  * (forward up, left left), the same map as every drawing.
  */
-export function PreviewArena({ wheels, pose, trail, motorCommands, width = 560, height = 400, description }: PreviewArenaProps) {
+export function PreviewArena({
+  wheels,
+  pose,
+  trail,
+  motorCommands,
+  width = 560,
+  height = 400,
+  description,
+}: PreviewArenaProps) {
   const id = useId();
   const pxPerMm = (height * 0.17) / robotReachMm(wheels);
   const pxPerM = pxPerMm * 1000;
@@ -42,7 +50,12 @@ export function PreviewArena({ wheels, pose, trail, motorCommands, width = 560, 
   const headingDeg = (pose.thetaRad * 180) / Math.PI;
   const path = trail.map((p) => toScreen(p.xM, p.yM));
   return (
-    <svg viewBox={`0 0 ${width} ${height}`} role="img" aria-labelledby={`${id}-t ${id}-d`} className="block h-auto w-full bg-paper-raised font-sans">
+    <svg
+      viewBox={`0 0 ${width} ${height}`}
+      role="img"
+      aria-labelledby={`${id}-t ${id}-d`}
+      className="block h-auto w-full bg-paper-raised font-sans"
+    >
       <title id={`${id}-t`}>Drive preview, top view of the floor</title>
       <desc id={`${id}-d`}>{description}</desc>
       <FloorGrid width={width} height={height} origin={toScreen(0, 0)} step={gridM * pxPerM} />
@@ -77,7 +90,12 @@ export function PreviewArena({ wheels, pose, trail, motorCommands, width = 560, 
           <WheelGlyph key={i} shape={shape} showDriveArrow={false} />
         ))}
         {shapes.map((shape, i) => (
-          <CommandArrow key={`c${i}`} shape={shape} command={motorCommands[shape.wheel.motor] ?? 0} showStopped={false} />
+          <CommandArrow
+            key={`c${i}`}
+            shape={shape}
+            command={motorCommands[shape.wheel.motor] ?? 0}
+            showStopped={false}
+          />
         ))}
       </g>
       <text x={width - 10} y={height - 10} textAnchor="end" fontSize={11} className="fill-ink-faint">
@@ -89,10 +107,22 @@ export function PreviewArena({ wheels, pose, trail, motorCommands, width = 560, 
 
 function HeadingMark({ reach }: { reach: number }) {
   const tip = -reach + 3;
-  return <polygon points={`0,${tip} ${-6},${tip + 11} ${6},${tip + 11}`} className="fill-ink-soft" aria-hidden="true" />;
+  return (
+    <polygon points={`0,${tip} ${-6},${tip + 11} ${6},${tip + 11}`} className="fill-ink-soft" aria-hidden="true" />
+  );
 }
 
-function FloorGrid({ width, height, origin, step }: { width: number; height: number; origin: ScreenPoint; step: number }) {
+function FloorGrid({
+  width,
+  height,
+  origin,
+  step,
+}: {
+  width: number;
+  height: number;
+  origin: ScreenPoint;
+  step: number;
+}) {
   const lines: { k: string; x1: number; y1: number; x2: number; y2: number; axis: boolean }[] = [];
   for (let k = Math.ceil(-origin.x / step); origin.x + k * step <= width; k += 1) {
     const x = origin.x + k * step;
@@ -105,7 +135,15 @@ function FloorGrid({ width, height, origin, step }: { width: number; height: num
   return (
     <g aria-hidden="true">
       {lines.map((l) => (
-        <line key={l.k} x1={l.x1} y1={l.y1} x2={l.x2} y2={l.y2} className={l.axis ? 'stroke-rule-strong' : 'stroke-grid'} strokeWidth={l.axis ? 1.2 : 1} />
+        <line
+          key={l.k}
+          x1={l.x1}
+          y1={l.y1}
+          x2={l.x2}
+          y2={l.y2}
+          className={l.axis ? 'stroke-rule-strong' : 'stroke-grid'}
+          strokeWidth={l.axis ? 1.2 : 1}
+        />
       ))}
       <circle cx={origin.x} cy={origin.y} r={4} className="fill-none stroke-ink-faint" strokeWidth={1.2} />
     </g>

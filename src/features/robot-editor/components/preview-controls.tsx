@@ -19,7 +19,12 @@ export function PreviewControls(props: PreviewControlsProps) {
   return (
     <div className="flex flex-wrap items-center gap-x-4 gap-y-2 text-sm">
       <label className="inline-flex items-center gap-1.5">
-        <input type="checkbox" checked={props.rampOn} onChange={(e) => props.onRampChange(e.target.checked)} className="accent-[var(--color-accent)]" />
+        <input
+          type="checkbox"
+          checked={props.rampOn}
+          onChange={(e) => props.onRampChange(e.target.checked)}
+          className="accent-[var(--color-accent)]"
+        />
         Ramp limit ({props.rampPerSecond} full scale/s)
       </label>
       {rateSwitch.channel !== null && (
@@ -38,7 +43,11 @@ export function PreviewControls(props: PreviewControlsProps) {
           </select>
         </label>
       )}
-      <button type="button" onClick={props.onReset} className="rounded border border-accent px-2.5 py-0.5 text-accent-strong hover:bg-accent-soft">
+      <button
+        type="button"
+        onClick={props.onReset}
+        className="rounded border border-accent px-2.5 py-0.5 text-accent-strong hover:bg-accent-soft"
+      >
         Reset position
       </button>
     </div>

@@ -34,10 +34,22 @@ const clamp = (v: number) => Math.max(-1, Math.min(1, v)) + 0;
  * springs back to centre like a self-centring gimbal. Travel is square (each axis on its
  * own reaches ±1, corners included), as on a transmitter.
  */
-export function VirtualStick({ label, value, onChange, axes = 'xy', keyMap, valueText, keyHelp, size = 148 }: VirtualStickProps) {
+export function VirtualStick({
+  label,
+  value,
+  onChange,
+  axes = 'xy',
+  keyMap,
+  valueText,
+  keyHelp,
+  size = 148,
+}: VirtualStickProps) {
   const helpId = useId();
   const dragging = useRef(false);
-  const lock = useCallback((v: StickValue): StickValue => (axes === 'x' ? { x: clamp(v.x), y: 0 } : { x: clamp(v.x), y: clamp(v.y) }), [axes]);
+  const lock = useCallback(
+    (v: StickValue): StickValue => (axes === 'x' ? { x: clamp(v.x), y: 0 } : { x: clamp(v.x), y: clamp(v.y) }),
+    [axes],
+  );
   const keys = useHeldKeys(keyMap, COMPONENTS, (v) => onChange(lock(v)));
 
   const knob = size * 0.13;
@@ -86,7 +98,14 @@ export function VirtualStick({ label, value, onChange, axes = 'xy', keyMap, valu
         onBlur={keys.onBlur}
       >
         <svg viewBox={`0 0 ${size} ${size}`} width={size} height={size} aria-hidden="true" className="block">
-          <rect x={1} y={1} width={size - 2} height={size - 2} rx={16} className="fill-paper-sunken stroke-rule-strong" />
+          <rect
+            x={1}
+            y={1}
+            width={size - 2}
+            height={size - 2}
+            rx={16}
+            className="fill-paper-sunken stroke-rule-strong"
+          />
           <rect
             x={c - travel}
             y={axes === 'x' ? c - 4 : c - travel}
@@ -96,8 +115,18 @@ export function VirtualStick({ label, value, onChange, axes = 'xy', keyMap, valu
             className="fill-paper stroke-rule"
           />
           <line x1={c - travel} y1={c} x2={c + travel} y2={c} className="stroke-rule-strong" strokeDasharray="2 3" />
-          {axes === 'xy' && <line x1={c} y1={c - travel} x2={c} y2={c + travel} className="stroke-rule-strong" strokeDasharray="2 3" />}
-          <line x1={c} y1={c} x2={kx} y2={ky} className="stroke-ink-faint" strokeWidth={knob * 0.5} strokeLinecap="round" />
+          {axes === 'xy' && (
+            <line x1={c} y1={c - travel} x2={c} y2={c + travel} className="stroke-rule-strong" strokeDasharray="2 3" />
+          )}
+          <line
+            x1={c}
+            y1={c}
+            x2={kx}
+            y2={ky}
+            className="stroke-ink-faint"
+            strokeWidth={knob * 0.5}
+            strokeLinecap="round"
+          />
           <circle cx={kx} cy={ky} r={knob} className="fill-ink stroke-paper-raised" strokeWidth={2} />
           <circle cx={kx} cy={ky} r={knob * 0.45} className="fill-ink-soft" />
         </svg>

@@ -1,5 +1,11 @@
 import { useId, useMemo, useState } from 'react';
-import { computeMixing, forwardKinematics, mixSticks, whatIfReversed, type MixingInput } from '@shared/kinematics/mixing';
+import {
+  computeMixing,
+  forwardKinematics,
+  mixSticks,
+  whatIfReversed,
+  type MixingInput,
+} from '@shared/kinematics/mixing';
 import { STICK_AXES, type StickAxis } from '@shared/schemas/ids';
 import { ChassisDrawing } from './chassis-drawing';
 
@@ -21,7 +27,13 @@ const AXIS_LABEL: Record<StickAxis, string> = { forward: 'Forward stick', strafe
  * each full stick, and the drawing with every wheel's command and the motion that results
  * (solid) over the motion that was meant (dashed).
  */
-export function WhatIfReversedPanel({ config, defaultMotor = null, motor, onMotorChange, className }: WhatIfReversedPanelProps) {
+export function WhatIfReversedPanel({
+  config,
+  defaultMotor = null,
+  motor,
+  onMotorChange,
+  className,
+}: WhatIfReversedPanelProps) {
   const id = useId();
   const [ownMotor, setOwnMotor] = useState<string | null>(defaultMotor);
   const chosen = motor !== undefined ? motor : ownMotor;
@@ -33,7 +45,10 @@ export function WhatIfReversedPanel({ config, defaultMotor = null, motor, onMoto
   const usable = STICK_AXES.filter((_, k) => mixing.matrix.some((row) => row[k] !== 0));
   const [axis, setAxis] = useState<StickAxis>(usable[0] ?? 'forward');
   const shownAxis = usable.includes(axis) ? axis : (usable[0] ?? 'forward');
-  const report = useMemo(() => (chosen && mixing.motors.includes(chosen) ? whatIfReversed(config, chosen) : null), [config, chosen, mixing]);
+  const report = useMemo(
+    () => (chosen && mixing.motors.includes(chosen) ? whatIfReversed(config, chosen) : null),
+    [config, chosen, mixing],
+  );
 
   const unit = { forward: 0, strafe: 0, yaw: 0, [shownAxis]: 1 };
   const commands = mixSticks(mixing, unit);
@@ -55,7 +70,9 @@ export function WhatIfReversedPanel({ config, defaultMotor = null, motor, onMoto
                 aria-pressed={chosen === name}
                 onClick={() => choose(chosen === name ? null : name)}
                 className={`rounded border px-2.5 py-1 text-sm transition-colors ${
-                  chosen === name ? 'border-warn-strong bg-warn-soft text-warn-strong' : 'border-rule-strong bg-paper-raised text-ink hover:border-accent'
+                  chosen === name
+                    ? 'border-warn-strong bg-warn-soft text-warn-strong'
+                    : 'border-rule-strong bg-paper-raised text-ink hover:border-accent'
                 }`}
               >
                 <span aria-hidden="true" className="mr-1 font-mono">
@@ -70,7 +87,10 @@ export function WhatIfReversedPanel({ config, defaultMotor = null, motor, onMoto
           <legend className="mb-2 text-sm font-semibold">Stick shown in the drawing</legend>
           <div className="flex flex-wrap gap-3 text-sm">
             {STICK_AXES.map((a) => (
-              <label key={a} className={`inline-flex items-center gap-1.5 ${usable.includes(a) ? '' : 'text-ink-faint'}`}>
+              <label
+                key={a}
+                className={`inline-flex items-center gap-1.5 ${usable.includes(a) ? '' : 'text-ink-faint'}`}
+              >
                 <input
                   type="radio"
                   name={`${id}-axis`}
@@ -88,24 +108,35 @@ export function WhatIfReversedPanel({ config, defaultMotor = null, motor, onMoto
         <div aria-live="polite" className="space-y-2 text-sm">
           {report ? (
             <>
-              <p className="font-semibold">{report.cases.some((c) => c.changed) ? `If ${report.motor} turned the other way:` : report.summary}</p>
+              <p className="font-semibold">
+                {report.cases.some((c) => c.changed) ? `If ${report.motor} turned the other way:` : report.summary}
+              </p>
               <ul className="space-y-1.5">
                 {report.cases.map((c) => (
-                  <li key={c.axis} className={`border-l-2 pl-2 ${c.changed ? 'border-warn text-ink' : 'border-rule text-ink-muted'}`}>
+                  <li
+                    key={c.axis}
+                    className={`border-l-2 pl-2 ${c.changed ? 'border-warn text-ink' : 'border-rule text-ink-muted'}`}
+                  >
                     {c.sentence}
                   </li>
                 ))}
               </ul>
             </>
           ) : (
-            <p className="text-ink-muted">Pick a motor to see what the robot would do if that motor turned the other way.</p>
+            <p className="text-ink-muted">
+              Pick a motor to see what the robot would do if that motor turned the other way.
+            </p>
           )}
         </div>
       </div>
       <ChassisDrawing
         className="max-w-[560px]"
         wheels={config.chassis.wheels}
-        title={chosen ? `${AXIS_LABEL[shownAxis]} pushed fully with ${chosen} reversed` : `${AXIS_LABEL[shownAxis]} pushed fully`}
+        title={
+          chosen
+            ? `${AXIS_LABEL[shownAxis]} pushed fully with ${chosen} reversed`
+            : `${AXIS_LABEL[shownAxis]} pushed fully`
+        }
         motorCommands={byMotor}
         motion={chosen ? result.sticks : null}
         intendedMotion={unit}

@@ -13,7 +13,11 @@ export function checkDraft(config: RobotConfig) {
   const layout = config.chassis?.layout;
   if (layout && layout !== 'custom') {
     const params = PRESET_PARAM_SCHEMAS[layout].safeParse(config.chassis.params ?? {});
-    if (!params.success) Object.assign(fieldErrors, issuesByPath(params.error.issues.map((i) => ({ ...i, path: ['chassis', 'params', ...i.path] }))));
+    if (!params.success)
+      Object.assign(
+        fieldErrors,
+        issuesByPath(params.error.issues.map((i) => ({ ...i, path: ['chassis', 'params', ...i.path] }))),
+      );
   }
   const valid = result.success && Object.keys(fieldErrors).length === 0 ? result.data : null;
   return { valid, fieldErrors };

@@ -33,7 +33,11 @@ export function useDriveLoop(
   options: { ramp: boolean; ratePosition: number },
 ) {
   const { ramp, ratePosition } = options;
-  const [frame, setFrame] = useState<DriveFrame>(() => ({ sticks: AT_REST, step: driveStep(config, AT_REST, { mixing, ratePosition }), pose: START_POSE }));
+  const [frame, setFrame] = useState<DriveFrame>(() => ({
+    sticks: AT_REST,
+    step: driveStep(config, AT_REST, { mixing, ratePosition }),
+    pose: START_POSE,
+  }));
   const [padName, setPadName] = useState<string | null>(null);
   const pose = useRef<Pose>(START_POSE);
   const trail = useRef<{ xM: number; yM: number }[]>([{ xM: 0, yM: 0 }]);
@@ -57,7 +61,11 @@ export function useDriveLoop(
       const pad = readPad();
       setPadName(pad?.id ?? null);
       const sticks = combineSticks(inputs.current ?? AT_REST, pad ? gamepadSticks(pad) : null);
-      const step = driveStep(config, sticks, { mixing, ratePosition, ramp: ramp ? { previous: ramped.current, dtS } : undefined });
+      const step = driveStep(config, sticks, {
+        mixing,
+        ratePosition,
+        ramp: ramp ? { previous: ramped.current, dtS } : undefined,
+      });
       ramped.current = step.ramped;
       const still = step.ramped.every((c) => c === 0) && Object.values(sticks).every((v) => v === 0);
       if (!(still && idle)) {

@@ -26,7 +26,11 @@ function flash(element: HTMLElement): void {
  * When `fieldKey` is set, waits for the section to show that field (sections load on demand),
  * then scrolls to it, focuses it and flashes it, and calls `onDone`.
  */
-export function useFieldFocus(fieldKey: string | null, root: React.RefObject<HTMLElement | null>, onDone: () => void): void {
+export function useFieldFocus(
+  fieldKey: string | null,
+  root: React.RefObject<HTMLElement | null>,
+  onDone: () => void,
+): void {
   useEffect(() => {
     if (!fieldKey) return;
     let frame = 0;
@@ -35,7 +39,8 @@ export function useFieldFocus(fieldKey: string | null, root: React.RefObject<HTM
       const element = root.current ? findFieldElement(root.current, fieldKey) : null;
       if (element) {
         element.scrollIntoView({ block: 'center' });
-        if (element.tabIndex < 0 && !element.matches('input, select, textarea, button, a[href]')) element.setAttribute('tabindex', '-1');
+        if (element.tabIndex < 0 && !element.matches('input, select, textarea, button, a[href]'))
+          element.setAttribute('tabindex', '-1');
         element.focus({ preventScroll: true });
         flash(element);
         onDone();

@@ -8,7 +8,12 @@ export type KeyMap<C extends string> = Record<string, KeyPush<C>>;
 const keyName = (key: string) => (key.length === 1 ? key.toLowerCase() : key);
 
 /** Sum of the held keys' pushes, each component within −1..1; Shift halves it for fine moves. */
-export function heldVector<C extends string>(held: Iterable<string>, map: KeyMap<C>, components: readonly C[], fine: boolean): Record<C, number> {
+export function heldVector<C extends string>(
+  held: Iterable<string>,
+  map: KeyMap<C>,
+  components: readonly C[],
+  fine: boolean,
+): Record<C, number> {
   const out = Object.fromEntries(components.map((c) => [c, 0])) as Record<C, number>;
   for (const key of held) {
     const push = map[key];
@@ -23,10 +28,17 @@ export function heldVector<C extends string>(held: Iterable<string>, map: KeyMap
  * Keyboard driving for a focusable element: holding a mapped key pushes the stick, releasing
  * every key (or leaving the element) lets it spring back to centre.
  */
-export function useHeldKeys<C extends string>(map: KeyMap<C>, components: readonly C[], onChange: (value: Record<C, number>) => void) {
+export function useHeldKeys<C extends string>(
+  map: KeyMap<C>,
+  components: readonly C[],
+  onChange: (value: Record<C, number>) => void,
+) {
   const held = useRef(new Set<string>());
   const shift = useRef(false);
-  const emit = useCallback(() => onChange(heldVector(held.current, map, components, shift.current)), [map, components, onChange]);
+  const emit = useCallback(
+    () => onChange(heldVector(held.current, map, components, shift.current)),
+    [map, components, onChange],
+  );
   const onKeyDown = useCallback(
     (event: KeyboardEvent) => {
       const key = keyName(event.key);

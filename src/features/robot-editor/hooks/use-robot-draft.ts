@@ -49,7 +49,11 @@ function browserStorage(): Storage | null {
  * The robot's draft: what the editor shows and changes. It is kept in localStorage while it
  * differs from its base revision; a clean draft follows the head when someone else saves.
  */
-export function useRobotDraft(robotId: string, head: RevisionDetail, storage: Storage | null = browserStorage()): RobotDraft {
+export function useRobotDraft(
+  robotId: string,
+  head: RevisionDetail,
+  storage: Storage | null = browserStorage(),
+): RobotDraft {
   const [state, setState] = useState<DraftState>(() => initial(robotId, head, storage));
   const [storageFailed, setStorageFailed] = useState(false);
   const storageRef = useRef(storage);
@@ -57,7 +61,8 @@ export function useRobotDraft(robotId: string, head: RevisionDetail, storage: St
 
   // Someone saved a newer head while this draft had no changes: follow it.
   useEffect(() => {
-    if (!dirty && head.number > state.baseRevision) setState({ baseRevision: head.number, config: head.config, baseConfig: head.config });
+    if (!dirty && head.number > state.baseRevision)
+      setState({ baseRevision: head.number, config: head.config, baseConfig: head.config });
   }, [dirty, head, state.baseRevision]);
 
   const persist = useCallback(
@@ -102,7 +107,15 @@ export function useRobotDraft(robotId: string, head: RevisionDetail, storage: St
   );
 
   return useMemo(
-    () => ({ ...state, dirty, behindHead: head.number > state.baseRevision, storageFailed, setConfig, discard, rebase }),
+    () => ({
+      ...state,
+      dirty,
+      behindHead: head.number > state.baseRevision,
+      storageFailed,
+      setConfig,
+      discard,
+      rebase,
+    }),
     [state, dirty, head.number, storageFailed, setConfig, discard, rebase],
   );
 }

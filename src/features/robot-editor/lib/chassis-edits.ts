@@ -10,7 +10,10 @@ import { starterDrivers } from '@shared/starter';
 /** A driver's pins fitted to its motors: roles it no longer has are dropped, new ones left unassigned. */
 export function fitDriverPins(driver: Driver): Driver {
   const roles = driverPinRoles(driver.kind, driver.motors.length);
-  return { ...driver, pins: Object.fromEntries(roles.map((r) => [r.id, driver.pins[r.id] ?? { pin: null, locked: false }])) };
+  return {
+    ...driver,
+    pins: Object.fromEntries(roles.map((r) => [r.id, driver.pins[r.id] ?? { pin: null, locked: false }])),
+  };
 }
 
 /**
@@ -24,14 +27,18 @@ export function syncMotors(config: RobotConfig, renames: Readonly<Record<string,
   const names = [...new Set(config.chassis.wheels.map((w) => w.motor))];
   const settings = new Map(config.motors.map((m) => [renames[m.name] ?? m.name, m]));
   const like = config.motors[0];
-  const fresh = (name: string) => MotorSchema.parse(like ? { name, stallCurrentA: like.stallCurrentA, ratedVoltage: like.ratedVoltage } : { name });
+  const fresh = (name: string) =>
+    MotorSchema.parse(like ? { name, stallCurrentA: like.stallCurrentA, ratedVoltage: like.ratedVoltage } : { name });
   const motors = names.map((name) => ({ ...(settings.get(name) ?? fresh(name)), name }));
   // Each motor keeps the first channel it is found on; merged motors free the others.
   const seen = new Set<string>();
   const keep = (m: string) => names.includes(m) && !seen.has(m) && (seen.add(m), true);
-  let drivers = config.wiring.drivers.map((d) => ({ ...d, motors: d.motors.map((m) => renames[m] ?? m).filter(keep) })).filter((d) => d.motors.length > 0);
+  let drivers = config.wiring.drivers
+    .map((d) => ({ ...d, motors: d.motors.map((m) => renames[m] ?? m).filter(keep) }))
+    .filter((d) => d.motors.length > 0);
   const placed = new Set(drivers.flatMap((d) => d.motors));
-  for (const name of names.filter((n) => !placed.has(n))) drivers = placeOnDriver(drivers, name, config.wiring.drivers[0]?.kind);
+  for (const name of names.filter((n) => !placed.has(n)))
+    drivers = placeOnDriver(drivers, name, config.wiring.drivers[0]?.kind);
   return { ...config, motors, wiring: { ...config.wiring, drivers: drivers.map(fitDriverPins) } };
 }
 
@@ -84,13 +91,27 @@ export function addWheel(config: RobotConfig): RobotConfig {
   let n = config.chassis.wheels.length + 1;
   while (taken.has(`Wheel ${n}`)) n += 1;
   const name = `Wheel ${n}`;
-  const wheel: Wheel = { name, kind: last?.kind ?? 'omni', xMm: 0, yMm: 0, driveAngleDeg: 0, rollerAngleDeg: 0, radiusMm: last?.radiusMm ?? 30, motor: name, reversed: false, maxRpm: last?.maxRpm ?? 200 };
+  const wheel: Wheel = {
+    name,
+    kind: last?.kind ?? 'omni',
+    xMm: 0,
+    yMm: 0,
+    driveAngleDeg: 0,
+    rollerAngleDeg: 0,
+    radiusMm: last?.radiusMm ?? 30,
+    motor: name,
+    reversed: false,
+    maxRpm: last?.maxRpm ?? 200,
+  };
   return syncMotors({ ...config, chassis: { ...config.chassis, wheels: [...config.chassis.wheels, wheel] } });
 }
 
 export function removeWheel(config: RobotConfig, index: number): RobotConfig {
   if (config.chassis.wheels.length <= 1) return config;
-  return syncMotors({ ...config, chassis: { ...config.chassis, wheels: config.chassis.wheels.filter((_, i) => i !== index) } });
+  return syncMotors({
+    ...config,
+    chassis: { ...config.chassis, wheels: config.chassis.wheels.filter((_, i) => i !== index) },
+  });
 }
 
 export type RenameResult = { ok: true; config: RobotConfig } | { ok: false; reason: string };
@@ -102,14 +123,21 @@ export function renameMotor(config: RobotConfig, index: number, name: string): R
   if (old === undefined || next === old) return { ok: true, config };
   if (!next) return { ok: false, reason: 'Give the motor a name' };
   if (next.length > 40) return { ok: false, reason: 'At most 40 characters' };
-  if (config.motors.some((m, i) => i !== index && m.name === next)) return { ok: false, reason: `Another motor is already named “${next}”` };
+  if (config.motors.some((m, i) => i !== index && m.name === next))
+    return { ok: false, reason: `Another motor is already named “${next}”` };
   return {
     ok: true,
     config: {
       ...config,
       motors: config.motors.map((m, i) => (i === index ? { ...m, name: next } : m)),
-      chassis: { ...config.chassis, wheels: config.chassis.wheels.map((w) => (w.motor === old ? { ...w, motor: next } : w)) },
-      wiring: { ...config.wiring, drivers: config.wiring.drivers.map((d) => ({ ...d, motors: d.motors.map((m) => (m === old ? next : m)) })) },
+      chassis: {
+        ...config.chassis,
+        wheels: config.chassis.wheels.map((w) => (w.motor === old ? { ...w, motor: next } : w)),
+      },
+      wiring: {
+        ...config.wiring,
+        drivers: config.wiring.drivers.map((d) => ({ ...d, motors: d.motors.map((m) => (m === old ? next : m)) })),
+      },
     },
   };
 }

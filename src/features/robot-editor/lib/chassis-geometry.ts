@@ -1,7 +1,10 @@
 import type { Wheel } from '@shared/schemas/robot-config';
 import { bodyAngleToSvg, bodyToScreen, niceNumber, type ScreenPoint } from './screen-frame';
 
-export type WheelLike = Pick<Wheel, 'name' | 'kind' | 'xMm' | 'yMm' | 'driveAngleDeg' | 'rollerAngleDeg' | 'radiusMm' | 'motor' | 'reversed'>;
+export type WheelLike = Pick<
+  Wheel,
+  'name' | 'kind' | 'xMm' | 'yMm' | 'driveAngleDeg' | 'rollerAngleDeg' | 'radiusMm' | 'motor' | 'reversed'
+>;
 
 /**
  * A wheel's footprint seen from above, in millimetres: as long as its diameter along the
@@ -65,8 +68,7 @@ export function wheelCornersMm(wheel: WheelLike): { xMm: number; yMm: number }[]
 }
 
 export type BodyOutline =
-  | { kind: 'circle'; radiusMm: number }
-  | { kind: 'rect'; front: number; rear: number; left: number; right: number };
+  { kind: 'circle'; radiusMm: number } | { kind: 'rect'; front: number; rear: number; left: number; right: number };
 
 /**
  * The robot's plate, for looks only: a disc for ring layouts (every wheel at the same
@@ -85,9 +87,13 @@ export function bodyOutline(wheels: WheelLike[]): BodyOutline {
     return { kind: 'circle', radiusMm: Math.max(mean - widest / 2 - 4, mean * 0.5) };
   }
   const reach = Math.max(...wheels.map((w) => w.radiusMm));
-  const sideways = wheels.filter((w) => Math.abs(Math.cos((w.driveAngleDeg * Math.PI) / 180)) > 0.7 && Math.abs(w.yMm) > 1);
+  const sideways = wheels.filter(
+    (w) => Math.abs(Math.cos((w.driveAngleDeg * Math.PI) / 180)) > 0.7 && Math.abs(w.yMm) > 1,
+  );
   const inner = (side: 1 | -1) => {
-    const faces = sideways.filter((w) => Math.sign(w.yMm) === side).map((w) => Math.abs(w.yMm) - wheelFootprintMm(w).widthMm / 2 - 4);
+    const faces = sideways
+      .filter((w) => Math.sign(w.yMm) === side)
+      .map((w) => Math.abs(w.yMm) - wheelFootprintMm(w).widthMm / 2 - 4);
     return faces.length ? Math.min(...faces) : Math.max(...wheels.map((w) => side * w.yMm), reach);
   };
   const xs = wheels.map((w) => w.xMm);
@@ -127,7 +133,12 @@ export interface FrameMargins {
 export const DEFAULT_MARGINS: FrameMargins = { top: 40, bottom: 42, side: 92 };
 
 /** Fits the wheels and plate into a drawing `width` × `height`, centred on the robot's centre. */
-export function drawingFrame(wheels: WheelLike[], width: number, height: number, margins: FrameMargins = DEFAULT_MARGINS): DrawingFrame {
+export function drawingFrame(
+  wheels: WheelLike[],
+  width: number,
+  height: number,
+  margins: FrameMargins = DEFAULT_MARGINS,
+): DrawingFrame {
   const outline = bodyOutline(wheels);
   const points = wheels.flatMap(wheelCornersMm);
   if (outline.kind === 'circle') {
@@ -138,7 +149,7 @@ export function drawingFrame(wheels: WheelLike[], width: number, height: number,
   // Body x is screen height, body y is screen width; keep the centre in the middle.
   const halfUp = Math.max(20, ...points.map((p) => Math.abs(p.xMm)));
   const halfSide = Math.max(20, ...points.map((p) => Math.abs(p.yMm)));
-  const scale = Math.min((width / 2 - margins.side) / halfSide, ((height - margins.top - margins.bottom) / 2) / halfUp);
+  const scale = Math.min((width / 2 - margins.side) / halfSide, (height - margins.top - margins.bottom) / 2 / halfUp);
   const origin = { x: width / 2, y: margins.top + (height - margins.top - margins.bottom) / 2 };
   return {
     width,

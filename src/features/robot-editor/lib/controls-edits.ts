@@ -7,7 +7,10 @@ import type { RobotConfig } from '@shared/schemas/robot-config';
 
 /** The input pins the source needs for the channel table: kept where the role stays, new ones unassigned. */
 export function fitInputPins(config: RobotConfig): RobotConfig {
-  const roles = inputPinRoles(config.controls.source, config.controls.channels.map((c) => c.number));
+  const roles = inputPinRoles(
+    config.controls.source,
+    config.controls.channels.map((c) => c.number),
+  );
   const old = config.wiring.inputPins;
   const inputPins = Object.fromEntries(roles.map((r) => [r.id, old[r.id] ?? { pin: null, locked: false }]));
   return { ...config, wiring: { ...config.wiring, inputPins } };
@@ -43,7 +46,13 @@ export function addChannel(config: RobotConfig): RobotConfig {
 export function removeChannel(config: RobotConfig, index: number): RobotConfig {
   const gone = config.controls.channels[index]?.number;
   if (gone === undefined) return config;
-  return fitInputPins(renumberRefs({ ...config, controls: { ...config.controls, channels: config.controls.channels.filter((_, i) => i !== index) } }, gone, null));
+  return fitInputPins(
+    renumberRefs(
+      { ...config, controls: { ...config.controls, channels: config.controls.channels.filter((_, i) => i !== index) } },
+      gone,
+      null,
+    ),
+  );
 }
 
 export type RenumberResult = { ok: true; config: RobotConfig } | { ok: false; reason: string };
@@ -52,11 +61,18 @@ export type RenumberResult = { ok: true; config: RobotConfig } | { ok: false; re
 export function renumberChannel(config: RobotConfig, index: number, number: number): RenumberResult {
   const channel = config.controls.channels[index];
   if (!channel || channel.number === number) return { ok: true, config };
-  if (!Number.isInteger(number) || number < 1 || number > 18) return { ok: false, reason: 'Channel numbers are whole numbers from 1 to 18' };
-  if (config.controls.channels.some((c, i) => i !== index && c.number === number)) return { ok: false, reason: `Channel ${number} is already in the table` };
+  if (!Number.isInteger(number) || number < 1 || number > 18)
+    return { ok: false, reason: 'Channel numbers are whole numbers from 1 to 18' };
+  if (config.controls.channels.some((c, i) => i !== index && c.number === number))
+    return { ok: false, reason: `Channel ${number} is already in the table` };
   const channels = config.controls.channels.map((c, i) => (i === index ? { ...c, number } : c));
   // A number beyond what the source carries is allowed: the engine's check explains it.
-  return { ok: true, config: fitInputPins(renumberRefs({ ...config, controls: { ...config.controls, channels } }, channel.number, number)) };
+  return {
+    ok: true,
+    config: fitInputPins(
+      renumberRefs({ ...config, controls: { ...config.controls, channels } }, channel.number, number),
+    ),
+  };
 }
 
 function renumberRefs(config: RobotConfig, from: number, to: number | null): RobotConfig {
@@ -82,11 +98,19 @@ export function setRatePositions(config: RobotConfig, positions: 2 | 3): RobotCo
   const old = config.controls.rateSwitch;
   if (old.rates.length === positions) return config;
   const top = old.rates[old.rates.length - 1] ?? 1;
-  const rates = positions === 2 ? [old.rates[0] ?? 0.5, top] : [old.rates[0] ?? 0.4, Math.round(((old.rates[0] ?? 0.4) + top) * 50) / 100, top];
+  const rates =
+    positions === 2
+      ? [old.rates[0] ?? 0.5, top]
+      : [old.rates[0] ?? 0.4, Math.round(((old.rates[0] ?? 0.4) + top) * 50) / 100, top];
   return { ...config, controls: { ...config.controls, rateSwitch: { ...old, rates } } };
 }
 
 /** Five random bytes as 10 hexadecimal digits: a pipe address unlikely to match another robot's. */
-export function randomLinkAddress(random: (bytes: Uint8Array) => Uint8Array = (b) => crypto.getRandomValues(b)): string {
-  return [...random(new Uint8Array(5))].map((b) => b.toString(16).padStart(2, '0')).join('').toUpperCase();
+export function randomLinkAddress(
+  random: (bytes: Uint8Array) => Uint8Array = (b) => crypto.getRandomValues(b),
+): string {
+  return [...random(new Uint8Array(5))]
+    .map((b) => b.toString(16).padStart(2, '0'))
+    .join('')
+    .toUpperCase();
 }

@@ -24,7 +24,15 @@ export function draftKey(robotId: string): string {
  * or the editor could not even show it: a draft from another format is dropped.
  */
 function hasConfigShape(config: unknown): boolean {
-  const c = config as { chassis?: { wheels?: unknown }; motors?: unknown; controls?: { channels?: unknown; axes?: unknown }; wiring?: { drivers?: unknown }; safety?: unknown; power?: unknown; firmware?: unknown } | null;
+  const c = config as {
+    chassis?: { wheels?: unknown };
+    motors?: unknown;
+    controls?: { channels?: unknown; axes?: unknown };
+    wiring?: { drivers?: unknown };
+    safety?: unknown;
+    power?: unknown;
+    firmware?: unknown;
+  } | null;
   return (
     typeof c === 'object' &&
     c !== null &&
@@ -60,7 +68,11 @@ export function readDraft(storage: Storage, robotId: string): StoredDraft | null
 }
 
 /** Stores a draft; returns false when the browser refuses (storage full or disabled). */
-export function writeDraft(storage: Storage, draft: Omit<StoredDraft, 'version' | 'updatedAt'>, now = new Date()): boolean {
+export function writeDraft(
+  storage: Storage,
+  draft: Omit<StoredDraft, 'version' | 'updatedAt'>,
+  now = new Date(),
+): boolean {
   try {
     storage.setItem(draftKey(draft.robotId), JSON.stringify({ version: 1, ...draft, updatedAt: now.toISOString() }));
     return true;

@@ -107,7 +107,10 @@ export function problemsOfSection<P extends EditorProblem>(problems: readonly P[
 
 /** Errors and warnings per section, as `sectionsOfProblem` places them; problems no section shows are left out. */
 export function countBySection(problems: readonly EditorProblem[]): Record<SectionId, SectionCount> {
-  const counts = Object.fromEntries(SECTION_IDS.map((id) => [id, { errors: 0, warnings: 0 }])) as Record<SectionId, SectionCount>;
+  const counts = Object.fromEntries(SECTION_IDS.map((id) => [id, { errors: 0, warnings: 0 }])) as Record<
+    SectionId,
+    SectionCount
+  >;
   for (const problem of problems) {
     for (const section of sectionsOfProblem(problem)) {
       if (problem.severity === 'error') counts[section].errors += 1;

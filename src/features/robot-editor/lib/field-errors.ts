@@ -10,10 +10,15 @@ export function friendlyIssue(issue: Issue): string {
   if (!generic) return issue.message;
   switch (issue.code) {
     case 'invalid_type':
-      return issue.expected === 'int' ? 'Use a whole number' : issue.expected === 'number' ? 'Enter a number' : issue.message;
+      return issue.expected === 'int'
+        ? 'Use a whole number'
+        : issue.expected === 'number'
+          ? 'Enter a number'
+          : issue.message;
     case 'too_small':
       if (issue.origin === 'array') return `Needs at least ${num(issue.minimum)}`;
-      if (issue.origin === 'string') return num(issue.minimum) <= 1 ? 'Cannot be empty' : `At least ${num(issue.minimum)} characters`;
+      if (issue.origin === 'string')
+        return num(issue.minimum) <= 1 ? 'Cannot be empty' : `At least ${num(issue.minimum)} characters`;
       return issue.inclusive ? `Must be at least ${num(issue.minimum)}` : `Must be more than ${num(issue.minimum)}`;
     case 'too_big':
       if (issue.origin === 'array') return `At most ${num(issue.maximum)}`;

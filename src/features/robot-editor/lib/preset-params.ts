@@ -21,7 +21,12 @@ const CHOICE_WORDS: Record<string, string> = {
   o: 'O: top rollers ring the centre',
 };
 
-type Inner = z.ZodType & { def: { type: string }; options?: unknown[]; minValue?: number | null; maxValue?: number | null };
+type Inner = z.ZodType & {
+  def: { type: string };
+  options?: unknown[];
+  minValue?: number | null;
+  maxValue?: number | null;
+};
 
 /** The parameters of a starter layout, in schema order, with labels and units from the schema's descriptions. */
 export function presetParamFields(layout: DriveLayoutId): PresetParamField[] {
@@ -32,10 +37,20 @@ export function presetParamFields(layout: DriveLayoutId): PresetParamField[] {
     const label = unitMatch ? described.slice(0, unitMatch.index).trim() : described;
     const inner = schema.unwrap() as Inner;
     if (inner.def.type === 'number') {
-      return { key, label, unit: unitMatch?.[1], kind: 'number', min: inner.minValue ?? undefined, max: inner.maxValue ?? undefined };
+      return {
+        key,
+        label,
+        unit: unitMatch?.[1],
+        kind: 'number',
+        min: inner.minValue ?? undefined,
+        max: inner.maxValue ?? undefined,
+      };
     }
     const options = (inner.options ?? []).map((o) => {
-      const value = typeof o === 'object' && o !== null && 'value' in o ? (o as { value: string | number }).value : (o as string | number);
+      const value =
+        typeof o === 'object' && o !== null && 'value' in o
+          ? (o as { value: string | number }).value
+          : (o as string | number);
       return { value, label: CHOICE_WORDS[String(value)] ?? String(value) };
     });
     return { key, label, kind: 'choice', options };
@@ -43,7 +58,10 @@ export function presetParamFields(layout: DriveLayoutId): PresetParamField[] {
 }
 
 /** Parameters checked against the layout's schema: the filled-in values, or the reasons by key. */
-export function checkPresetParams(layout: DriveLayoutId, params: Record<string, unknown>): { ok: true; params: Record<string, number | string> } | { ok: false; errors: Record<string, string> } {
+export function checkPresetParams(
+  layout: DriveLayoutId,
+  params: Record<string, unknown>,
+): { ok: true; params: Record<string, number | string> } | { ok: false; errors: Record<string, string> } {
   const result = PRESET_PARAM_SCHEMAS[layout].safeParse(params);
   if (result.success) return { ok: true, params: result.data as Record<string, number | string> };
   const errors: Record<string, string> = {};

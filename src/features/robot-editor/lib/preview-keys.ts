@@ -40,7 +40,8 @@ export const ARENA_KEYS: KeyMap<'forward' | 'strafe' | 'yaw'> = {
 };
 
 export const KEY_HELP = {
-  arena: 'Click or tab into the floor view, then hold W/S or ↑/↓ to drive, A/D to strafe, Q/E or ←/→ to turn. Shift for half stick; Esc centres.',
+  arena:
+    'Click or tab into the floor view, then hold W/S or ↑/↓ to drive, A/D to strafe, Q/E or ←/→ to turn. Shift for half stick; Esc centres.',
   left: 'Focused: ←/→ (or A/D, Q/E) turn. Let go to centre.',
   right: 'Focused: ↑/↓/←/→ or W/A/S/D. Shift for half. Let go to centre.',
   gamepad: 'Right stick drives and strafes, left stick sideways turns (dead zone 10 %).',

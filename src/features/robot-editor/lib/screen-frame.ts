@@ -10,7 +10,12 @@ export interface ScreenPoint {
 }
 
 /** Body millimetres → screen units around `origin`, `scale` screen units per millimetre. */
-export function bodyToScreen(xMm: number, yMm: number, scale: number, origin: ScreenPoint = { x: 0, y: 0 }): ScreenPoint {
+export function bodyToScreen(
+  xMm: number,
+  yMm: number,
+  scale: number,
+  origin: ScreenPoint = { x: 0, y: 0 },
+): ScreenPoint {
   return { x: origin.x - yMm * scale + 0, y: origin.y - xMm * scale + 0 };
 }
 

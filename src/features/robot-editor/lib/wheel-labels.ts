@@ -1,4 +1,12 @@
-import { drawingFrame, labelPlacement, wheelShape, type DrawingFrame, type LabelPlacement, type WheelLike, type WheelShape } from './chassis-geometry';
+import {
+  drawingFrame,
+  labelPlacement,
+  wheelShape,
+  type DrawingFrame,
+  type LabelPlacement,
+  type WheelLike,
+  type WheelShape,
+} from './chassis-geometry';
 import { formatPercent, niceNumber } from './screen-frame';
 
 /** Type size of the wheel labels and the distance between their baselines, screen units. */
@@ -37,7 +45,7 @@ export interface FittedDrawing {
 
 // Advance widths in em, rounded up from the sans-serif the app ships (Source Sans 3) so the
 // estimate errs wide; the labels' bold first line is allowed 6 % more.
-const NARROW = new Set([...' .,:;\'!|()[]ijlrtf']);
+const NARROW = new Set([..." .,:;'!|()[]ijlrtf"]);
 const WIDE = new Set([...'mwMW%']);
 
 /** Estimated width of `text` in screen units at `fontSize` (no text metrics outside a browser). */
@@ -72,7 +80,8 @@ export function wrapText(text: string, maxWidth = LABEL_MAX_WIDTH, bold = false)
 /** What a wheel's label says: its motor, the wheel when named apart, and the command or "reversed". */
 export function wheelLabelLines(wheel: WheelLike, command?: number): LabelLine[] {
   const lines: LabelLine[] = wrapText(wheel.motor, LABEL_MAX_WIDTH, true).map((text) => ({ text, tone: 'motor' }));
-  if (wheel.name !== wheel.motor) lines.push(...wrapText(`wheel ${wheel.name}`).map((text): LabelLine => ({ text, tone: 'wheel' })));
+  if (wheel.name !== wheel.motor)
+    lines.push(...wrapText(`wheel ${wheel.name}`).map((text): LabelLine => ({ text, tone: 'wheel' })));
   if (command !== undefined) lines.push({ text: formatPercent(command), tone: 'command' });
   else if (wheel.reversed) lines.push({ text: 'reversed', tone: 'reversed' });
   return lines;
@@ -82,12 +91,22 @@ export function wheelLabelLines(wheel: WheelLike, command?: number): LabelLine[]
 export function layoutLabel(placement: LabelPlacement, lines: LabelLine[]): WheelLabelLayout {
   const { at, anchor, vertical } = placement;
   const n = lines.length;
-  const firstBaseline = vertical === 1 ? at.y + 10 : vertical === -1 ? at.y - (n - 1) * LABEL_LINE_HEIGHT - 2 : at.y + 4 - ((n - 1) * LABEL_LINE_HEIGHT) / 2;
+  const firstBaseline =
+    vertical === 1
+      ? at.y + 10
+      : vertical === -1
+        ? at.y - (n - 1) * LABEL_LINE_HEIGHT - 2
+        : at.y + 4 - ((n - 1) * LABEL_LINE_HEIGHT) / 2;
   const width = Math.max(...lines.map((l) => estimateTextWidth(l.text, LABEL_FONT_SIZE, l.tone === 'motor')));
   const left = anchor === 'start' ? at.x : anchor === 'end' ? at.x - width : at.x - width / 2;
   // Ascent and descent of the face at 12 px (measured in Chromium), plus the 1.5-unit paper halo.
   const halo = 1.5;
-  const box = { left: left - halo, right: left + width + halo, top: firstBaseline - 11 - halo, bottom: firstBaseline + (n - 1) * LABEL_LINE_HEIGHT + 4 + halo };
+  const box = {
+    left: left - halo,
+    right: left + width + halo,
+    top: firstBaseline - 11 - halo,
+    bottom: firstBaseline + (n - 1) * LABEL_LINE_HEIGHT + 4 + halo,
+  };
   return { ...placement, lines, firstBaseline, box };
 }
 
@@ -100,15 +119,29 @@ function overlaps(a: Box, b: Box): boolean {
  * clear of the forward mark in the top-left corner.
  */
 export function labelRoom(width: number, height: number): { inside: Box; keepOut: Box[] } {
-  return { inside: { left: 4, right: width - 4, top: 4, bottom: height - 30 }, keepOut: [{ left: 8, right: 100, top: 0, bottom: 46 }] };
+  return {
+    inside: { left: 4, right: width - 4, top: 4, bottom: height - 30 },
+    keepOut: [{ left: 8, right: 100, top: 0, bottom: 46 }],
+  };
 }
 
 function fitsRoom(box: Box, room: ReturnType<typeof labelRoom>): boolean {
   const { inside, keepOut } = room;
-  return box.left >= inside.left && box.right <= inside.right && box.top >= inside.top && box.bottom <= inside.bottom && !keepOut.some((k) => overlaps(box, k));
+  return (
+    box.left >= inside.left &&
+    box.right <= inside.right &&
+    box.top >= inside.top &&
+    box.bottom <= inside.bottom &&
+    !keepOut.some((k) => overlaps(box, k))
+  );
 }
 
-function placeAt(wheels: WheelLike[], base: DrawingFrame, scale: number, linesFor: (wheel: WheelLike) => LabelLine[]): FittedDrawing {
+function placeAt(
+  wheels: WheelLike[],
+  base: DrawingFrame,
+  scale: number,
+  linesFor: (wheel: WheelLike) => LabelLine[],
+): FittedDrawing {
   const frame = { ...base, scale, gridMm: niceNumber(22 / scale), scaleBarMm: niceNumber(96 / scale) };
   const shapes = wheels.map((w) => wheelShape(w, scale, frame.origin));
   const labels = shapes.map((shape) => layoutLabel(labelPlacement(shape, frame.origin), linesFor(shape.wheel)));
@@ -121,7 +154,12 @@ function placeAt(wheels: WheelLike[], base: DrawingFrame, scale: number, linesFo
  * edge or over the forward mark and the scale bar. The drawing's size never changes, so typing a
  * longer motor name does not move the page.
  */
-export function fitDrawing(wheels: WheelLike[], width: number, height: number, linesFor: (wheel: WheelLike) => LabelLine[]): FittedDrawing {
+export function fitDrawing(
+  wheels: WheelLike[],
+  width: number,
+  height: number,
+  linesFor: (wheel: WheelLike) => LabelLine[],
+): FittedDrawing {
   const base = drawingFrame(wheels, width, height);
   const room = labelRoom(width, height);
   const smallest = base.scale * 0.3;

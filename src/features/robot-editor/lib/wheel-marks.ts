@@ -80,7 +80,8 @@ export function treadLines(hl: number, hw: number, pitch: number): Segment[] {
   const out: Segment[] = [];
   const n = Math.max(1, Math.floor((2 * hl * 0.9) / pitch));
   const start = -((n - 1) * pitch) / 2;
-  for (let k = 0; k < n; k += 1) out.push({ u1: start + k * pitch, v1: -hw * 0.7, u2: start + k * pitch, v2: hw * 0.7 });
+  for (let k = 0; k < n; k += 1)
+    out.push({ u1: start + k * pitch, v1: -hw * 0.7, u2: start + k * pitch, v2: hw * 0.7 });
   return out;
 }
 
@@ -89,9 +90,15 @@ export function treadLines(hl: number, hw: number, pitch: number): Segment[] {
  * angle (capsules along the rim when γ is 0, slanted lines otherwise); plain wheels and
  * tracks show tread.
  */
-export function wheelMarks(kind: WheelKind, rollerAngleDeg: number, hl: number, hw: number): { style: 'hatch' | 'caps' | 'tread'; segments: Segment[] } {
+export function wheelMarks(
+  kind: WheelKind,
+  rollerAngleDeg: number,
+  hl: number,
+  hw: number,
+): { style: 'hatch' | 'caps' | 'tread'; segments: Segment[] } {
   if (kind === 'fixed') return { style: 'tread', segments: treadLines(hl, hw, Math.max(hl / 4, 3)) };
   if (kind === 'track') return { style: 'tread', segments: treadLines(hl, hw, Math.max(hl / 10, 3)) };
-  if (Math.abs(rollerAngleDeg) >= 1) return { style: 'hatch', segments: mecanumRollerLines(rollerAngleDeg, hl, hw, kind === 'omni-track' ? 15 : 7) };
+  if (Math.abs(rollerAngleDeg) >= 1)
+    return { style: 'hatch', segments: mecanumRollerLines(rollerAngleDeg, hl, hw, kind === 'omni-track' ? 15 : 7) };
   return { style: 'caps', segments: omniRollerCaps(hl, hw, kind === 'omni-track' ? 7 : 3) };
 }

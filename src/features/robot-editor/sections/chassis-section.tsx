@@ -20,7 +20,11 @@ export function ChassisSection({ config, onChange, canEdit, validConfig, fieldEr
             <LayoutPanel />
             <MotorTable />
           </div>
-          <Panel title="Top view" titleId="top-view-title" description="To scale; forward is up. Arrows: where each wheel pushes for a positive command.">
+          <Panel
+            title="Top view"
+            titleId="top-view-title"
+            description="To scale; forward is up. Arrows: where each wheel pushes for a positive command."
+          >
             <ChassisDrawing wheels={engineConfig.chassis.wheels} highlightMotor={highlightMotor} />
           </Panel>
         </div>

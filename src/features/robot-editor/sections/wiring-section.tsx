@@ -37,7 +37,12 @@ export function WiringSection({ robot, head, config, onChange, problems, canEdit
           <div className="flex flex-wrap items-start justify-between gap-3 border-t border-rule pt-3">
             <AssignPinsBar config={config} canEdit={canEdit} onChange={onChange} />
             <div className="flex flex-col items-end gap-1">
-              <Link to={wiringSheetPath(robot.teamId, robot.id, head.number)} target="_blank" rel="noopener" className={buttonClasses('secondary')}>
+              <Link
+                to={wiringSheetPath(robot.teamId, robot.id, head.number)}
+                target="_blank"
+                rel="noopener"
+                className={buttonClasses('secondary')}
+              >
                 Print wiring sheet
               </Link>
               <span className="max-w-64 text-right text-xs text-ink-muted">
@@ -49,20 +54,45 @@ export function WiringSection({ robot, head, config, onChange, problems, canEdit
         <WiringProblemList problems={model.wiringProblems} />
         <div className="grid items-start gap-4 @4xl:grid-cols-[minmax(0,1.4fr)_minmax(21rem,1fr)]">
           <div className="min-w-0 space-y-4">
-            <DriversPanel config={config} demands={model.robotDemands} advice={model.advice} onChange={onChange} {...shared} />
+            <DriversPanel
+              config={config}
+              demands={model.robotDemands}
+              advice={model.advice}
+              onChange={onChange}
+              {...shared}
+            />
             <InputPinsPanel config={config} demands={model.robotDemands} {...shared} />
-            {hasRemote && <RemotePinsPanel config={config} demands={model.remoteDemands} onChange={onChange} {...shared} />}
+            {hasRemote && (
+              <RemotePinsPanel config={config} demands={model.remoteDemands} onChange={onChange} {...shared} />
+            )}
             <ExtraPinsPanel demands={model.robotDemands} {...shared} />
           </div>
-          <aside aria-labelledby="wiring-pins-title" className="rounded-lg border border-rule bg-paper-raised @4xl:sticky @4xl:top-4">
+          <aside
+            aria-labelledby="wiring-pins-title"
+            className="rounded-lg border border-rule bg-paper-raised @4xl:sticky @4xl:top-4"
+          >
             <header className="flex flex-wrap items-center justify-between gap-2 border-b border-rule px-4 py-2">
               <h2 id="wiring-pins-title" className="text-base font-semibold">
                 {side === 'robot' ? model.board.name : `Remote: ${model.remoteBoard.name}`}
               </h2>
               {hasRemote && (
-                <div role="radiogroup" aria-label="Which board" className="flex rounded-md border border-rule-strong text-xs">
+                <div
+                  role="radiogroup"
+                  aria-label="Which board"
+                  className="flex rounded-md border border-rule-strong text-xs"
+                >
                   {(['robot', 'remote'] as const).map((s) => (
-                    <button key={s} type="button" role="radio" aria-checked={side === s} onClick={() => setPinSide(s)} className={cx('px-2 py-1 font-semibold first:rounded-l-md last:rounded-r-md', side === s ? 'bg-ink text-paper' : 'text-ink-soft hover:bg-paper-sunken')}>
+                    <button
+                      key={s}
+                      type="button"
+                      role="radio"
+                      aria-checked={side === s}
+                      onClick={() => setPinSide(s)}
+                      className={cx(
+                        'px-2 py-1 font-semibold first:rounded-l-md last:rounded-r-md',
+                        side === s ? 'bg-ink text-paper' : 'text-ink-soft hover:bg-paper-sunken',
+                      )}
+                    >
                       {s === 'robot' ? 'Robot' : 'Remote'}
                     </button>
                   ))}

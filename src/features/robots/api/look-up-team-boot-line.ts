@@ -4,10 +4,16 @@ import type { BootLineInput, TeamBootLineAnswer } from '@shared/schemas/history'
 import { robotKeys } from './robot-keys';
 
 export function lookUpTeamBootLine(teamId: string, input: BootLineInput): Promise<TeamBootLineAnswer> {
-  return apiRequest<TeamBootLineAnswer>(`/teams/${encodeURIComponent(teamId)}/boot-line`, { method: 'POST', body: input });
+  return apiRequest<TeamBootLineAnswer>(`/teams/${encodeURIComponent(teamId)}/boot-line`, {
+    method: 'POST',
+    body: input,
+  });
 }
 
 /** A question, not a change: nothing to refresh afterwards. */
 export function useLookUpTeamBootLine(teamId: string) {
-  return useMutation({ mutationKey: robotKeys.teamBootLine(teamId), mutationFn: (input: BootLineInput) => lookUpTeamBootLine(teamId, input) });
+  return useMutation({
+    mutationKey: robotKeys.teamBootLine(teamId),
+    mutationFn: (input: BootLineInput) => lookUpTeamBootLine(teamId, input),
+  });
 }

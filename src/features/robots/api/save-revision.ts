@@ -15,7 +15,9 @@ export function useSaveRevision(robotId: string) {
     mutationFn: (input: SaveRevisionInput) => saveRevision(robotId, input),
     onSuccess: (revision) => {
       queryClient.setQueryData<RobotDetail>(robotKeys.detail(robotId), (old) =>
-        old ? { robot: { ...old.robot, headRevision: revision.number, updatedAt: revision.createdAt }, head: revision } : old,
+        old
+          ? { robot: { ...old.robot, headRevision: revision.number, updatedAt: revision.createdAt }, head: revision }
+          : old,
       );
       queryClient.setQueryData(robotKeys.revision(robotId, revision.number), revision);
       void queryClient.invalidateQueries({ queryKey: robotKeys.revisions(robotId), exact: true });

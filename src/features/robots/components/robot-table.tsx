@@ -18,7 +18,14 @@ import { Link } from 'react-router';
 import { cx } from '@/components/ui/cx';
 import { formatDate } from '@/lib/format';
 import type { RobotListItem } from '@shared/schemas/robots';
-import { boardLabel, boardName, layoutLabel, problemWords, robotFilterMatches, type RobotFilter } from '../lib/robot-list-words';
+import {
+  boardLabel,
+  boardName,
+  layoutLabel,
+  problemWords,
+  robotFilterMatches,
+  type RobotFilter,
+} from '../lib/robot-list-words';
 import { RobotTableFilters } from './robot-table-filters';
 
 const features = tableFeatures({
@@ -39,7 +46,8 @@ const byProblems: SortFn<Features, RobotListItem> = (a, b) => {
   return weight(a.original) - weight(b.original);
 };
 
-const byStatus: FilterFn<Features, RobotListItem> = (row, _id, filter: RobotFilter) => robotFilterMatches(row.original, filter);
+const byStatus: FilterFn<Features, RobotListItem> = (row, _id, filter: RobotFilter) =>
+  robotFilterMatches(row.original, filter);
 
 const searchAll: FilterFn<Features, RobotListItem> = (row, _id, text: string) => {
   const r = row.original;
@@ -54,9 +62,19 @@ const columns = helper.columns([
     cell: (info) => (
       <span className="inline-flex items-center gap-2">
         {info.row.original.photoUrl && (
-          <img src={info.row.original.photoUrl} alt="" width={32} height={32} loading="lazy" className="size-8 rounded border border-rule object-cover" />
+          <img
+            src={info.row.original.photoUrl}
+            alt=""
+            width={32}
+            height={32}
+            loading="lazy"
+            className="size-8 rounded border border-rule object-cover"
+          />
         )}
-        <Link to={`robots/${info.row.original.id}`} className="font-semibold text-accent-strong underline-offset-2 hover:underline">
+        <Link
+          to={`robots/${info.row.original.id}`}
+          className="font-semibold text-accent-strong underline-offset-2 hover:underline"
+        >
           {info.getValue()}
         </Link>
       </span>
@@ -136,7 +154,10 @@ export function RobotTable({ robots, teamName }: { robots: RobotListItem[]; team
                       key={header.id}
                       scope="col"
                       aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : 'none'}
-                      className={cx('px-3 py-1.5 font-semibold whitespace-nowrap first:pl-0 last:pr-0', header.column.id === 'headRevision' && 'text-right')}
+                      className={cx(
+                        'px-3 py-1.5 font-semibold whitespace-nowrap first:pl-0 last:pr-0',
+                        header.column.id === 'headRevision' && 'text-right',
+                      )}
                     >
                       <button
                         type="button"
@@ -156,7 +177,13 @@ export function RobotTable({ robots, teamName }: { robots: RobotListItem[]; team
             {rows.map((row) => (
               <tr key={row.id} className="hover:bg-paper/70">
                 {row.getAllCells().map((cell) => (
-                  <td key={cell.id} className={cx('px-3 py-2.5 align-middle first:pl-0 last:pr-0', cell.column.id === 'headRevision' && 'text-right')}>
+                  <td
+                    key={cell.id}
+                    className={cx(
+                      'px-3 py-2.5 align-middle first:pl-0 last:pr-0',
+                      cell.column.id === 'headRevision' && 'text-right',
+                    )}
+                  >
                     <table.FlexRender cell={cell} />
                   </td>
                 ))}
@@ -165,7 +192,9 @@ export function RobotTable({ robots, teamName }: { robots: RobotListItem[]; team
           </tbody>
         </table>
       </div>
-      {rows.length === 0 && <p className="py-4 text-center text-sm text-ink-muted">No robot matches the search and filter.</p>}
+      {rows.length === 0 && (
+        <p className="py-4 text-center text-sm text-ink-muted">No robot matches the search and filter.</p>
+      )}
     </div>
   );
 }
@@ -186,7 +215,9 @@ function FlashCell({ robot }: { robot: RobotListItem }) {
       <span className="font-mono">r{robot.lastFlash.revisionNumber}</span>
       <span className="text-ink-muted"> · {formatDate(robot.lastFlash.flashedAt)}</span>
       {behind && (
-        <span className="ml-2 rounded border border-warn/30 bg-warn-soft px-1.5 py-0.5 text-xs font-semibold text-warn-strong">behind head</span>
+        <span className="ml-2 rounded border border-warn/30 bg-warn-soft px-1.5 py-0.5 text-xs font-semibold text-warn-strong">
+          behind head
+        </span>
       )}
     </span>
   );

@@ -13,15 +13,21 @@ import { useLookUpTeamBootLine } from '../api/look-up-team-boot-line';
 
 type Values = z.input<typeof BootLineInputSchema>;
 
-const historyPath = (teamId: string, robotId: string) => `/teams/${encodeURIComponent(teamId)}/robots/${encodeURIComponent(robotId)}/history`;
+const historyPath = (teamId: string, robotId: string) =>
+  `/teams/${encodeURIComponent(teamId)}/robots/${encodeURIComponent(robotId)}/history`;
 const linkClasses = 'font-semibold text-accent-strong underline underline-offset-2 hover:no-underline';
 
 function RevisionLine({ answer }: { answer: NonNullable<TeamBootLineAnswer['answer']> }) {
-  if (!answer.match) return <p className="text-sm font-semibold text-error-strong">No saved revision has this configuration.</p>;
+  if (!answer.match)
+    return <p className="text-sm font-semibold text-error-strong">No saved revision has this configuration.</p>;
   return (
     <p className="flex flex-wrap items-center gap-1.5 text-sm">
       <span className="font-mono font-semibold">revision {answer.match.number}</span>
-      {answer.match.isHead ? <Badge tone="accent">head</Badge> : <Badge tone="warn">behind head r{answer.headRevision}</Badge>}
+      {answer.match.isHead ? (
+        <Badge tone="accent">head</Badge>
+      ) : (
+        <Badge tone="warn">behind head r{answer.headRevision}</Badge>
+      )}
     </p>
   );
 }
@@ -30,16 +36,25 @@ function Answer({ teamId, result }: { teamId: string; result: TeamBootLineAnswer
   const { robot, answer } = result;
   if (!robot || !answer) {
     return (
-      <div role="status" className="rounded-md border border-error/30 bg-error-soft px-3 py-2 text-sm text-error-strong">
+      <div
+        role="status"
+        className="rounded-md border border-error/30 bg-error-soft px-3 py-2 text-sm text-error-strong"
+      >
         {result.verdict}
       </div>
     );
   }
   const settled = answer.match && answer.nameMatches;
-  const tone = settled ? (answer.match!.isHead ? 'border-accent/40 bg-accent-soft' : 'border-warn/40 bg-warn-soft') : 'border-error/30 bg-error-soft';
+  const tone = settled
+    ? answer.match!.isHead
+      ? 'border-accent/40 bg-accent-soft'
+      : 'border-warn/40 bg-warn-soft'
+    : 'border-error/30 bg-error-soft';
   return (
     <div role="status" className={`space-y-1.5 rounded-md border px-3 py-2 ${tone}`}>
-      <p className="text-xs font-semibold tracking-wide text-ink-muted uppercase">{result.foundBy === 'hash' ? 'Found by configuration hash' : 'Found by name only'}</p>
+      <p className="text-xs font-semibold tracking-wide text-ink-muted uppercase">
+        {result.foundBy === 'hash' ? 'Found by configuration hash' : 'Found by name only'}
+      </p>
       <p>
         <Link to={historyPath(teamId, robot.id)} className={linkClasses}>
           {robot.name}
@@ -80,7 +95,11 @@ export function WhichRobotPanel({ teamId }: { teamId: string }) {
   const onSubmit = submitWithServerErrors(form, ['line'], (values) => lookUp.mutateAsync(values));
 
   return (
-    <Panel title="Which robot is this?" titleId="which-robot-title" description="Paste the line a robot prints on the serial monitor at start-up.">
+    <Panel
+      title="Which robot is this?"
+      titleId="which-robot-title"
+      description="Paste the line a robot prints on the serial monitor at start-up."
+    >
       <form onSubmit={onSubmit} noValidate className="flex flex-col gap-3">
         <FormError message={errors.root?.server?.message} />
         <TextAreaField

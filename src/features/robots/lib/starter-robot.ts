@@ -16,7 +16,13 @@ export const NewRobotFormSchema = z.object({
 export type NewRobotForm = z.infer<typeof NewRobotFormSchema>;
 
 /** What the form offers first: a small three-wheel robot whose parts fit and wire up cleanly. */
-export const NEW_ROBOT_DEFAULTS: NewRobotForm = { name: '', layout: 'trio-omni', board: 'nano', input: 'ppm', driver: 'pwm-in1-in2-stby' };
+export const NEW_ROBOT_DEFAULTS: NewRobotForm = {
+  name: '',
+  layout: 'trio-omni',
+  board: 'nano',
+  input: 'ppm',
+  driver: 'pwm-in1-in2-stby',
+};
 
 export interface StarterRobot {
   config: RobotConfig;
@@ -28,9 +34,16 @@ export interface StarterRobot {
 
 /** A starter configuration with its pins placed automatically when a plan exists. */
 export function starterRobot(form: Omit<NewRobotForm, 'name'> & { name?: string }): StarterRobot {
-  const starter = buildStarterConfig({ layout: form.layout, board: form.board, input: form.input, driver: form.driver, name: form.name || undefined });
+  const starter = buildStarterConfig({
+    layout: form.layout,
+    board: form.board,
+    input: form.input,
+    driver: form.driver,
+    name: form.name || undefined,
+  });
   const placed = assignPins(starter);
   const from = `Started from the ${LAYOUT_LABELS[form.layout]} starter layout`;
-  if (placed.ok) return { config: placed.config, pins: { placed: true }, message: `${from}; pins placed automatically` };
+  if (placed.ok)
+    return { config: placed.config, pins: { placed: true }, message: `${from}; pins placed automatically` };
   return { config: starter, pins: { placed: false, reason: placed.reason }, message: `${from}; pins left unassigned` };
 }

@@ -8,7 +8,11 @@ export async function getInvitationPreview(token: string): Promise<InvitationPre
 }
 
 export const invitationPreviewQueryOptions = (token: string) =>
-  queryOptions({ queryKey: teamKeys.invitationPreview(token), queryFn: () => getInvitationPreview(token), retry: false });
+  queryOptions({
+    queryKey: teamKeys.invitationPreview(token),
+    queryFn: () => getInvitationPreview(token),
+    retry: false,
+  });
 
 export function useInvitationPreview(token: string) {
   return useQuery(invitationPreviewQueryOptions(token));

@@ -4,7 +4,8 @@ import type { PendingInvitation } from '@shared/schemas/teams';
 import { teamKeys } from './team-keys';
 
 export async function getInvitations(teamId: string): Promise<PendingInvitation[]> {
-  return (await apiRequest<{ invitations: PendingInvitation[] }>(`/teams/${encodeURIComponent(teamId)}/invitations`)).invitations;
+  return (await apiRequest<{ invitations: PendingInvitation[] }>(`/teams/${encodeURIComponent(teamId)}/invitations`))
+    .invitations;
 }
 
 export const invitationsQueryOptions = (teamId: string) =>

@@ -60,7 +60,10 @@ export function ActivityList({ events }: { events: TeamActivity[] }) {
       {events.map((event) => (
         <li key={event.id} className="flex flex-wrap items-baseline justify-between gap-x-4 gap-y-0.5 py-2.5">
           <span>
-            <span className="font-semibold">{event.actorName ?? (event.action === 'robot.purged' ? 'Mixwright' : 'Someone')}</span> {describeActivity(event)}
+            <span className="font-semibold">
+              {event.actorName ?? (event.action === 'robot.purged' ? 'Mixwright' : 'Someone')}
+            </span>{' '}
+            {describeActivity(event)}
           </span>
           <time dateTime={event.createdAt} title={formatDateTime(event.createdAt)} className="text-sm text-ink-muted">
             {formatAgo(event.createdAt)}

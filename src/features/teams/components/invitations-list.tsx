@@ -13,7 +13,8 @@ export function InvitationsList({ teamId }: { teamId: string }) {
   const revoke = useRevokeInvitation(teamId);
 
   if (invitations.isPending) return <LoadingState label="Loading invitations…" />;
-  if (invitations.isError) return <ErrorState message={errorMessage(invitations.error)} onRetry={() => invitations.refetch()} />;
+  if (invitations.isError)
+    return <ErrorState message={errorMessage(invitations.error)} onRetry={() => invitations.refetch()} />;
   if (invitations.data.length === 0) return <p className="text-sm text-ink-muted">No open invitations.</p>;
 
   return (

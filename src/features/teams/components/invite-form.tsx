@@ -12,7 +12,10 @@ import { useInviteMember } from '../api/invite-member';
 
 type Values = z.input<typeof InviteMemberInputSchema>;
 
-const roleOptions = ROLES.map((role) => ({ value: role, label: `${role[0].toUpperCase()}${role.slice(1)} — ${ROLE_SUMMARIES[role].toLowerCase()}` }));
+const roleOptions = ROLES.map((role) => ({
+  value: role,
+  label: `${role[0].toUpperCase()}${role.slice(1)} — ${ROLE_SUMMARIES[role].toLowerCase()}`,
+}));
 
 export function InviteForm({ teamId }: { teamId: string }) {
   const invite = useInviteMember(teamId);
@@ -35,7 +38,13 @@ export function InviteForm({ teamId }: { teamId: string }) {
       <FormError message={errors.root?.server?.message} />
       <FormNotice message={sentTo ? `Invitation sent to ${sentTo}. The link works once, for 7 days.` : undefined} />
       <div className="grid gap-3 sm:grid-cols-[1fr_minmax(0,18rem)]">
-        <TextField label="E-mail address" type="email" autoComplete="off" error={errors.email?.message} {...form.register('email')} />
+        <TextField
+          label="E-mail address"
+          type="email"
+          autoComplete="off"
+          error={errors.email?.message}
+          {...form.register('email')}
+        />
         <SelectField label="Role" options={roleOptions} error={errors.role?.message} {...form.register('role')} />
       </div>
       <Button type="submit" busy={form.formState.isSubmitting} className="self-start">

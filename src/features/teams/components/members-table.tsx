@@ -28,7 +28,9 @@ export function MembersTable({ teamId, teamName, members, myRole, myUserId }: Pr
 
   function onRemove(member: TeamMember) {
     const leaving = member.userId === myUserId;
-    const question = leaving ? `Leave ${teamName}? You will lose access to its robots.` : `Remove ${member.name} from ${teamName}?`;
+    const question = leaving
+      ? `Leave ${teamName}? You will lose access to its robots.`
+      : `Remove ${member.name} from ${teamName}?`;
     if (!window.confirm(question)) return;
     remove.mutate(member.userId, { onSuccess: () => (leaving ? navigate('/teams') : undefined) });
   }
@@ -65,7 +67,9 @@ export function MembersTable({ teamId, teamName, members, myRole, myUserId }: Pr
                       className={cx(inputClasses, 'w-28 border-rule-strong py-1 text-sm')}
                       value={member.role}
                       disabled={changeRole.isPending}
-                      onChange={(event) => changeRole.mutate({ userId: member.userId, role: event.target.value as Role })}
+                      onChange={(event) =>
+                        changeRole.mutate({ userId: member.userId, role: event.target.value as Role })
+                      }
                     >
                       {ROLES.map((role) => (
                         <option key={role} value={role}>

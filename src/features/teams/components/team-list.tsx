@@ -16,8 +16,10 @@ export function TeamList({ teams }: { teams: TeamSummary[] }) {
               <Badge tone={team.role === 'owner' ? 'accent' : 'neutral'}>{team.role}</Badge>
             </span>
             <span className="text-sm text-ink-muted">
-              <span className="font-mono text-ink-soft">{team.robotCount}</span> {team.robotCount === 1 ? 'robot' : 'robots'} ·{' '}
-              <span className="font-mono text-ink-soft">{team.memberCount}</span> {team.memberCount === 1 ? 'member' : 'members'}
+              <span className="font-mono text-ink-soft">{team.robotCount}</span>{' '}
+              {team.robotCount === 1 ? 'robot' : 'robots'} ·{' '}
+              <span className="font-mono text-ink-soft">{team.memberCount}</span>{' '}
+              {team.memberCount === 1 ? 'member' : 'members'}
             </span>
           </Link>
         </li>

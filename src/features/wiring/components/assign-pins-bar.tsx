@@ -15,7 +15,15 @@ const sameConfig = (a: RobotConfig, b: RobotConfig) => a === b || JSON.stringify
  * "Assign free pins": fills every unlocked role with the pin plan's search, keeping locked pins,
  * then lists what moved. Undo puts the pins back while nothing else has been edited since.
  */
-export function AssignPinsBar({ config, canEdit, onChange }: { config: RobotConfig; canEdit: boolean; onChange: (next: RobotConfig) => void }) {
+export function AssignPinsBar({
+  config,
+  canEdit,
+  onChange,
+}: {
+  config: RobotConfig;
+  canEdit: boolean;
+  onChange: (next: RobotConfig) => void;
+}) {
   const [outcome, setOutcome] = useState<Outcome | null>(null);
   const run = () => {
     const result = assignPins(config);
@@ -44,18 +52,25 @@ export function AssignPinsBar({ config, canEdit, onChange }: { config: RobotConf
       </div>
       <div aria-live="polite">
         {outcome?.kind === 'failed' && (
-          <p role="alert" className="rounded-md border border-error/30 bg-error-soft px-3 py-2 text-sm text-error-strong">
+          <p
+            role="alert"
+            className="rounded-md border border-error/30 bg-error-soft px-3 py-2 text-sm text-error-strong"
+          >
             No pins were changed. {outcome.reason}
           </p>
         )}
         {outcome?.kind === 'done' && (
-          <div role="status" className="rounded-md border border-accent/30 bg-accent-soft px-3 py-2 text-sm text-accent-strong">
+          <div
+            role="status"
+            className="rounded-md border border-accent/30 bg-accent-soft px-3 py-2 text-sm text-accent-strong"
+          >
             {outcome.changes.length === 0 ? (
               'Every role already had a suitable pin; nothing changed.'
             ) : (
               <>
                 <p className="font-semibold">
-                  {outcome.changes.length} pin{outcome.changes.length === 1 ? '' : 's'} assigned{sameConfig(config, outcome.after) ? '' : ' (edited since, so it can no longer be undone)'}:
+                  {outcome.changes.length} pin{outcome.changes.length === 1 ? '' : 's'} assigned
+                  {sameConfig(config, outcome.after) ? '' : ' (edited since, so it can no longer be undone)'}:
                 </p>
                 <ul className="mt-1 columns-2 gap-6 font-mono text-[13px] text-ink">
                   {outcome.changes.map((c) => (

@@ -10,12 +10,25 @@ import { fieldDomId } from '../lib/wiring-problems';
 export function boardFacts(board: BoardProfile): string {
   const pwm = board.pins.filter((p) => p.pwm && p.onHeader).length;
   const units = board.pwmUnits;
-  const pwmWords = units.kind === 'avr-timers' ? `${pwm} PWM pins on ${board.timers.length} timers` : units.kind === 'ledc' ? `PWM on ${pwm} pins through ${units.channels} LEDC channels` : `PWM on every pin, ${units.slices} slices × 2 channels`;
+  const pwmWords =
+    units.kind === 'avr-timers'
+      ? `${pwm} PWM pins on ${board.timers.length} timers`
+      : units.kind === 'ledc'
+        ? `PWM on ${pwm} pins through ${units.channels} LEDC channels`
+        : `PWM on every pin, ${units.slices} slices × 2 channels`;
   return `${board.mcu} · ${board.logicVolts} V logic${board.fiveVoltTolerant ? '' : ', not 5 V tolerant'} · ${pwmWords}`;
 }
 
 /** The robot's board. A change keeps every role and clears only pins the new board lacks, and says so. */
-export function BoardChooser({ config, canEdit, onChange }: { config: RobotConfig; canEdit: boolean; onChange: (next: RobotConfig) => void }) {
+export function BoardChooser({
+  config,
+  canEdit,
+  onChange,
+}: {
+  config: RobotConfig;
+  canEdit: boolean;
+  onChange: (next: RobotConfig) => void;
+}) {
   const [message, setMessage] = useState<string | null>(null);
   const id = fieldDomId(['wiring', 'board']);
   const board = getBoard(config.wiring.board);
@@ -30,7 +43,14 @@ export function BoardChooser({ config, canEdit, onChange }: { config: RobotConfi
         <label htmlFor={id} className="text-sm font-semibold text-ink-soft">
           Board
         </label>
-        <select id={id} data-field="wiring.board" value={config.wiring.board} disabled={!canEdit} onChange={(e) => choose(e.target.value as BoardId)} className="h-9 rounded-md border border-rule-strong bg-paper-raised px-2 font-semibold text-ink disabled:bg-paper-sunken">
+        <select
+          id={id}
+          data-field="wiring.board"
+          value={config.wiring.board}
+          disabled={!canEdit}
+          onChange={(e) => choose(e.target.value as BoardId)}
+          className="h-9 rounded-md border border-rule-strong bg-paper-raised px-2 font-semibold text-ink disabled:bg-paper-sunken"
+        >
           {BOARD_IDS.map((b) => (
             <option key={b} value={b}>
               {BOARDS[b].name}
@@ -40,7 +60,10 @@ export function BoardChooser({ config, canEdit, onChange }: { config: RobotConfi
         <span className="text-sm text-ink-muted">{boardFacts(board)}</span>
       </div>
       {message && (
-        <p role="status" className="rounded-md border border-accent/30 bg-accent-soft px-3 py-1.5 text-sm text-accent-strong">
+        <p
+          role="status"
+          className="rounded-md border border-accent/30 bg-accent-soft px-3 py-1.5 text-sm text-accent-strong"
+        >
           {message}
         </p>
       )}

@@ -88,15 +88,39 @@ export function BoardPinList({ board, side, demands, problems, roleLabel }: Boar
         </p>
         <div role="radiogroup" aria-label="Show pins" className="flex rounded-md border border-rule-strong text-xs">
           {FILTERS.map((f) => (
-            <button key={f.id} type="button" role="radio" aria-checked={filter === f.id} onClick={() => setFilter(f.id)} className={cx('px-2 py-1 font-semibold first:rounded-l-md last:rounded-r-md', filter === f.id ? 'bg-ink text-paper' : 'text-ink-soft hover:bg-paper-sunken')}>
+            <button
+              key={f.id}
+              type="button"
+              role="radio"
+              aria-checked={filter === f.id}
+              onClick={() => setFilter(f.id)}
+              className={cx(
+                'px-2 py-1 font-semibold first:rounded-l-md last:rounded-r-md',
+                filter === f.id ? 'bg-ink text-paper' : 'text-ink-soft hover:bg-paper-sunken',
+              )}
+            >
               {f.label}
             </button>
           ))}
         </div>
       </div>
-      <ul aria-label={`${board.name} pins (arrow keys move between pins)`} onKeyDown={moveFocus} className="mt-2 divide-y divide-rule border-y border-rule">
+      <ul
+        aria-label={`${board.name} pins (arrow keys move between pins)`}
+        onKeyDown={moveFocus}
+        className="mt-2 divide-y divide-rule border-y border-rule"
+      >
         {shown.map((pin) => (
-          <PinRow key={pin.id} board={board} side={side} pin={pin} roles={rolesOn(pin)} problems={pinProblems(pin)} roleLabel={roleLabel} tabbable={pin.id === (active ?? shown[0]?.id)} onActive={() => setActive(pin.id)} />
+          <PinRow
+            key={pin.id}
+            board={board}
+            side={side}
+            pin={pin}
+            roles={rolesOn(pin)}
+            problems={pinProblems(pin)}
+            roleLabel={roleLabel}
+            tabbable={pin.id === (active ?? shown[0]?.id)}
+            onActive={() => setActive(pin.id)}
+          />
         ))}
         {shown.length === 0 && <li className="py-3 text-sm text-ink-muted">No pin matches.</li>}
       </ul>
@@ -142,15 +166,27 @@ function PinRow({ board, side, pin, roles, problems, roleLabel, tabbable, onActi
       className={cx(
         'relative grid grid-cols-[6.5rem_1fr] gap-x-2 py-1.5 pr-1 pl-3 outline-offset-[-2px] transition-colors',
         lit && 'bg-accent-soft',
-        pin.flash && 'bg-[repeating-linear-gradient(135deg,transparent_0_6px,var(--color-grid)_6px_8px)] text-ink-faint',
+        pin.flash &&
+          'bg-[repeating-linear-gradient(135deg,transparent_0_6px,var(--color-grid)_6px_8px)] text-ink-faint',
       )}
     >
       <span
         aria-hidden="true"
-        className={cx('absolute top-1 bottom-1 left-0 w-1 rounded-r', state === 'error' ? 'bg-error' : state === 'warning' ? 'bg-warn' : state === 'used' ? 'bg-accent' : 'bg-transparent')}
+        className={cx(
+          'absolute top-1 bottom-1 left-0 w-1 rounded-r',
+          state === 'error'
+            ? 'bg-error'
+            : state === 'warning'
+              ? 'bg-warn'
+              : state === 'used'
+                ? 'bg-accent'
+                : 'bg-transparent',
+        )}
       />
       <div className="leading-tight">
-        <span className={cx('block font-mono text-[15px] font-medium', pin.flash ? 'text-ink-faint' : 'text-ink')}>{pin.id}</span>
+        <span className={cx('block font-mono text-[15px] font-medium', pin.flash ? 'text-ink-faint' : 'text-ink')}>
+          {pin.id}
+        </span>
         <span className="block font-mono text-[11px] text-ink-muted">
           {pin.label !== pin.id && pin.label !== pin.code && <span title="Printed on the board">“{pin.label}” · </span>}
           <span title="Number the firmware uses">code {pin.code}</span>
@@ -159,7 +195,11 @@ function PinRow({ board, side, pin, roles, problems, roleLabel, tabbable, onActi
       <div className="min-w-0">
         <div className="flex flex-wrap gap-1">
           {abilityTags(board, pin).map((tag) => (
-            <span key={tag.text} title={tag.title} className={cx('rounded border px-1 py-px font-mono text-[11px] leading-4', TONE[tag.tone])}>
+            <span
+              key={tag.text}
+              title={tag.title}
+              className={cx('rounded border px-1 py-px font-mono text-[11px] leading-4', TONE[tag.tone])}
+            >
               {tag.text}
             </span>
           ))}
@@ -167,7 +207,12 @@ function PinRow({ board, side, pin, roles, problems, roleLabel, tabbable, onActi
         {roles.length > 0 && (
           <p className="mt-0.5 flex flex-wrap gap-x-2 text-[13px]">
             {roles.map((d) => (
-              <button key={d.key} type="button" onClick={() => showField(roleFieldKey(d))} className="font-semibold text-accent-strong underline decoration-accent/30 underline-offset-2 hover:decoration-accent">
+              <button
+                key={d.key}
+                type="button"
+                onClick={() => showField(roleFieldKey(d))}
+                className="font-semibold text-accent-strong underline decoration-accent/30 underline-offset-2 hover:decoration-accent"
+              >
                 → {roleLabel(d)}
               </button>
             ))}

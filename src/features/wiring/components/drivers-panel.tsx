@@ -37,11 +37,19 @@ export function DriversPanel({ config, advice, ...rest }: DriversPanelProps) {
             Motor drivers
           </h2>
           <p className="text-sm text-ink-muted">
-            {free.length > 0 ? `Not on a driver yet: ${free.map((m) => `“${m}”`).join(', ')}.` : 'Every motor is on a driver channel.'}
+            {free.length > 0
+              ? `Not on a driver yet: ${free.map((m) => `“${m}”`).join(', ')}.`
+              : 'Every motor is on a driver channel.'}
           </p>
         </div>
         {rest.canEdit && (
-          <Button variant="secondary" size="sm" onClick={add} disabled={free.length === 0 || full} title={full ? 'At most 8 drivers' : free.length === 0 ? 'Every motor is on a driver already' : undefined}>
+          <Button
+            variant="secondary"
+            size="sm"
+            onClick={add}
+            disabled={free.length === 0 || full}
+            title={full ? 'At most 8 drivers' : free.length === 0 ? 'Every motor is on a driver already' : undefined}
+          >
             Add driver
           </Button>
         )}

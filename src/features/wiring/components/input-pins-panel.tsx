@@ -17,12 +17,19 @@ export function InputPinsPanel({ config, demands, ...shared }: Shared & { config
   const board = getBoard(config.wiring.board);
   const inputs = demands.filter((d) => d.owner === 'input');
   const notes = [
-    source.serial && `${source.serial.baud} baud, ${source.serial.format}${source.serial.inverted ? ', sent inverted' : ''}.`,
+    source.serial &&
+      `${source.serial.baud} baud, ${source.serial.format}${source.serial.inverted ? ', sent inverted' : ''}.`,
     source.needsPart?.families.includes(board.family) && `Needs ${source.needsPart.part}: ${source.needsPart.reason}.`,
-    source.usesSpi && `The transceiver also takes the SPI bus: ${board.spi.sck} (SCK), ${board.spi.mosi} (MOSI) and ${board.spi.miso} (MISO).`,
+    source.usesSpi &&
+      `The transceiver also takes the SPI bus: ${board.spi.sck} (SCK), ${board.spi.mosi} (MOSI) and ${board.spi.miso} (MISO).`,
   ].filter(Boolean) as string[];
   return (
-    <Panel title={`Input: ${source.name}`} titleId="wiring-input-title" field="wiring.inputPins" description="The input source and its channels are chosen in Controls; here its wires meet the board.">
+    <Panel
+      title={`Input: ${source.name}`}
+      titleId="wiring-input-title"
+      field="wiring.inputPins"
+      description="The input source and its channels are chosen in Controls; here its wires meet the board."
+    >
       {notes.length > 0 && (
         <ul className="mb-2 space-y-0.5 text-sm text-ink-muted">
           {notes.map((n) => (
@@ -36,7 +43,12 @@ export function InputPinsPanel({ config, demands, ...shared }: Shared & { config
 }
 
 /** The handheld remote's board and pins, for the home-made link. */
-export function RemotePinsPanel({ config, demands, onChange, ...shared }: Shared & { config: RobotConfig; demands: PinDemand[]; onChange: (next: RobotConfig) => void }) {
+export function RemotePinsPanel({
+  config,
+  demands,
+  onChange,
+  ...shared
+}: Shared & { config: RobotConfig; demands: PinDemand[]; onChange: (next: RobotConfig) => void }) {
   const [message, setMessage] = useState<string | null>(null);
   const remote = demands.filter((d) => d.owner === 'remote');
   const boardId = config.controls.link.remoteBoard;
@@ -48,12 +60,24 @@ export function RemotePinsPanel({ config, demands, onChange, ...shared }: Shared
     setMessage(boardChangeMessage(change, getBoard(id).shortName, 'remote'));
   };
   return (
-    <Panel title="Handheld remote" titleId="wiring-remote-title" field="controls.link.remotePins" description="The home-made link’s transmitter: its sticks, switches and transceiver.">
+    <Panel
+      title="Handheld remote"
+      titleId="wiring-remote-title"
+      field="controls.link.remotePins"
+      description="The home-made link’s transmitter: its sticks, switches and transceiver."
+    >
       <div className="mb-2 flex flex-wrap items-center gap-2">
         <label htmlFor={selectId} className="text-sm font-semibold text-ink-soft">
           Remote’s board
         </label>
-        <select id={selectId} data-field="controls.link.remoteBoard" value={boardId} disabled={!shared.canEdit} onChange={(e) => choose(e.target.value as BoardId)} className="h-8 rounded-md border border-rule-strong bg-paper-raised px-2 text-sm">
+        <select
+          id={selectId}
+          data-field="controls.link.remoteBoard"
+          value={boardId}
+          disabled={!shared.canEdit}
+          onChange={(e) => choose(e.target.value as BoardId)}
+          className="h-8 rounded-md border border-rule-strong bg-paper-raised px-2 text-sm"
+        >
           {BOARD_IDS.map((id) => (
             <option key={id} value={id}>
               {BOARDS[id].name}
@@ -65,7 +89,10 @@ export function RemotePinsPanel({ config, demands, onChange, ...shared }: Shared
         </span>
       </div>
       {message && (
-        <p role="status" className="mb-2 rounded-md border border-accent/30 bg-accent-soft px-3 py-1.5 text-sm text-accent-strong">
+        <p
+          role="status"
+          className="mb-2 rounded-md border border-accent/30 bg-accent-soft px-3 py-1.5 text-sm text-accent-strong"
+        >
           {message}
         </p>
       )}
@@ -79,7 +106,11 @@ export function ExtraPinsPanel({ demands, ...shared }: Shared & { demands: PinDe
   const extras = demands.filter((d) => d.owner === 'status-led' || d.owner === 'bench-test');
   const labels: Record<string, string> = { 'status-led': 'Status LED', 'bench-test': 'Bench-test switch' };
   return (
-    <Panel title="Status LED and bench test" titleId="wiring-extra-pins-title" description="The LED shows link and arming state. A switch to ground on the bench-test pin, held at power-up, spins each motor in turn with the wheels off the ground.">
+    <Panel
+      title="Status LED and bench test"
+      titleId="wiring-extra-pins-title"
+      description="The LED shows link and arming state. A switch to ground on the bench-test pin, held at power-up, spins each motor in turn with the wheels off the ground."
+    >
       <RolePickers demands={extras} labelOf={(d) => labels[d.owner] ?? roleLabel(d)} {...shared} />
     </Panel>
   );

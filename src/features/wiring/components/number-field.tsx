@@ -22,7 +22,20 @@ export interface NumberFieldProps {
  * A number typed freely: the draft stays as typed and only a valid value reaches the
  * configuration, so the layout does not jump and half-typed numbers are not saved.
  */
-export function NumberField({ id, field, label, value, onCommit, min, max, unit, placeholder, integer = false, disabled, className }: NumberFieldProps) {
+export function NumberField({
+  id,
+  field,
+  label,
+  value,
+  onCommit,
+  min,
+  max,
+  unit,
+  placeholder,
+  integer = false,
+  disabled,
+  className,
+}: NumberFieldProps) {
   const [draft, setDraft] = useState(value === null ? '' : String(value));
   const [error, setError] = useState<string | null>(null);
 
@@ -40,7 +53,8 @@ export function NumberField({ id, field, label, value, onCommit, min, max, unit,
       return onCommit(null);
     }
     const n = parse(text);
-    if (n === null || (integer && !Number.isInteger(n))) return setError(`${label} must be a${integer ? ' whole' : ''} number`);
+    if (n === null || (integer && !Number.isInteger(n)))
+      return setError(`${label} must be a${integer ? ' whole' : ''} number`);
     if (n < min || n > max) return setError(`${label} must be between ${min} and ${max} ${unit}`);
     setError(null);
     onCommit(n);

@@ -36,7 +36,8 @@ export function PinPicker({ demand, label, choices, problems, canEdit, onPin, on
   const enter = () => setHighlight({ side: demand.side, pin: demand.pin, roleKey: demand.key });
   const leave = () => setHighlight(null);
   // The closed list cuts a long choice off at its width; the whole text shows on hover.
-  const chosen = choices.suits.find((c) => c.pin.id === demand.pin) ?? choices.others.find((c) => c.pin.id === demand.pin);
+  const chosen =
+    choices.suits.find((c) => c.pin.id === demand.pin) ?? choices.others.find((c) => c.pin.id === demand.pin);
   const chosenText = chosen ? (choices.suits.includes(chosen) ? suitText(chosen) : otherText(chosen)) : undefined;
   return (
     <div
@@ -79,7 +80,9 @@ export function PinPicker({ demand, label, choices, problems, canEdit, onPin, on
             ))}
           </optgroup>
           <optgroup label="Other pins — will show a problem">
-            {choices.unknownPin && <option value={choices.unknownPin}>{`${choices.unknownPin} — not a pin of this board`}</option>}
+            {choices.unknownPin && (
+              <option value={choices.unknownPin}>{`${choices.unknownPin} — not a pin of this board`}</option>
+            )}
             {choices.others.map((c) => (
               <option key={c.pin.id} value={c.pin.id}>
                 {otherText(c)}
@@ -87,7 +90,12 @@ export function PinPicker({ demand, label, choices, problems, canEdit, onPin, on
             ))}
           </optgroup>
         </select>
-        <LockToggle locked={demand.locked} roleLabel={demand.label} disabled={!canEdit || demand.pin === null} onChange={onLock} />
+        <LockToggle
+          locked={demand.locked}
+          roleLabel={demand.label}
+          disabled={!canEdit || demand.pin === null}
+          onChange={onLock}
+        />
       </div>
       {problems.length > 0 && (
         <div id={`${id}-problems`} className="mt-1 space-y-0.5 pl-[min(10rem,30%)]">

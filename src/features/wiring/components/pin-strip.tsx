@@ -23,14 +23,21 @@ const CELL: Record<PinState, string> = {
   used: 'border-accent border-b-[4px] bg-accent-soft text-accent-strong',
   warning: 'border-warn border-b-[4px] bg-warn-soft font-semibold text-warn-strong',
   error: 'border-error-strong border-b-[4px] bg-error font-semibold text-white',
-  never: 'border-rule bg-[repeating-linear-gradient(135deg,transparent_0_3px,var(--color-rule-strong)_3px_4px)] text-ink-faint line-through',
+  never:
+    'border-rule bg-[repeating-linear-gradient(135deg,transparent_0_3px,var(--color-rule-strong)_3px_4px)] text-ink-faint line-through',
 };
 
 const MARK: Record<PinState, string> = { free: '', used: '', warning: '!', error: '×', never: '' };
 
 function Cell({ state, text, lit = false }: { state: PinState; text: string; lit?: boolean }) {
   return (
-    <span className={cx('grid h-6 min-w-6 place-items-center rounded-[3px] border px-0.5 font-mono text-[10px] leading-none', CELL[state], lit && 'ring-2 ring-ink ring-offset-1')}>
+    <span
+      className={cx(
+        'grid h-6 min-w-6 place-items-center rounded-[3px] border px-0.5 font-mono text-[10px] leading-none',
+        CELL[state],
+        lit && 'ring-2 ring-ink ring-offset-1',
+      )}
+    >
       {text}
       {MARK[state]}
     </span>
@@ -42,7 +49,17 @@ function Cell({ state, text, lit = false }: { state: PinState; text: string; lit
  * headers. Pointing at a cell lights the pin and its roles; choosing one shows it in the list.
  * The list below carries the same facts in words, so this strip is hidden from screen readers.
  */
-export function PinStrip({ pins, side, stateOf, onChoose }: { pins: BoardPin[]; side: PlanSide; stateOf: (pin: BoardPin) => PinState; onChoose: (pin: BoardPin) => void }) {
+export function PinStrip({
+  pins,
+  side,
+  stateOf,
+  onChoose,
+}: {
+  pins: BoardPin[];
+  side: PlanSide;
+  stateOf: (pin: BoardPin) => PinState;
+  onChoose: (pin: BoardPin) => void;
+}) {
   const { highlight, setHighlight } = useHighlight();
   return (
     <div aria-hidden="true" className="space-y-1.5">

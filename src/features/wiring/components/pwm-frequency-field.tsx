@@ -34,14 +34,42 @@ export function PwmFrequencyField({ driverIndex, value, advice, canEdit, onChang
       <legend className="text-sm font-semibold text-ink-soft">PWM frequency</legend>
       <div className="mt-1 flex flex-wrap items-end gap-x-4 gap-y-2">
         <label className="flex h-8 items-center gap-1.5 text-sm">
-          <input type="radio" name={name} checked={value === null} disabled={!canEdit} onChange={() => onChange(null)} className="accent-accent" />
+          <input
+            type="radio"
+            name={name}
+            checked={value === null}
+            disabled={!canEdit}
+            onChange={() => onChange(null)}
+            className="accent-accent"
+          />
           Board default
         </label>
         <label className="flex h-8 items-center gap-1.5 text-sm">
-          <input type="radio" name={name} checked={value !== null} disabled={!canEdit} onChange={() => onChange(suggested ?? 20_000)} className="accent-accent" />
+          <input
+            type="radio"
+            name={name}
+            checked={value !== null}
+            disabled={!canEdit}
+            onChange={() => onChange(suggested ?? 20_000)}
+            className="accent-accent"
+          />
           Set a frequency
         </label>
-        {value !== null && <NumberField id={id} field={field} label="Frequency" value={value} onCommit={(hz) => hz !== null && onChange(hz)} min={50} max={100_000} unit="Hz" integer disabled={!canEdit} className="[&>label]:sr-only" />}
+        {value !== null && (
+          <NumberField
+            id={id}
+            field={field}
+            label="Frequency"
+            value={value}
+            onCommit={(hz) => hz !== null && onChange(hz)}
+            min={50}
+            max={100_000}
+            unit="Hz"
+            integer
+            disabled={!canEdit}
+            className="[&>label]:sr-only"
+          />
+        )}
       </div>
       <div className="mt-2 rounded-md border border-rule bg-paper px-3 py-2 text-sm">
         <div className="flex flex-wrap items-start justify-between gap-2">
@@ -62,9 +90,14 @@ export function PwmFrequencyField({ driverIndex, value, advice, canEdit, onChang
           <p className="mt-1.5 text-ink-muted">
             <span className="font-semibold text-ink-soft">Pins that run it cleanly: </span>
             {advice.quietPins.length > 8 ? (
-              `${advice.quietPins.length} PWM pins, including ${advice.quietPins.slice(0, 4).map((q) => q.pin).join(', ')}.`
+              `${advice.quietPins.length} PWM pins, including ${advice.quietPins
+                .slice(0, 4)
+                .map((q) => q.pin)
+                .join(', ')}.`
             ) : (
-              <span className="font-mono text-[13px]">{advice.quietPins.map((q) => `${q.pin} ${formatHz(q.hz)}`).join(', ')}</span>
+              <span className="font-mono text-[13px]">
+                {advice.quietPins.map((q) => `${q.pin} ${formatHz(q.hz)}`).join(', ')}
+              </span>
             )}
           </p>
         )}
@@ -87,5 +120,7 @@ export function runningWords(advice: DriverPwmAdvice): string[] {
     group.pins.push(r.pin);
     groups.set(key, group);
   }
-  return [...groups.values()].map((g) => `${g.pins.join(', ')} at ${g.hz === null ? 'no PWM' : formatHz(g.hz)}${g.formula ? ` (${g.formula})` : ''}`);
+  return [...groups.values()].map(
+    (g) => `${g.pins.join(', ')} at ${g.hz === null ? 'no PWM' : formatHz(g.hz)}${g.formula ? ` (${g.formula})` : ''}`,
+  );
 }

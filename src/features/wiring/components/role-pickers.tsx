@@ -20,7 +20,16 @@ export function RolePickers({ demands, choices, problems, canEdit, labelOf, onRo
   return (
     <div className="space-y-0.5">
       {demands.map((d) => (
-        <PinPicker key={d.key} demand={d} label={labelOf(d)} choices={choices.get(d.key)!} problems={problemsForRole(problems, d)} canEdit={canEdit} onPin={(pin) => onRolePin(d, pin)} onLock={(locked) => onRoleLock(d, locked)} />
+        <PinPicker
+          key={d.key}
+          demand={d}
+          label={labelOf(d)}
+          choices={choices.get(d.key)!}
+          problems={problemsForRole(problems, d)}
+          canEdit={canEdit}
+          onPin={(pin) => onRolePin(d, pin)}
+          onLock={(locked) => onRoleLock(d, locked)}
+        />
       ))}
     </div>
   );

@@ -20,12 +20,26 @@ export function SeverityIcon({ severity, className }: { severity: Problem['sever
 }
 
 /** One problem as a line: icon, the sentence, and (optionally) what to do about it. */
-export function ProblemLine({ problem, showHint = true, className }: { problem: Problem; showHint?: boolean; className?: string }) {
+export function ProblemLine({
+  problem,
+  showHint = true,
+  className,
+}: {
+  problem: Problem;
+  showHint?: boolean;
+  className?: string;
+}) {
   return (
     <p className={cx('flex items-start gap-1.5 text-sm', className)}>
       <SeverityIcon severity={problem.severity} className="mt-0.5" />
       <span>
-        <span className={problem.severity === 'error' ? 'font-semibold text-error-strong' : 'font-semibold text-warn-strong'}>{problem.message}</span>
+        <span
+          className={
+            problem.severity === 'error' ? 'font-semibold text-error-strong' : 'font-semibold text-warn-strong'
+          }
+        >
+          {problem.message}
+        </span>
         {showHint && problem.hint && <span className="text-ink-muted"> {problem.hint}</span>}
       </span>
     </p>

@@ -38,7 +38,7 @@ export function SheetSupply({ advice, config }: { advice: PowerAdvice; config: R
         {lines.map((l) => (
           <li key={l}>{l}</li>
         ))}
-              </ul>
+      </ul>
       <ul className="mt-1 list-disc space-y-0.5 pl-4 text-[12px] leading-snug text-ink-soft">
         {advice.notes.map((n) => (
           <li key={n}>{n}</li>

@@ -18,7 +18,8 @@ function SheetSection({ id, title, children }: { id: string; title: string; chil
 /** Every used pin of a board, in the board's order, with what connects to it; two columns when long. */
 export function SheetPinTable({ title, rows }: { title: string; rows: SheetPinRow[] }) {
   const id = `sheet-pins-${title.replace(/\W+/g, '-').toLowerCase()}`;
-  const halves = rows.length > 8 ? [rows.slice(0, Math.ceil(rows.length / 2)), rows.slice(Math.ceil(rows.length / 2))] : [rows];
+  const halves =
+    rows.length > 8 ? [rows.slice(0, Math.ceil(rows.length / 2)), rows.slice(Math.ceil(rows.length / 2))] : [rows];
   return (
     <SheetSection id={id} title={title}>
       {rows.length === 0 ? (
@@ -26,12 +27,19 @@ export function SheetPinTable({ title, rows }: { title: string; rows: SheetPinRo
       ) : (
         <div className="grid items-start gap-x-5 gap-y-2 sm:grid-cols-2 print:grid-cols-2">
           {halves.map((half, i) => (
-            <SheetTable key={i} caption={halves.length > 1 ? `${title}, part ${i + 1} of 2` : title} head={['Pin', 'Code', 'Connects to', 'Used as']} className={halves.length === 1 ? 'sm:col-span-2 print:col-span-2' : undefined}>
+            <SheetTable
+              key={i}
+              caption={halves.length > 1 ? `${title}, part ${i + 1} of 2` : title}
+              head={['Pin', 'Code', 'Connects to', 'Used as']}
+              className={halves.length === 1 ? 'sm:col-span-2 print:col-span-2' : undefined}
+            >
               {half.map((row) => (
                 <tr key={row.pin.id}>
                   <Cell mono className="font-medium whitespace-nowrap">
                     {row.pin.id}
-                    {row.pin.label !== null && row.pin.label !== row.pin.id && row.pin.label !== row.pin.code && <span className="font-normal text-ink-muted"> “{row.pin.label}”</span>}
+                    {row.pin.label !== null && row.pin.label !== row.pin.id && row.pin.label !== row.pin.code && (
+                      <span className="font-normal text-ink-muted"> “{row.pin.label}”</span>
+                    )}
                   </Cell>
                   <Cell mono>{row.pin.code ?? '—'}</Cell>
                   <Cell className="font-semibold">{row.roles.join(' + ')}</Cell>
@@ -56,7 +64,8 @@ export function SheetDriversTable({ config }: { config: RobotConfig }) {
           <Fragment key={driver.name}>
             <tr className="border-t-2 border-ink-soft bg-paper-sunken/60">
               <th scope="rowgroup" colSpan={6} className="px-1.5 py-1 text-left font-normal">
-                <span className="font-semibold">{driver.name}</span> <span className="text-ink-soft">· {driver.kind}</span>{' '}
+                <span className="font-semibold">{driver.name}</span>{' '}
+                <span className="text-ink-soft">· {driver.kind}</span>{' '}
                 <span className="text-[12px] text-ink-muted">
                   · stop: {driver.stop} · PWM: {driver.pwm} · rated {driver.ratings}
                 </span>

@@ -8,7 +8,17 @@ const MEANING = {
 } as const;
 
 /** Brake or coast when the command is zero, with what each means for this kind of driver. */
-export function StopModeField({ driverIndex, driver, canEdit, onChange }: { driverIndex: number; driver: Driver; canEdit: boolean; onChange: (mode: Driver['stopMode']) => void }) {
+export function StopModeField({
+  driverIndex,
+  driver,
+  canEdit,
+  onChange,
+}: {
+  driverIndex: number;
+  driver: Driver;
+  canEdit: boolean;
+  onChange: (mode: Driver['stopMode']) => void;
+}) {
   const ways = DRIVER_KINDS[driver.kind].stopModes;
   const id = fieldDomId(['wiring', 'drivers', driverIndex, 'stopMode']);
   return (
@@ -19,11 +29,21 @@ export function StopModeField({ driverIndex, driver, canEdit, onChange }: { driv
           const how = ways[mode];
           return (
             <label key={mode} className="flex items-start gap-2 text-sm">
-              <input type="radio" name={`${id}-mode`} value={mode} checked={driver.stopMode === mode} disabled={!canEdit || how === null} onChange={() => onChange(mode)} className="mt-1 accent-accent" />
+              <input
+                type="radio"
+                name={`${id}-mode`}
+                value={mode}
+                checked={driver.stopMode === mode}
+                disabled={!canEdit || how === null}
+                onChange={() => onChange(mode)}
+                className="mt-1 accent-accent"
+              />
               <span>
                 <span className="font-semibold text-ink">{mode === 'brake' ? 'Brake' : 'Coast'}</span>
                 <span className="text-ink-muted">: {MEANING[mode]}.</span>
-                <span className="block text-[13px] text-ink-muted">{how === null ? 'Not possible with this kind of driver.' : `This driver: ${how}.`}</span>
+                <span className="block text-[13px] text-ink-muted">
+                  {how === null ? 'Not possible with this kind of driver.' : `This driver: ${how}.`}
+                </span>
               </span>
             </label>
           );

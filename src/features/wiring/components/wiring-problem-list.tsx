@@ -12,10 +12,20 @@ export function WiringProblemList({ problems }: { problems: Problem[] }) {
   const warnings = problems.length - errors;
   if (problems.length === 0) {
     return (
-      <p role="status" className="flex items-center gap-2 rounded-md border border-accent/30 bg-accent-soft px-3 py-2 text-sm text-accent-strong">
+      <p
+        role="status"
+        className="flex items-center gap-2 rounded-md border border-accent/30 bg-accent-soft px-3 py-2 text-sm text-accent-strong"
+      >
         <svg viewBox="0 0 16 16" className="size-4" aria-hidden="true">
           <circle cx="8" cy="8" r="6.5" fill="currentColor" />
-          <path d="M5 8.2l2 2 4-4.2" fill="none" stroke="white" strokeWidth="1.8" strokeLinecap="round" strokeLinejoin="round" />
+          <path
+            d="M5 8.2l2 2 4-4.2"
+            fill="none"
+            stroke="white"
+            strokeWidth="1.8"
+            strokeLinecap="round"
+            strokeLinejoin="round"
+          />
         </svg>
         No wiring problems: every role has a pin that can do it.
       </p>
@@ -27,19 +37,33 @@ export function WiringProblemList({ problems }: { problems: Problem[] }) {
   };
   return (
     <section aria-labelledby="wiring-problems-title" className="rounded-lg border border-rule bg-paper-raised">
-      <h2 id="wiring-problems-title" className="flex flex-wrap items-baseline gap-x-3 border-b border-rule px-4 py-2 text-base font-semibold">
+      <h2
+        id="wiring-problems-title"
+        className="flex flex-wrap items-baseline gap-x-3 border-b border-rule px-4 py-2 text-base font-semibold"
+      >
         Wiring problems
         <span className="text-sm font-normal text-ink-muted">
-          {errors} error{errors === 1 ? '' : 's'}, {warnings} warning{warnings === 1 ? '' : 's'} · choose one to go to its field
+          {errors} error{errors === 1 ? '' : 's'}, {warnings} warning{warnings === 1 ? '' : 's'} · choose one to go to
+          its field
         </span>
       </h2>
       <ul className="max-h-52 divide-y divide-rule overflow-y-auto">
         {problems.map((p, i) => (
           <li key={`${p.code}-${i}`}>
-            <button type="button" onClick={() => show(p)} className="flex w-full items-start gap-2 px-4 py-1.5 text-left hover:bg-paper-sunken focus-visible:bg-paper-sunken">
+            <button
+              type="button"
+              onClick={() => show(p)}
+              className="flex w-full items-start gap-2 px-4 py-1.5 text-left hover:bg-paper-sunken focus-visible:bg-paper-sunken"
+            >
               <SeverityIcon severity={p.severity} className="mt-0.5" />
               <span className="text-sm">
-                <span className={p.severity === 'error' ? 'font-semibold text-error-strong' : 'font-semibold text-warn-strong'}>{p.message}</span>
+                <span
+                  className={
+                    p.severity === 'error' ? 'font-semibold text-error-strong' : 'font-semibold text-warn-strong'
+                  }
+                >
+                  {p.message}
+                </span>
                 <span className="text-ink-muted"> — {p.hint}</span>
               </span>
             </button>

@@ -34,15 +34,29 @@ export function WiringSheetPage({ robotId, revision, badRevision, backTo, photoU
   }, [name, sheetRevision]);
 
   const body = () => {
-    if (badRevision !== undefined) return <ErrorState message={`“${badRevision}” is not a revision number; revisions are whole numbers from 1.`} />;
+    if (badRevision !== undefined)
+      return <ErrorState message={`“${badRevision}” is not a revision number; revisions are whole numbers from 1.`} />;
     if (robot.isPending || (wantsOther && other.isPending)) return <LoadingState label="Loading the wiring sheet…" />;
     const failed = robot.isError ? robot : wantsOther && other.isError ? other : null;
     if (failed) {
-      const message = isApiError(failed.error, 404) ? (robot.isError ? 'This robot does not exist, or you are not on its team.' : `Revision ${revision} of this robot does not exist.`) : errorMessage(failed.error);
-      return <ErrorState message={message} onRetry={isApiError(failed.error, 404) ? undefined : () => failed.refetch()} />;
+      const message = isApiError(failed.error, 404)
+        ? robot.isError
+          ? 'This robot does not exist, or you are not on its team.'
+          : `Revision ${revision} of this robot does not exist.`
+        : errorMessage(failed.error);
+      return (
+        <ErrorState message={message} onRetry={isApiError(failed.error, 404) ? undefined : () => failed.refetch()} />
+      );
     }
     if (!robot.data || !sheetRevision) return null;
-    return <WiringSheet robotName={robot.data.robot.name} teamName={robot.data.robot.teamName} revision={sheetRevision} photoUrl={photoUrl ?? robot.data.robot.photoUrl ?? undefined} />;
+    return (
+      <WiringSheet
+        robotName={robot.data.robot.name}
+        teamName={robot.data.robot.teamName}
+        revision={sheetRevision}
+        photoUrl={photoUrl ?? robot.data.robot.photoUrl ?? undefined}
+      />
+    );
   };
 
   return (

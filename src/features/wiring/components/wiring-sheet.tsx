@@ -41,10 +41,15 @@ export function WiringSheet({ robotName, teamName, revision, photoUrl, printedAt
   const hasRemote = config.controls.source === 'nrf24';
   const advice = powerAdvice(config);
   return (
-    <article className="wiring-sheet mx-auto max-w-[210mm] bg-white px-[12mm] py-[10mm] text-ink shadow-[0_1px_6px_rgba(29,42,68,0.18)]" aria-label={`Wiring sheet of ${robotName}`}>
+    <article
+      className="wiring-sheet mx-auto max-w-[210mm] bg-white px-[12mm] py-[10mm] text-ink shadow-[0_1px_6px_rgba(29,42,68,0.18)]"
+      aria-label={`Wiring sheet of ${robotName}`}
+    >
       <header className="flex items-start justify-between gap-6 border-b-2 border-ink pb-2">
         <div>
-          <p className="text-[11px] font-semibold tracking-[0.18em] text-ink-muted uppercase">Mixwright wiring sheet · {teamName}</p>
+          <p className="text-[11px] font-semibold tracking-[0.18em] text-ink-muted uppercase">
+            Mixwright wiring sheet · {teamName}
+          </p>
           <h1 className="text-2xl leading-tight font-bold">{robotName}</h1>
           <p className="text-sm text-ink-soft">
             {board.name} ({board.name.includes(board.mcu) ? '' : `${board.mcu}, `}
@@ -69,12 +74,25 @@ export function WiringSheet({ robotName, teamName, revision, photoUrl, printedAt
       </p>
       {photoUrl && (
         <figure data-slot="robot-photo" className="mt-3 flex justify-center">
-          <img src={photoUrl} alt={`${robotName}, as built`} className="max-h-[55mm] rounded border border-rule-strong object-contain" />
+          <img
+            src={photoUrl}
+            alt={`${robotName}, as built`}
+            className="max-h-[55mm] rounded border border-rule-strong object-contain"
+          />
         </figure>
       )}
       {open.length > 0 && (
-        <section aria-labelledby="sheet-open-title" className={cx('mt-3 rounded border-2 px-3 py-2 print:mt-2 print:py-1', hasErrors ? 'border-error' : 'border-warn')}>
-          <h2 id="sheet-open-title" className={cx('text-sm font-bold', hasErrors ? 'text-error-strong' : 'text-warn-strong')}>
+        <section
+          aria-labelledby="sheet-open-title"
+          className={cx(
+            'mt-3 rounded border-2 px-3 py-2 print:mt-2 print:py-1',
+            hasErrors ? 'border-error' : 'border-warn',
+          )}
+        >
+          <h2
+            id="sheet-open-title"
+            className={cx('text-sm font-bold', hasErrors ? 'text-error-strong' : 'text-warn-strong')}
+          >
             This revision has {open.length} open wiring problem{open.length === 1 ? '' : 's'}: check before wiring
           </h2>
           <ul className="mt-1 list-disc pl-5 text-[13px]">
@@ -99,7 +117,11 @@ export function WiringSheet({ robotName, teamName, revision, photoUrl, printedAt
             <SheetInputBlock config={config} side="robot" />
             <SheetExtrasTable config={config} />
           </div>
-          {hasRemote ? <SheetInputBlock config={config} side="remote" /> : <SheetSupply advice={advice} config={config} />}
+          {hasRemote ? (
+            <SheetInputBlock config={config} side="remote" />
+          ) : (
+            <SheetSupply advice={advice} config={config} />
+          )}
         </div>
         {hasRemote ? (
           <div className={TWO_COLUMNS}>

@@ -12,10 +12,13 @@ import { isWiringProblem } from '../lib/wiring-problems';
 export function useWiringModel(config: RobotConfig, problems: Problem[]) {
   return useMemo(() => {
     const demands = collectDemands(config);
-    const driverRoleLabels = config.wiring.drivers.map((d) => Object.fromEntries(driverPinRoles(d.kind, d.motors.length).map((r) => [r.id, r.label])));
+    const driverRoleLabels = config.wiring.drivers.map((d) =>
+      Object.fromEntries(driverPinRoles(d.kind, d.motors.length).map((r) => [r.id, r.label])),
+    );
     /** A role in the pin list's words: "Driver 1 · A PWM", "Channel 1 pulse". */
     const listLabel = (d: PinDemand) => {
-      if (d.owner === 'driver') return `${config.wiring.drivers[d.driverIndex!].name} · ${driverRoleLabels[d.driverIndex!][d.roleId] ?? d.roleId}`;
+      if (d.owner === 'driver')
+        return `${config.wiring.drivers[d.driverIndex!].name} · ${driverRoleLabels[d.driverIndex!][d.roleId] ?? d.roleId}`;
       const text = d.owner === 'remote' ? d.label.replace(/^remote /, '') : d.label;
       return text.charAt(0).toUpperCase() + text.slice(1);
     };

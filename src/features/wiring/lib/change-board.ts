@@ -24,7 +24,12 @@ function labelFor(demands: PinDemand[], side: Side, match: (d: PinDemand) => boo
 }
 
 /** Clears the pins of one record that the board lacks, counting what it keeps and clears. */
-function sweep(record: Record<string, PinAssignment>, board: BoardId, label: (roleId: string) => string, tally: { kept: number; cleared: ClearedPin[] }) {
+function sweep(
+  record: Record<string, PinAssignment>,
+  board: BoardId,
+  label: (roleId: string) => string,
+  tally: { kept: number; cleared: ClearedPin[] },
+) {
   const profile = getBoard(board);
   return Object.fromEntries(
     Object.entries(record).map(([roleId, a]) => {
@@ -48,12 +53,38 @@ export function changeBoard(config: RobotConfig, board: BoardId): BoardChange {
   const tally = { kept: 0, cleared: [] as ClearedPin[] };
   const drivers = config.wiring.drivers.map((driver, index) => ({
     ...driver,
-    pins: sweep(driver.pins, board, (roleId) => labelFor(demands, 'robot', (d) => d.driverIndex === index && d.roleId === roleId, `${driver.name} ${roleId}`), tally),
+    pins: sweep(
+      driver.pins,
+      board,
+      (roleId) =>
+        labelFor(demands, 'robot', (d) => d.driverIndex === index && d.roleId === roleId, `${driver.name} ${roleId}`),
+      tally,
+    ),
   }));
-  const inputPins = sweep(config.wiring.inputPins, board, (roleId) => labelFor(demands, 'robot', (d) => d.owner === 'input' && d.roleId === roleId, roleId), tally);
-  const singles = sweep({ 'status-led': config.wiring.statusLed, 'bench-test': config.wiring.benchTestPin }, board, (key) => (key === 'status-led' ? 'status LED' : 'bench-test switch'), tally);
+  const inputPins = sweep(
+    config.wiring.inputPins,
+    board,
+    (roleId) => labelFor(demands, 'robot', (d) => d.owner === 'input' && d.roleId === roleId, roleId),
+    tally,
+  );
+  const singles = sweep(
+    { 'status-led': config.wiring.statusLed, 'bench-test': config.wiring.benchTestPin },
+    board,
+    (key) => (key === 'status-led' ? 'status LED' : 'bench-test switch'),
+    tally,
+  );
   return {
-    config: { ...config, wiring: { ...config.wiring, board, drivers, inputPins, statusLed: singles['status-led'], benchTestPin: singles['bench-test'] } },
+    config: {
+      ...config,
+      wiring: {
+        ...config.wiring,
+        board,
+        drivers,
+        inputPins,
+        statusLed: singles['status-led'],
+        benchTestPin: singles['bench-test'],
+      },
+    },
     ...tally,
   };
 }
@@ -63,15 +94,25 @@ export function changeRemoteBoard(config: RobotConfig, board: BoardId): BoardCha
   const demands = collectDemands(config);
   const tally = { kept: 0, cleared: [] as ClearedPin[] };
   const link = config.controls.link;
-  const remotePins = sweep(link.remotePins, board, (roleId) => labelFor(demands, 'remote', (d) => d.roleId === roleId, `remote ${roleId}`), tally);
-  return { config: { ...config, controls: { ...config.controls, link: { ...link, remoteBoard: board, remotePins } } }, ...tally };
+  const remotePins = sweep(
+    link.remotePins,
+    board,
+    (roleId) => labelFor(demands, 'remote', (d) => d.roleId === roleId, `remote ${roleId}`),
+    tally,
+  );
+  return {
+    config: { ...config, controls: { ...config.controls, link: { ...link, remoteBoard: board, remotePins } } },
+    ...tally,
+  };
 }
 
 /** What the board chooser says after a change, in one or two sentences. */
 export function boardChangeMessage(change: BoardChange, boardName: string, who: 'robot' | 'remote' = 'robot'): string {
   const head = `${who === 'robot' ? 'The robot' : 'The remote'} is now on the ${boardName}. Every role is kept`;
   if (change.cleared.length === 0) {
-    return change.kept === 0 ? `${head}; no pins were set yet.` : `${head}, and all ${change.kept} pins exist on this board too, so they stay.`;
+    return change.kept === 0
+      ? `${head}; no pins were set yet.`
+      : `${head}, and all ${change.kept} pins exist on this board too, so they stay.`;
   }
   const list = change.cleared.map((c) => `${c.pin} (${c.label})`).join(', ');
   const kept = change.kept > 0 ? ` ${change.kept} other pin${change.kept === 1 ? '' : 's'} stay.` : '';

@@ -7,7 +7,10 @@ import type { ClearedPin } from './change-board';
 // (every driver keeps at least one motor); what the pin check would still object to, it shows.
 
 export function updateDriver(config: RobotConfig, index: number, patch: Partial<Driver>): RobotConfig {
-  return { ...config, wiring: { ...config.wiring, drivers: config.wiring.drivers.map((d, i) => (i === index ? { ...d, ...patch } : d)) } };
+  return {
+    ...config,
+    wiring: { ...config.wiring, drivers: config.wiring.drivers.map((d, i) => (i === index ? { ...d, ...patch } : d)) },
+  };
 }
 
 /** Motors on no driver channel yet, in the robot's motor order. */
@@ -33,7 +36,16 @@ export function addDriver(config: RobotConfig, kind?: DriverKindId): RobotConfig
   if (free.length === 0 || config.wiring.drivers.length >= 8) return null;
   const chosen = kind ?? config.wiring.drivers.at(-1)?.kind ?? 'pwm-in1-in2-stby';
   const motors = free.slice(0, DRIVER_KINDS[chosen].channels);
-  const driver: Driver = { name: unusedName(config), kind: chosen, motors, pins: emptyPins(chosen, motors.length), pwmFrequencyHz: null, stopMode: 'brake', continuousCurrentA: null, peakCurrentA: null };
+  const driver: Driver = {
+    name: unusedName(config),
+    kind: chosen,
+    motors,
+    pins: emptyPins(chosen, motors.length),
+    pwmFrequencyHz: null,
+    stopMode: 'brake',
+    continuousCurrentA: null,
+    peakCurrentA: null,
+  };
   return { ...config, wiring: { ...config.wiring, drivers: [...config.wiring.drivers, driver] } };
 }
 
@@ -42,7 +54,11 @@ export function removeDriver(config: RobotConfig, index: number): RobotConfig {
 }
 
 /** Keeps only the pins of roles the driver still has; returns what it dropped. */
-function keepKnownPins(driver: Driver, kind: DriverKindId, motorCount: number): { pins: Record<string, PinAssignment>; dropped: ClearedPin[] } {
+function keepKnownPins(
+  driver: Driver,
+  kind: DriverKindId,
+  motorCount: number,
+): { pins: Record<string, PinAssignment>; dropped: ClearedPin[] } {
   const roles = driverPinRoles(kind, motorCount);
   const pins: Record<string, PinAssignment> = {};
   for (const role of roles) pins[role.id] = driver.pins[role.id] ?? { pin: null, locked: false };
@@ -70,9 +86,18 @@ export function setDriverKind(config: RobotConfig, index: number, kind: DriverKi
   const spec = DRIVER_KINDS[kind];
   const motors = driver.motors.slice(0, spec.channels);
   const { pins, dropped } = keepKnownPins(driver, kind, motors.length);
-  const stopMode = spec.stopModes[driver.stopMode] === null ? (driver.stopMode === 'brake' ? 'coast' : 'brake') : driver.stopMode;
+  const stopMode =
+    spec.stopModes[driver.stopMode] === null ? (driver.stopMode === 'brake' ? 'coast' : 'brake') : driver.stopMode;
   const pwmFrequencyHz = spec.maxPwmHz === null ? null : driver.pwmFrequencyHz;
-  const next = updateDriver(config, index, { kind, motors, pins, stopMode, pwmFrequencyHz, continuousCurrentA: null, peakCurrentA: null });
+  const next = updateDriver(config, index, {
+    kind,
+    motors,
+    pins,
+    stopMode,
+    pwmFrequencyHz,
+    continuousCurrentA: null,
+    peakCurrentA: null,
+  });
   return { config: next, dropped, unplacedMotors: driver.motors.slice(spec.channels) };
 }
 
@@ -96,7 +121,10 @@ export function setChannelMotor(config: RobotConfig, index: number, slot: 0 | 1,
     // A channel that was empty cannot hand a motor back, so the other driver only loses one
     // when it keeps another.
     if (previous === null && other.motors.length < 2) return config;
-    const motors = previous === null ? other.motors.filter((m) => m !== motor) : other.motors.map((m) => (m === motor ? previous : m));
+    const motors =
+      previous === null
+        ? other.motors.filter((m) => m !== motor)
+        : other.motors.map((m) => (m === motor ? previous : m));
     next = updateDriver(next, holder, { motors, pins: keepKnownPins(other, other.kind, motors.length).pins });
   }
   const motors = [...driver.motors];

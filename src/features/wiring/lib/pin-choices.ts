@@ -47,7 +47,11 @@ function suitNote(ctx: PlanContext, demand: PinDemand, pin: BoardPin): string {
     case 'external-interrupt':
       return ctx.board.family === 'avr' ? `external interrupt ${pin.externalInterrupt}` : 'interrupt';
     case 'interrupt':
-      return pin.externalInterrupt !== undefined && ctx.board.family === 'avr' ? `external interrupt ${pin.externalInterrupt}` : pin.pinChange ? 'pin-change interrupt' : 'interrupt';
+      return pin.externalInterrupt !== undefined && ctx.board.family === 'avr'
+        ? `external interrupt ${pin.externalInterrupt}`
+        : pin.pinChange
+          ? 'pin-change interrupt'
+          : 'interrupt';
     case 'uart-rx': {
       const rx = pin.uart?.find((u) => u.role === 'rx');
       return rx ? `${rx.port} receive` : 'serial receive via the pin matrix';
@@ -69,19 +73,27 @@ function problemNote(ctx: PlanContext, demand: PinDemand, pin: BoardPin, state: 
   if (inability) return inability.reason;
   const bus = busReason(ctx, pin);
   if (bus) return bus.reason;
-  if (ctx.spiInUse && ctx.board.spi.ssMustBeOutput && pin.id === ctx.board.spi.ss && !isOutputNeed(demand.need)) return 'is the SPI SS pin, which must stay an output';
+  if (ctx.spiInUse && ctx.board.spi.ssMustBeOutput && pin.id === ctx.board.spi.ss && !isOutputNeed(demand.need))
+    return 'is the SPI SS pin, which must stay an output';
   const use = state.pins.get(pin.id);
-  if (use && (demand.shareGroup === null || use.group !== demand.shareGroup)) return `already used for ${usedBy.join(', ')}`;
+  if (use && (demand.shareGroup === null || use.group !== demand.shareGroup))
+    return `already used for ${usedBy.join(', ')}`;
   const timer = timerOfPin(ctx.board, pin);
-  if (demand.need === 'pwm' && timer && ctx.servoTimerIds.includes(timer.id)) return `is on timer ${timer.id}, which the servo pulses take`;
+  if (demand.need === 'pwm' && timer && ctx.servoTimerIds.includes(timer.id))
+    return `is on timer ${timer.id}, which the servo pulses take`;
   if (demand.need === 'pwm' && demand.requestedHz !== null) {
     const setting = pwmSettingForPin(ctx.board, pin, demand.requestedHz, demand.ceilingHz);
     if (setting && !setting.exact) {
-      return timer?.id === 0 ? `is on timer 0 (millis()), which stays at ${formatHz(setting.actualHz)}` : `its timer can only make ${formatHz(setting.actualHz)}, not ${formatHz(demand.requestedHz)}`;
+      return timer?.id === 0
+        ? `is on timer 0 (millis()), which stays at ${formatHz(setting.actualHz)}`
+        : `its timer can only make ${formatHz(setting.actualHz)}, not ${formatHz(demand.requestedHz)}`;
     }
   }
   if (!state.allows(demand, pin, false)) return unitClash(ctx, pin);
-  if (!state.allows(demand, pin, true)) return timer ? `timer ${timer.id} also runs another role at its own frequency` : 'shares its PWM unit with another role';
+  if (!state.allows(demand, pin, true))
+    return timer
+      ? `timer ${timer.id} also runs another role at its own frequency`
+      : 'shares its PWM unit with another role';
   if (pin.strapping) return 'is a boot strapping pin: the wrong level at reset stops the board starting';
   if (pin.usbSerial) return 'carries the USB serial port: uploads may fail while it is wired';
   return 'draws a warning';
@@ -127,7 +139,10 @@ export function choicesFor(ctx: PlanContext, demand: PinDemand): PinChoices {
 }
 
 /** The picker's choices for every role of the configuration, by demand key. */
-export function allPinChoices(config: RobotConfig, demands: PinDemand[] = collectDemands(config)): Map<string, PinChoices> {
+export function allPinChoices(
+  config: RobotConfig,
+  demands: PinDemand[] = collectDemands(config),
+): Map<string, PinChoices> {
   const map = new Map<string, PinChoices>();
   for (const ctx of planContexts(config, demands)) {
     for (const demand of ctx.demands) map.set(demand.key, choicesFor(ctx, demand));

@@ -30,7 +30,9 @@ export function withAssignment(config: RobotConfig, place: DemandPlace, value: P
         ...config,
         wiring: {
           ...wiring,
-          drivers: wiring.drivers.map((d, i) => (i === place.driverIndex ? { ...d, pins: { ...d.pins, [place.roleId]: value } } : d)),
+          drivers: wiring.drivers.map((d, i) =>
+            i === place.driverIndex ? { ...d, pins: { ...d.pins, [place.roleId]: value } } : d,
+          ),
         },
       };
     case 'input':
@@ -41,7 +43,10 @@ export function withAssignment(config: RobotConfig, place: DemandPlace, value: P
       return { ...config, wiring: { ...wiring, benchTestPin: value } };
     case 'remote': {
       const link = config.controls.link;
-      return { ...config, controls: { ...config.controls, link: { ...link, remotePins: { ...link.remotePins, [place.roleId]: value } } } };
+      return {
+        ...config,
+        controls: { ...config.controls, link: { ...link, remotePins: { ...link.remotePins, [place.roleId]: value } } },
+      };
     }
   }
 }

@@ -26,7 +26,9 @@ export interface PinRef {
 export function pinRef(board: BoardProfile, id: string | null): PinRef {
   if (id === null) return { id: null, label: null, code: null, unknown: false };
   const pin = findPin(board, id);
-  return pin ? { id, label: pin.label, code: pin.code, unknown: false } : { id, label: null, code: null, unknown: true };
+  return pin
+    ? { id, label: pin.label, code: pin.code, unknown: false }
+    : { id, label: null, code: null, unknown: true };
 }
 
 export interface SheetPinRow {
@@ -64,7 +66,11 @@ export function sheetPinRows(config: RobotConfig, side: PinDemand['side'] = 'rob
   for (const d of demands) byPin.set(d.pin!, [...(byPin.get(d.pin!) ?? []), d]);
   return [...byPin.entries()]
     .sort(([a], [b]) => (order.get(a) ?? 1e6) - (order.get(b) ?? 1e6) || a.localeCompare(b))
-    .map(([id, list]) => ({ pin: pinRef(board, id), roles: list.map((d) => capitalizeFirst(d.label)), note: [...new Set(list.map((d) => noteFor(board, d)))].join('; ') }));
+    .map(([id, list]) => ({
+      pin: pinRef(board, id),
+      roles: list.map((d) => capitalizeFirst(d.label)),
+      note: [...new Set(list.map((d) => noteFor(board, d)))].join('; '),
+    }));
 }
 
 export interface SheetDriverRole {
@@ -157,14 +163,20 @@ export function sheetInput(config: RobotConfig, side: PinDemand['side'] = 'robot
   const owner = side === 'robot' ? 'input' : 'remote';
   const rows = collectDemands(config)
     .filter((d) => d.owner === owner)
-    .map((d) => ({ role: capitalizeFirst(side === 'remote' ? d.label.replace(/^remote /, '') : d.label), pin: pinRef(board, d.pin) }));
+    .map((d) => ({
+      role: capitalizeFirst(side === 'remote' ? d.label.replace(/^remote /, '') : d.label),
+      pin: pinRef(board, d.pin),
+    }));
   const ctx = planContexts(config).find((c) => c.side === side);
   if (ctx?.spiInUse) {
-    for (const line of ['sck', 'mosi', 'miso'] as const) rows.push({ role: `Transceiver ${line.toUpperCase()} (SPI bus)`, pin: pinRef(board, board.spi[line]) });
+    for (const line of ['sck', 'mosi', 'miso'] as const)
+      rows.push({ role: `Transceiver ${line.toUpperCase()} (SPI bus)`, pin: pinRef(board, board.spi[line]) });
   }
   const notes: string[] = [];
-  if (source.serial) notes.push(`${source.serial.baud} baud, ${source.serial.format}${source.serial.inverted ? ', inverted' : ''}.`);
-  if (source.needsPart?.families.includes(board.family) && side === 'robot') notes.push(`Fit ${source.needsPart.part}: ${source.needsPart.reason}.`);
+  if (source.serial)
+    notes.push(`${source.serial.baud} baud, ${source.serial.format}${source.serial.inverted ? ', inverted' : ''}.`);
+  if (source.needsPart?.families.includes(board.family) && side === 'robot')
+    notes.push(`Fit ${source.needsPart.part}: ${source.needsPart.reason}.`);
   return { source: source.name, board: board.shortName, notes, rows };
 }
 
@@ -173,7 +185,11 @@ export function sheetExtras(config: RobotConfig): { role: string; pin: PinRef; n
   const board = getBoard(config.wiring.board);
   return [
     { role: 'Status LED', pin: pinRef(board, config.wiring.statusLed.pin), note: 'LED and series resistor to ground' },
-    { role: 'Bench-test switch', pin: pinRef(board, config.wiring.benchTestPin.pin), note: 'switch to ground, held at power-up' },
+    {
+      role: 'Bench-test switch',
+      pin: pinRef(board, config.wiring.benchTestPin.pin),
+      note: 'switch to ground, held at power-up',
+    },
   ];
 }
 

@@ -22,7 +22,11 @@ export function samePath(a: Path, b: Path): boolean {
  * used twice, a timer clash). Board-wide counts that merely list every PWM role stay out.
  */
 export function problemsForRole(problems: Problem[], demand: Pick<PinDemand, 'path' | 'roleName' | 'pin'>): Problem[] {
-  return problems.filter((p) => samePath(p.path, demand.path) || (demand.pin !== null && p.roles.includes(demand.roleName) && p.pins.includes(demand.pin)));
+  return problems.filter(
+    (p) =>
+      samePath(p.path, demand.path) ||
+      (demand.pin !== null && p.roles.includes(demand.roleName) && p.pins.includes(demand.pin)),
+  );
 }
 
 /** Problems that name a board pin (on the robot's board; the remote's pins are kept apart). */

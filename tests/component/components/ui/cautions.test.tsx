@@ -9,6 +9,10 @@ describe('the cautions panel', () => {
   it('is a labelled region listing every caution', () => {
     render(<Cautions />);
     const region = screen.getByRole('complementary', { name: 'Before the wheels turn' });
-    expect(within(region).getAllByRole('listitem').map((li) => li.textContent)).toEqual([...SAFETY_CAUTIONS]);
+    expect(
+      within(region)
+        .getAllByRole('listitem')
+        .map((li) => li.textContent),
+    ).toEqual([...SAFETY_CAUTIONS]);
   });
 });

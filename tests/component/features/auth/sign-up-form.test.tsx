@@ -28,16 +28,26 @@ describe('the sign-up form', () => {
   });
 
   it('puts the server reason for a field beside that field', async () => {
-    answerFetch(409, { error: { code: 'email_taken', message: 'An account with this e-mail already exists; sign in instead', fields: { email: 'An account with this e-mail already exists' } } });
+    answerFetch(409, {
+      error: {
+        code: 'email_taken',
+        message: 'An account with this e-mail already exists; sign in instead',
+        fields: { email: 'An account with this e-mail already exists' },
+      },
+    });
     renderWithQuery(<SignUpForm onSignedUp={() => {}} />);
     await fillAndSubmit();
     const email = screen.getByLabelText('E-mail');
     await waitFor(() => expect(email.getAttribute('aria-invalid')).toBe('true'));
-    expect(screen.getByText('An account with this e-mail already exists').id).toBe(email.getAttribute('aria-describedby'));
+    expect(screen.getByText('An account with this e-mail already exists').id).toBe(
+      email.getAttribute('aria-describedby'),
+    );
   });
 
   it('shows a server error that names no field at the top of the form', async () => {
-    answerFetch(429, { error: { code: 'rate_limited', message: 'Too many sign-in attempts; try again in 15 minutes' } });
+    answerFetch(429, {
+      error: { code: 'rate_limited', message: 'Too many sign-in attempts; try again in 15 minutes' },
+    });
     renderWithQuery(<SignUpForm onSignedUp={() => {}} />);
     await fillAndSubmit();
     expect((await screen.findByRole('alert')).textContent).toBe('Too many sign-in attempts; try again in 15 minutes');
@@ -48,8 +58,14 @@ describe('the sign-up form', () => {
     const onSignedUp = vi.fn();
     renderWithQuery(<SignUpForm onSignedUp={onSignedUp} />);
     await fillAndSubmit();
-    await waitFor(() => expect(onSignedUp).toHaveBeenCalledWith({ id: 'u1', email: 'ada@example.org', name: 'Ada Tinker' }));
+    await waitFor(() =>
+      expect(onSignedUp).toHaveBeenCalledWith({ id: 'u1', email: 'ada@example.org', name: 'Ada Tinker' }),
+    );
     expect(calls[0].url).toBe('/api/auth/sign-up');
-    expect(JSON.parse(String(calls[0].init?.body))).toEqual({ name: 'Ada Tinker', email: 'ada@example.org', password: 'a long enough password' });
+    expect(JSON.parse(String(calls[0].init?.body))).toEqual({
+      name: 'Ada Tinker',
+      email: 'ada@example.org',
+      password: 'a long enough password',
+    });
   });
 });

@@ -8,7 +8,13 @@ import type { SectionProps } from '@/features/robot-editor/sections/section-prop
 import { wiredConfig } from '../../../factories/wired-config';
 
 export function firmwareFile(path: string, content: string): FirmwareFile {
-  const language = /\.(ino|h)$/.test(path) ? 'cpp' : path.endsWith('.json') ? 'json' : path.endsWith('.md') ? 'markdown' : 'text';
+  const language = /\.(ino|h)$/.test(path)
+    ? 'cpp'
+    : path.endsWith('.json')
+      ? 'json'
+      : path.endsWith('.md')
+        ? 'markdown'
+        : 'text';
   return { path, content, size: new TextEncoder().encode(content).length, language };
 }
 
@@ -18,8 +24,14 @@ export function firmwareFiles(overrides: Partial<FirmwareFiles> & { remote?: boo
   const folder = rest.sketchFolder ?? 'greenhouse_cart';
   const revision = rest.revision ?? 1;
   const files = [
-    firmwareFile(`${folder}/${folder}.ino`, '#include "mw_config.h"\n\nvoid setup() {\n  mw_print_boot();\n}\n\nvoid loop() {}\n'),
-    firmwareFile(`${folder}/mw_config.h`, `#pragma once\n#define MW_REVISION ${revision}UL\n#define MW_CONFIG_HASH "1a2b3c4d"\n`),
+    firmwareFile(
+      `${folder}/${folder}.ino`,
+      '#include "mw_config.h"\n\nvoid setup() {\n  mw_print_boot();\n}\n\nvoid loop() {}\n',
+    ),
+    firmwareFile(
+      `${folder}/mw_config.h`,
+      `#pragma once\n#define MW_REVISION ${revision}UL\n#define MW_CONFIG_HASH "1a2b3c4d"\n`,
+    ),
     ...(remote
       ? [
           firmwareFile(`${folder}_remote/${folder}_remote.ino`, '// transmitter\nvoid setup() {}\nvoid loop() {}\n'),
@@ -44,7 +56,16 @@ export function firmwareFiles(overrides: Partial<FirmwareFiles> & { remote?: boo
 }
 
 export function sketchCheck(overrides: Partial<SketchCheck> = {}): SketchCheck {
-  return { folder: 'greenhouse_cart', board: 'uno', ok: true, flashBytes: 12_345, flashMax: 32_256, ramBytes: 700, ramMax: 2048, ...overrides };
+  return {
+    folder: 'greenhouse_cart',
+    board: 'uno',
+    ok: true,
+    flashBytes: 12_345,
+    flashMax: 32_256,
+    ramBytes: 700,
+    ramMax: 2048,
+    ...overrides,
+  };
 }
 
 export function verifyResult(sketches: SketchCheck[] = [sketchCheck()]): VerifyResult {
@@ -67,7 +88,13 @@ export function sectionProps(overrides: Partial<SectionProps> = {}): SectionProp
       teamName: 'Larkspur Makers Club',
       role: 'editor',
     },
-    head: { number: 3, message: 'Pins placed', authorName: 'Student Lead', createdAt: '2026-12-01T10:00:00.000Z', config },
+    head: {
+      number: 3,
+      message: 'Pins placed',
+      authorName: 'Student Lead',
+      createdAt: '2026-12-01T10:00:00.000Z',
+      config,
+    },
     config,
     onChange: () => {},
     problems: [],
@@ -90,14 +117,22 @@ export interface FetchCall {
 }
 
 /** Answers fetch by "METHOD path" (path without /api); unknown requests get 404. */
-export function routeFetch(routes: Record<string, { status?: number; body: unknown } | (() => { status?: number; body: unknown })>) {
+export function routeFetch(
+  routes: Record<string, { status?: number; body: unknown } | (() => { status?: number; body: unknown })>,
+) {
   const calls: FetchCall[] = [];
   globalThis.fetch = (async (url: string, init?: RequestInit) => {
     const method = init?.method ?? 'GET';
     calls.push({ method, url, body: init?.body ? JSON.parse(String(init.body)) : undefined });
     const route = routes[`${method} ${url.replace(/^\/api/, '')}`];
-    const answer = typeof route === 'function' ? route() : (route ?? { status: 404, body: { error: { code: 'not_found', message: 'No route' } } });
-    return new Response(JSON.stringify(answer.body), { status: answer.status ?? 200, headers: { 'Content-Type': 'application/json' } });
+    const answer =
+      typeof route === 'function'
+        ? route()
+        : (route ?? { status: 404, body: { error: { code: 'not_found', message: 'No route' } } });
+    return new Response(JSON.stringify(answer.body), {
+      status: answer.status ?? 200,
+      headers: { 'Content-Type': 'application/json' },
+    });
   }) as typeof fetch;
   return { calls };
 }

@@ -2,7 +2,15 @@ import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
 import { FirmwareSection } from '@/features/firmware/components/firmware-section';
-import { changed, firmwareFiles, renderInEditor, routeFetch, sectionProps, sketchCheck, verifyResult } from './factories';
+import {
+  changed,
+  firmwareFiles,
+  renderInEditor,
+  routeFetch,
+  sectionProps,
+  sketchCheck,
+  verifyResult,
+} from './factories';
 
 const FILES = 'GET /robots/r1/revisions/3/files';
 const PREVIEW = 'POST /robots/r1/preview-files';
@@ -14,7 +22,10 @@ const blocked = {
     error: {
       code: 'firmware_blocked',
       message: 'The firmware cannot be generated: Bridge A Enable (PWM) has no pin. (and 1 more)',
-      fields: { 'wiring.drivers.0.pins.a.en.pin': 'Bridge A Enable (PWM) has no pin.', 'safety.failsafeTimeoutMs': 'Too long' },
+      fields: {
+        'wiring.drivers.0.pins.a.en.pin': 'Bridge A Enable (PWM) has no pin.',
+        'safety.failsafeTimeoutMs': 'Too long',
+      },
       issues: [
         { path: ['wiring', 'drivers', 0, 'pins', 'a.en', 'pin'], message: 'Bridge A Enable (PWM) has no pin.' },
         { path: ['safety', 'failsafeTimeoutMs'], message: 'Too long' },
@@ -29,13 +40,11 @@ describe('the Firmware section', () => {
     renderInEditor(<FirmwareSection {...sectionProps()} />);
     const tree = await screen.findByRole('navigation', { name: 'Files in the bundle' });
     expect(within(tree).getByText('greenhouse_cart/')).toBeTruthy();
-    expect(within(tree).getAllByRole('button').map((b) => b.textContent?.replace(/\d.*$/, ''))).toEqual([
-      'greenhouse_cart.ino',
-      'mw_config.h',
-      'README.md',
-      'config.json',
-      'manifest.json',
-    ]);
+    expect(
+      within(tree)
+        .getAllByRole('button')
+        .map((b) => b.textContent?.replace(/\d.*$/, '')),
+    ).toEqual(['greenhouse_cart.ino', 'mw_config.h', 'README.md', 'config.json', 'manifest.json']);
     const code = screen.getByLabelText('Contents of greenhouse_cart/greenhouse_cart.ino');
     const voidWord = [...code.querySelectorAll('span')].find((span) => span.textContent === 'void');
     expect(voidWord?.className).toMatch(/^hljs-/);
@@ -76,10 +85,14 @@ describe('the Firmware section', () => {
     });
     renderInEditor(<FirmwareSection {...props} config={draft} />);
     expect(await screen.findByText(/revision=4 hash/, undefined, { timeout: 2000 })).toBeTruthy();
-    expect(screen.getByText('Showing the firmware of your unsaved changes').parentElement?.textContent).toContain('(it becomes revision 4 when saved)');
+    expect(screen.getByText('Showing the firmware of your unsaved changes').parentElement?.textContent).toContain(
+      '(it becomes revision 4 when saved)',
+    );
     expect(screen.getByRole('link', { name: 'Download revision 3 (.zip)' })).toBeTruthy();
     const preview = calls.find((c) => c.method === 'POST');
-    expect((preview?.body as { config: { safety: { failsafeTimeoutMs: number } } }).config.safety.failsafeTimeoutMs).toBe(150);
+    expect(
+      (preview?.body as { config: { safety: { failsafeTimeoutMs: number } } }).config.safety.failsafeTimeoutMs,
+    ).toBe(150);
   });
 
   it('lists what blocks generation, each linked to its field, and offers no download', async () => {
@@ -102,17 +115,32 @@ describe('the Firmware section', () => {
       [FILES]: { body: firmwareFiles({ revision: 3 }) },
       [PREVIEW]: {
         status: 400,
-        body: { error: { code: 'invalid_input', message: 'bad', fields: { 'config.chassis.wheels.0.radiusMm': 'Radius must be more than 0 mm' } } },
+        body: {
+          error: {
+            code: 'invalid_input',
+            message: 'bad',
+            fields: { 'config.chassis.wheels.0.radiusMm': 'Radius must be more than 0 mm' },
+          },
+        },
       },
     });
-    renderInEditor(<FirmwareSection {...props} config={changed(props.config, (c) => (c.chassis.wheels[0].radiusMm = 0))} />);
+    renderInEditor(
+      <FirmwareSection {...props} config={changed(props.config, (c) => (c.chassis.wheels[0].radiusMm = 0))} />,
+    );
     const list = await screen.findByRole('alert', undefined, { timeout: 2000 });
     expect(within(list).getByText('Radius must be more than 0 mm')).toBeTruthy();
-    expect(within(list).getByRole('link').getAttribute('href')).toBe('/teams/t1/robots/r1/chassis?field=chassis.wheels.0.radiusMm');
+    expect(within(list).getByRole('link').getAttribute('href')).toBe(
+      '/teams/t1/robots/r1/chassis?field=chassis.wheels.0.radiusMm',
+    );
   });
 
   it('shows a failed request with a way to try again', async () => {
-    routeFetch({ [FILES]: { status: 500, body: { error: { code: 'server_error', message: 'Something went wrong on the server' } } } });
+    routeFetch({
+      [FILES]: {
+        status: 500,
+        body: { error: { code: 'server_error', message: 'Something went wrong on the server' } },
+      },
+    });
     renderInEditor(<FirmwareSection {...sectionProps()} />);
     expect((await screen.findByRole('alert')).textContent).toContain('Something went wrong on the server');
     expect(screen.getByRole('button', { name: 'Try again' })).toBeTruthy();
@@ -126,12 +154,18 @@ describe("the Firmware section's compile check", () => {
     await userEvent.setup().click(await screen.findByRole('button', { name: 'Check that it compiles' }));
     const flash = await screen.findByRole('meter', { name: 'Flash used' });
     expect(flash.getAttribute('aria-valuetext')).toBe('39 % (12,345 of 32,256 bytes)');
-    expect(screen.getByRole('meter', { name: 'RAM used' }).getAttribute('aria-valuetext')).toBe('35 % (700 of 2,048 bytes)');
+    expect(screen.getByRole('meter', { name: 'RAM used' }).getAttribute('aria-valuetext')).toBe(
+      '35 % (700 of 2,048 bytes)',
+    );
     expect(screen.getByText('Compiles')).toBeTruthy();
   });
 
   it("shows the compiler's messages when the code does not compile", async () => {
-    const failed = sketchCheck({ ok: false, flashBytes: undefined, messages: "greenhouse_cart/mw_config.h:3:1: error: expected ';'" });
+    const failed = sketchCheck({
+      ok: false,
+      flashBytes: undefined,
+      messages: "greenhouse_cart/mw_config.h:3:1: error: expected ';'",
+    });
     routeFetch({ [FILES]: { body: firmwareFiles({ revision: 3 }) }, [VERIFY]: { body: verifyResult([failed]) } });
     renderInEditor(<FirmwareSection {...sectionProps()} />);
     await userEvent.setup().click(await screen.findByRole('button', { name: 'Check that it compiles' }));
@@ -140,7 +174,11 @@ describe("the Firmware section's compile check", () => {
   });
 
   it('says plainly when a board was not checked on this server', async () => {
-    const esp = sketchCheck({ board: 'esp32-devkitc', ok: null, messages: 'No compiler for this board on this server; only AVR boards are compiled here.' });
+    const esp = sketchCheck({
+      board: 'esp32-devkitc',
+      ok: null,
+      messages: 'No compiler for this board on this server; only AVR boards are compiled here.',
+    });
     routeFetch({ [FILES]: { body: firmwareFiles({ revision: 3 }) }, [VERIFY]: { body: verifyResult([esp]) } });
     renderInEditor(<FirmwareSection {...sectionProps()} />);
     await userEvent.setup().click(await screen.findByRole('button', { name: 'Check that it compiles' }));
@@ -151,7 +189,15 @@ describe("the Firmware section's compile check", () => {
   it('shows a busy server as an error with a way to try again', async () => {
     routeFetch({
       [FILES]: { body: firmwareFiles({ revision: 3 }) },
-      [VERIFY]: { status: 503, body: { error: { code: 'verify_busy', message: 'The compile check is busy with other bundles; try again in a minute' } } },
+      [VERIFY]: {
+        status: 503,
+        body: {
+          error: {
+            code: 'verify_busy',
+            message: 'The compile check is busy with other bundles; try again in a minute',
+          },
+        },
+      },
     });
     renderInEditor(<FirmwareSection {...sectionProps()} />);
     await userEvent.setup().click(await screen.findByRole('button', { name: 'Check that it compiles' }));
@@ -177,8 +223,13 @@ describe("the Firmware section's settings", () => {
 
   it('shows why a sketch name is refused', async () => {
     const props = sectionProps();
-    routeFetch({ [FILES]: { body: firmwareFiles({ revision: 3 }) }, [PREVIEW]: { body: firmwareFiles({ revision: 4 }) } });
-    renderInEditor(<FirmwareSection {...props} config={changed(props.config, (c) => (c.firmware.sketchName = 'my cart'))} />);
+    routeFetch({
+      [FILES]: { body: firmwareFiles({ revision: 3 }) },
+      [PREVIEW]: { body: firmwareFiles({ revision: 4 }) },
+    });
+    renderInEditor(
+      <FirmwareSection {...props} config={changed(props.config, (c) => (c.firmware.sketchName = 'my cart'))} />,
+    );
     const input = await screen.findByLabelText('Sketch name');
     expect(input.getAttribute('aria-invalid')).toBe('true');
     expect(screen.getByText(/Letters, digits, _ \. - only/)).toBeTruthy();
@@ -206,15 +257,27 @@ describe("the Firmware section's settings", () => {
 });
 
 describe('the Firmware section while a field is being corrected', () => {
-  it("previews the last valid draft and lists the fields to correct, linked", async () => {
+  it('previews the last valid draft and lists the fields to correct, linked', async () => {
     const props = sectionProps();
     const valid = changed(props.config, (c) => (c.safety.failsafeTimeoutMs = 150));
     const typing = changed(valid, (c) => (c.chassis.wheels[0].radiusMm = Number.NaN));
-    const { calls } = routeFetch({ [FILES]: { body: firmwareFiles({ revision: 3 }) }, [PREVIEW]: { body: firmwareFiles({ revision: 4, draft: true }) } });
-    renderInEditor(<FirmwareSection {...props} config={typing} validConfig={valid} fieldErrors={{ 'chassis.wheels.0.radiusMm': 'Enter a number' }} />);
+    const { calls } = routeFetch({
+      [FILES]: { body: firmwareFiles({ revision: 3 }) },
+      [PREVIEW]: { body: firmwareFiles({ revision: 4, draft: true }) },
+    });
+    renderInEditor(
+      <FirmwareSection
+        {...props}
+        config={typing}
+        validConfig={valid}
+        fieldErrors={{ 'chassis.wheels.0.radiusMm': 'Enter a number' }}
+      />,
+    );
     const list = await screen.findByRole('alert');
     expect(within(list).getByText('Enter a number')).toBeTruthy();
-    expect(within(list).getByRole('link').getAttribute('href')).toBe('/teams/t1/robots/r1/chassis?field=chassis.wheels.0.radiusMm');
+    expect(within(list).getByRole('link').getAttribute('href')).toBe(
+      '/teams/t1/robots/r1/chassis?field=chassis.wheels.0.radiusMm',
+    );
     await waitFor(() => expect(calls.some((c) => c.method === 'POST')).toBe(true), { timeout: 2000 });
     expect((calls.find((c) => c.method === 'POST')?.body as { config: unknown }).config).toEqual(valid);
   });

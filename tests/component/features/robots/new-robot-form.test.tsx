@@ -4,7 +4,15 @@ import { describe, expect, it, vi } from 'vitest';
 import { NewRobotForm } from '@/features/robots/components/new-robot-form';
 import { answerFetch, renderWithQuery } from '../../support/render';
 
-const created = { id: 'r1', teamId: 't1', name: 'Moss Crawler', createdAt: '2026-03-01T10:00:00.000Z', headRevision: 1, updatedAt: '2026-03-01T10:00:00.000Z', lastFlash: null };
+const created = {
+  id: 'r1',
+  teamId: 't1',
+  name: 'Moss Crawler',
+  createdAt: '2026-03-01T10:00:00.000Z',
+  headRevision: 1,
+  updatedAt: '2026-03-01T10:00:00.000Z',
+  lastFlash: null,
+};
 
 function renderForm() {
   const onCreated = vi.fn();
@@ -22,7 +30,9 @@ describe('the new-robot form', () => {
     const { user } = renderForm();
     await user.selectOptions(screen.getByLabelText('Board'), 'uno');
     await user.selectOptions(screen.getByLabelText('Input source'), 'sbus');
-    expect(screen.getByRole('status').textContent).toMatch(/Pins cannot be placed automatically: The Uno’s only serial receive pin.*starts with its pins unassigned/);
+    expect(screen.getByRole('status').textContent).toMatch(
+      /Pins cannot be placed automatically: The Uno’s only serial receive pin.*starts with its pins unassigned/,
+    );
   });
 
   it('asks for a name and sends nothing without one', async () => {
@@ -42,18 +52,29 @@ describe('the new-robot form', () => {
     await waitFor(() => expect(onCreated).toHaveBeenCalledWith(created));
     expect(calls[0].url).toBe('/api/teams/t1/robots');
     const body = JSON.parse(String(calls[0].init?.body));
-    expect(body).toMatchObject({ name: 'Moss Crawler', message: 'Started from the Quad mecanum starter layout; pins placed automatically', config: { name: 'Moss Crawler', chassis: { layout: 'quad-mecanum' } } });
-    const pins = body.config.wiring.drivers.flatMap((d: { pins: Record<string, { pin: string | null }> }) => Object.values(d.pins).map((p) => p.pin));
+    expect(body).toMatchObject({
+      name: 'Moss Crawler',
+      message: 'Started from the Quad mecanum starter layout; pins placed automatically',
+      config: { name: 'Moss Crawler', chassis: { layout: 'quad-mecanum' } },
+    });
+    const pins = body.config.wiring.drivers.flatMap((d: { pins: Record<string, { pin: string | null }> }) =>
+      Object.values(d.pins).map((p) => p.pin),
+    );
     expect(pins.length).toBeGreaterThan(0);
     expect(pins.every((p: string | null) => p !== null)).toBe(true);
   });
 
   it('shows the server’s reason beside the name', async () => {
-    answerFetch(400, { error: { code: 'validation_failed', message: 'Check the highlighted fields', fields: { name: 'At most 60 characters' } } });
+    answerFetch(400, {
+      error: {
+        code: 'validation_failed',
+        message: 'Check the highlighted fields',
+        fields: { name: 'At most 60 characters' },
+      },
+    });
     const { user } = renderForm();
     await user.type(screen.getByLabelText('Robot name'), 'Moss Crawler');
     await user.click(screen.getByRole('button', { name: 'Create robot' }));
     expect(await screen.findByText('At most 60 characters')).toBeTruthy();
   });
 });
-

@@ -21,9 +21,28 @@ function robot(overrides: Partial<RobotListItem> & Pick<RobotListItem, 'id' | 'n
 }
 
 const robots = [
-  robot({ id: 'a', name: 'Aisle Scout', layout: 'quad-mecanum', board: 'esp32-devkitc', headRevision: 3, problems: { errors: 2, warnings: 1 }, lastFlash: { revisionNumber: 2, flashedAt: '2026-03-05T10:00:00.000Z' } }),
-  robot({ id: 'b', name: 'Bench Kiwi', layout: 'quad-omni-x', board: 'rp2040-pico', problems: { errors: 0, warnings: 4 } }),
-  robot({ id: 'c', name: 'Garden Hauler', headRevision: 5, lastFlash: { revisionNumber: 5, flashedAt: '2026-03-07T10:00:00.000Z' } }),
+  robot({
+    id: 'a',
+    name: 'Aisle Scout',
+    layout: 'quad-mecanum',
+    board: 'esp32-devkitc',
+    headRevision: 3,
+    problems: { errors: 2, warnings: 1 },
+    lastFlash: { revisionNumber: 2, flashedAt: '2026-03-05T10:00:00.000Z' },
+  }),
+  robot({
+    id: 'b',
+    name: 'Bench Kiwi',
+    layout: 'quad-omni-x',
+    board: 'rp2040-pico',
+    problems: { errors: 0, warnings: 4 },
+  }),
+  robot({
+    id: 'c',
+    name: 'Garden Hauler',
+    headRevision: 5,
+    lastFlash: { revisionNumber: 5, flashedAt: '2026-03-07T10:00:00.000Z' },
+  }),
 ];
 
 function renderTable() {
@@ -35,7 +54,11 @@ function renderTable() {
   return userEvent.setup();
 }
 
-const names = () => screen.getAllByRole('row').slice(1).map((row) => within(row).getAllByRole('cell')[0].textContent);
+const names = () =>
+  screen
+    .getAllByRole('row')
+    .slice(1)
+    .map((row) => within(row).getAllByRole('cell')[0].textContent);
 
 describe('the robot table', () => {
   it('lists robots by name with layout, board, head, flashed revision and problems', () => {

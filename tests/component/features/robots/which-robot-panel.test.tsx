@@ -49,7 +49,9 @@ describe('the which-robot panel', () => {
     const user = renderPanel();
     await pasteAndAsk(user, LINE);
     const status = await screen.findByRole('status');
-    expect(within(status).getByRole('link', { name: 'Garden Hauler — history' }).getAttribute('href')).toBe('/teams/team-1/robots/robot-7/history');
+    expect(within(status).getByRole('link', { name: 'Garden Hauler — history' }).getAttribute('href')).toBe(
+      '/teams/team-1/robots/robot-7/history',
+    );
     expect(status.textContent).toContain('revision 2');
     expect(status.textContent).toContain('Found by configuration hash');
     expect(within(status).getByText('behind head r5')).toBeTruthy();
@@ -59,14 +61,18 @@ describe('the which-robot panel', () => {
 
   it('says the robot runs the head when it does', async () => {
     const answer = found();
-    answerFetch(200, found({ answer: { ...answer.answer!, match: { ...answer.answer!.match!, number: 5, isHead: true } } }));
+    answerFetch(
+      200,
+      found({ answer: { ...answer.answer!, match: { ...answer.answer!.match!, number: 5, isHead: true } } }),
+    );
     const user = renderPanel();
     await pasteAndAsk(user, LINE);
     expect(within(await screen.findByRole('status')).getByText('head')).toBeTruthy();
   });
 
   it('says plainly when no robot in the team matches', async () => {
-    const verdict = 'No robot in this team matches: no revision has the configuration hash 1a2b3c4d and no robot is called “Garden Hauler”.';
+    const verdict =
+      'No robot in this team matches: no revision has the configuration hash 1a2b3c4d and no robot is called “Garden Hauler”.';
     answerFetch(200, found({ robot: null, foundBy: null, answer: null, verdict }));
     const user = renderPanel();
     await pasteAndAsk(user, LINE);

@@ -29,6 +29,10 @@ describe('the gamepad map', () => {
   });
 
   it('takes, per axis, the source pushed further', () => {
-    expect(combineSticks({ forward: 0.2, strafe: -0.9, yaw: 0 }, { forward: -0.5, strafe: 0.3, yaw: 0 })).toEqual({ forward: -0.5, strafe: -0.9, yaw: 0 });
+    expect(combineSticks({ forward: 0.2, strafe: -0.9, yaw: 0 }, { forward: -0.5, strafe: 0.3, yaw: 0 })).toEqual({
+      forward: -0.5,
+      strafe: -0.9,
+      yaw: 0,
+    });
   });
 });

@@ -1,6 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { drawingFrame } from '@/features/robot-editor/lib/chassis-geometry';
-import { bodyAngleToSvg, bodyToScreen, formatPercent, formatSigned, niceNumber, screenDirection } from '@/features/robot-editor/lib/screen-frame';
+import {
+  bodyAngleToSvg,
+  bodyToScreen,
+  formatPercent,
+  formatSigned,
+  niceNumber,
+  screenDirection,
+} from '@/features/robot-editor/lib/screen-frame';
 import { makeConfig } from '../../../factories/engine';
 
 describe('the body-to-screen map', () => {

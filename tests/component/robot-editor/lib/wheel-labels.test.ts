@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { estimateTextWidth, LABEL_MAX_WIDTH, wheelLabelLines, wrapText } from '@/features/robot-editor/lib/wheel-labels';
+import {
+  estimateTextWidth,
+  LABEL_MAX_WIDTH,
+  wheelLabelLines,
+  wrapText,
+} from '@/features/robot-editor/lib/wheel-labels';
 import { makeConfig } from '../../../factories/engine';
 
 describe('wheel label text', () => {

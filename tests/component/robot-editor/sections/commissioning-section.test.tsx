@@ -14,7 +14,10 @@ async function answer(user: User, turned: 'own' | string, direction: 'Yes, as sh
   if (turned === 'own') await user.click(screen.getByRole('radio', { name: /The highlighted wheel/ }));
   else {
     await user.click(screen.getByRole('radio', { name: /The wheels of another motor/ }));
-    await user.selectOptions(screen.getByLabelText("Which motor's wheels turned"), screen.getByRole('option', { name: new RegExp(`^${turned} `) }));
+    await user.selectOptions(
+      screen.getByLabelText("Which motor's wheels turned"),
+      screen.getByRole('option', { name: new RegExp(`^${turned} `) }),
+    );
   }
   await user.click(screen.getByRole('radio', { name: direction }));
 }
@@ -23,7 +26,11 @@ describe('the commissioning check', () => {
   it('follows the bench test’s motor order and console line', () => {
     renderSection(CommissioningSection, mecanum());
     const order = screen.getByRole('list', { name: 'Motors in bench-test order' });
-    expect(within(order).getAllByRole('button').map((b) => b.textContent)).toEqual([
+    expect(
+      within(order)
+        .getAllByRole('button')
+        .map((b) => b.textContent),
+    ).toEqual([
       '1. Front leftnot checked yet',
       '2. Front rightnot checked yet',
       '3. Rear rightnot checked yet',
@@ -59,7 +66,12 @@ describe('the commissioning check', () => {
     await user.click(screen.getByRole('button', { name: 'Next motor' }));
     await answer(user, 'Front left', 'Yes, as shown');
     await user.click(screen.getByRole('button', { name: 'Apply to the draft only' }));
-    expect(latest().wiring.drivers.flatMap((d) => d.motors)).toEqual(['Rear left', 'Front right', 'Rear right', 'Front left']);
+    expect(latest().wiring.drivers.flatMap((d) => d.motors)).toEqual([
+      'Rear left',
+      'Front right',
+      'Rear right',
+      'Front left',
+    ]);
     expect(requestSave).not.toHaveBeenCalled();
     expect(screen.getByText('Put into the draft: swapped Front left and Rear left.')).toBeTruthy();
   });

@@ -29,7 +29,11 @@ describe('the controls section', () => {
     const user = userEvent.setup();
     const { latest } = renderSection(ControlsSection, starter());
     await user.click(screen.getByRole('button', { name: 'Add channel' }));
-    expect(latest().controls.channels.find((c) => c.number === 3)).toMatchObject({ low: 1000, centre: 1500, high: 2000 });
+    expect(latest().controls.channels.find((c) => c.number === 3)).toMatchObject({
+      low: 1000,
+      centre: 1500,
+      high: 2000,
+    });
   });
 
   it('renumbers a channel when its number is left, and the stick using it follows', async () => {
@@ -76,7 +80,9 @@ describe('the controls section', () => {
   it('offers the clip setting as the worse choice', () => {
     renderSection(ControlsSection, starter());
     expect(screen.getByText(/Worse: the clipped motor falls behind/)).toBeTruthy();
-    expect((screen.getByRole('radio', { name: /Scale all motors down together/ }) as HTMLInputElement).checked).toBe(true);
+    expect((screen.getByRole('radio', { name: /Scale all motors down together/ }) as HTMLInputElement).checked).toBe(
+      true,
+    );
   });
 
   it('shows the link settings only for the home-made link, with a new random address on request', async () => {

@@ -11,7 +11,11 @@ import type { RobotConfig } from '@shared/schemas/robot-config';
  * A section on its own, holding the draft the way the shell does: every change goes back in,
  * the schema's reasons come back out. `latest()` is the draft after the last change.
  */
-export function renderSection(Section: ComponentType<SectionProps>, initial: RobotConfig, options: { canEdit?: boolean } = {}) {
+export function renderSection(
+  Section: ComponentType<SectionProps>,
+  initial: RobotConfig,
+  options: { canEdit?: boolean } = {},
+) {
   const changes = vi.fn<(next: RobotConfig) => void>();
   const requestSave = vi.fn<(message: string) => void>();
   let current = initial;
@@ -21,7 +25,18 @@ export function renderSection(Section: ComponentType<SectionProps>, initial: Rob
     const validConfig = valid ?? initial;
     return (
       <Section
-        robot={{ id: 'r1', teamId: 't1', teamName: 'Team', name: config.name, createdAt: '', headRevision: 1, updatedAt: '', lastFlash: null, photoUrl: null, role: 'editor' }}
+        robot={{
+          id: 'r1',
+          teamId: 't1',
+          teamName: 'Team',
+          name: config.name,
+          createdAt: '',
+          headRevision: 1,
+          updatedAt: '',
+          lastFlash: null,
+          photoUrl: null,
+          role: 'editor',
+        }}
         head={{ number: 1, message: 'First', authorName: null, createdAt: '', config: initial }}
         config={config}
         onChange={(next) => {

@@ -21,10 +21,16 @@ function busyRobot(board: BoardId, driver: DriverKindId): RobotConfig {
   const starter = buildStarterConfig({ layout: 'differential', board, input: 'nrf24', driver });
   const placed = assignPins(starter);
   const config = placed.ok ? placed.config : starter;
-  return { ...config, motors: config.motors.map((m) => ({ ...m, stallCurrentA: 60, ratedVoltage: 3 })), power: { ...config.power, cells: 6, logicSupply: 'board-vin' } };
+  return {
+    ...config,
+    motors: config.motors.map((m) => ({ ...m, stallCurrentA: 60, ratedVoltage: 3 })),
+    power: { ...config.power, cells: 6, logicSupply: 'board-vin' },
+  };
 }
 
-const cases = DRIVER_KIND_IDS.flatMap((driver) => (['nano', 'esp32-devkitc'] as const).map((board) => [driver, board] as const));
+const cases = DRIVER_KIND_IDS.flatMap((driver) =>
+  (['nano', 'esp32-devkitc'] as const).map((board) => [driver, board] as const),
+);
 
 describe('text in the Wiring and Safety sections', () => {
   it.each(cases)('has no source markers with %s drivers on the %s', (driver, board) => {

@@ -9,7 +9,13 @@ import greenhouseCartV1 from '../../../fixtures/configs/v1/greenhouse-cart.json'
 const ROBOT = 'robot-1';
 
 function revision(number: number, overrides: Partial<RevisionDetail['config']> = {}): RevisionDetail {
-  return { number, message: `r${number}`, authorName: 'Test', createdAt: '2026-03-01T10:00:00.000Z', config: robotConfig(overrides) };
+  return {
+    number,
+    message: `r${number}`,
+    authorName: 'Test',
+    createdAt: '2026-03-01T10:00:00.000Z',
+    config: robotConfig(overrides),
+  };
 }
 
 function withFailsafe(config: RevisionDetail['config'], ms: number) {
@@ -35,7 +41,10 @@ describe('the robot draft', () => {
     const { result } = renderHook(() => useRobotDraft(ROBOT, head, storage));
     act(() => result.current.setConfig(withFailsafe(head.config, 150)));
     expect(result.current.dirty).toBe(true);
-    expect(readDraft(storage, ROBOT)).toMatchObject({ baseRevision: 3, config: { safety: { failsafeTimeoutMs: 150 } } });
+    expect(readDraft(storage, ROBOT)).toMatchObject({
+      baseRevision: 3,
+      config: { safety: { failsafeTimeoutMs: 150 } },
+    });
   });
 
   it('brings the draft back after a reload', () => {
@@ -60,7 +69,13 @@ describe('the robot draft', () => {
   it('brings a draft kept in an older schema version forward when it is read', () => {
     localStorage.setItem(
       draftKey(ROBOT),
-      JSON.stringify({ version: 1, robotId: ROBOT, baseRevision: 2, config: greenhouseCartV1, updatedAt: '2026-03-01T10:00:00.000Z' }),
+      JSON.stringify({
+        version: 1,
+        robotId: ROBOT,
+        baseRevision: 2,
+        config: greenhouseCartV1,
+        updatedAt: '2026-03-01T10:00:00.000Z',
+      }),
     );
     const draft = readDraft(storage, ROBOT);
     expect(draft).toMatchObject({ baseRevision: 2, config: { schemaVersion: 2 } });
@@ -95,12 +110,18 @@ describe('the robot draft', () => {
   it('ignores a stored draft that belongs to another robot or cannot be read', () => {
     storage.setItem(draftKey(ROBOT), '{not json');
     expect(readDraft(storage, ROBOT)).toBeNull();
-    storage.setItem(draftKey(ROBOT), JSON.stringify({ version: 1, robotId: 'other', baseRevision: 1, config: robotConfig() }));
+    storage.setItem(
+      draftKey(ROBOT),
+      JSON.stringify({ version: 1, robotId: 'other', baseRevision: 1, config: robotConfig() }),
+    );
     expect(readDraft(storage, ROBOT)).toBeNull();
   });
 
   it('drops a stored draft that is not shaped like a configuration', () => {
-    storage.setItem(draftKey(ROBOT), JSON.stringify({ version: 1, robotId: ROBOT, baseRevision: 1, config: { chassis: {} } }));
+    storage.setItem(
+      draftKey(ROBOT),
+      JSON.stringify({ version: 1, robotId: ROBOT, baseRevision: 1, config: { chassis: {} } }),
+    );
     expect(readDraft(storage, ROBOT)).toBeNull();
   });
 });

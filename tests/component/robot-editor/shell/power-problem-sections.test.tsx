@@ -19,7 +19,12 @@ beforeEach(() => localStorage.clear());
  * motor about the 6 V pack being too low for 12 V motors (their fields are in Chassis).
  */
 function overloaded(): RobotConfig {
-  const starter = buildStarterConfig({ layout: 'differential', board: 'nano', input: 'ppm', driver: 'pwm-in1-in2-stby' });
+  const starter = buildStarterConfig({
+    layout: 'differential',
+    board: 'nano',
+    input: 'ppm',
+    driver: 'pwm-in1-in2-stby',
+  });
   const placed = assignPins(starter);
   if (!placed.ok) throw new Error(placed.reason);
   return { ...placed.config, motors: placed.config.motors.map((m) => ({ ...m, stallCurrentA: 2, ratedVoltage: 12 })) };
@@ -27,7 +32,10 @@ function overloaded(): RobotConfig {
 
 function renderOverloaded(path?: string) {
   const config = overloaded();
-  return renderEditor(robotDetail({ head: revisionDetail(3, config) }), { sections: { chassis: ChassisSection, wiring: WiringSection, safety: SafetySection }, path });
+  return renderEditor(robotDetail({ head: revisionDetail(3, config) }), {
+    sections: { chassis: ChassisSection, wiring: WiringSection, safety: SafetySection },
+    path,
+  });
 }
 
 describe('power problems in the editor', () => {
@@ -43,7 +51,9 @@ describe('power problems in the editor', () => {
     const [driver, motor] = robotProblems(overloaded());
     expect(sectionsOfProblem(driver)).toEqual(['safety', 'wiring']);
     expect(sectionsOfProblem(motor)).toEqual(['safety', 'chassis']);
-    expect(sectionsOfProblem({ code: 'pin-used-twice', path: ['wiring', 'drivers', 0, 'pins', 'a.pwm'] })).toEqual(['wiring']);
+    expect(sectionsOfProblem({ code: 'pin-used-twice', path: ['wiring', 'drivers', 0, 'pins', 'a.pwm'] })).toEqual([
+      'wiring',
+    ]);
     expect(sectionsOfProblem({ code: 'logic-from-usb', path: ['power', 'logicSupply'] })).toEqual(['safety']);
   });
 
@@ -62,7 +72,9 @@ describe('power problems in the editor', () => {
     expect(screen.getByText('Safety: 3 warnings')).toBeTruthy();
     await user.click(screen.getByRole('button', { name: 'Show the list' }));
     const list = screen.getByRole('region', { name: 'Problems in Safety' });
-    const links = within(list).getAllByRole('link', { name: 'Show field' }).map((a) => a.getAttribute('href'));
+    const links = within(list)
+      .getAllByRole('link', { name: 'Show field' })
+      .map((a) => a.getAttribute('href'));
     expect(links).toEqual([
       '/teams/team-1/robots/robot-1/wiring?field=wiring.drivers.0.continuousCurrentA',
       '/teams/team-1/robots/robot-1/chassis?field=motors.0.ratedVoltage',

@@ -12,7 +12,9 @@ export function revisionDetail(number: number, config = robotConfig(), message =
   return { number, message, authorName: 'Orla', createdAt: '2026-03-01T10:00:00.000Z', config };
 }
 
-export function robotDetail(overrides: { role?: RobotDetail['robot']['role']; head?: RevisionDetail } = {}): RobotDetail {
+export function robotDetail(
+  overrides: { role?: RobotDetail['robot']['role']; head?: RevisionDetail } = {},
+): RobotDetail {
   const head = overrides.head ?? revisionDetail(3);
   return {
     robot: {
@@ -34,9 +36,18 @@ export function robotDetail(overrides: { role?: RobotDetail['robot']['role']; he
 /** The editor at `/teams/team-1/robots/robot-1/<section>` in a memory router, with the Safety section unless told. */
 export function renderEditor(
   detail: RobotDetail,
-  options: { save?: (input: SaveRevisionInput) => Promise<RevisionDetail>; revisions?: Record<number, RevisionDetail>; path?: string; sections?: SectionRegistry } = {},
+  options: {
+    save?: (input: SaveRevisionInput) => Promise<RevisionDetail>;
+    revisions?: Record<number, RevisionDetail>;
+    path?: string;
+    sections?: SectionRegistry;
+  } = {},
 ) {
-  const save = vi.fn(options.save ?? (async (input: SaveRevisionInput) => revisionDetail(detail.head.number + 1, input.config as RevisionDetail['config'], input.message)));
+  const save = vi.fn(
+    options.save ??
+      (async (input: SaveRevisionInput) =>
+        revisionDetail(detail.head.number + 1, input.config as RevisionDetail['config'], input.message)),
+  );
   const revisions = options.revisions ?? {};
   const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
   // The section follows the path, as in the app, so links between sections can be followed.

@@ -47,7 +47,11 @@ describe('the robot editor', () => {
     await user.type(within(dialog).getByLabelText('What changed, and why?'), 'Gentler ramp');
     await user.click(within(dialog).getByRole('button', { name: 'Save revision' }));
     await waitFor(() => expect(save).toHaveBeenCalledTimes(1));
-    expect(save.mock.calls[0][0]).toMatchObject({ baseRevision: 3, message: 'Gentler ramp', config: { safety: { rampPerSecond: 6 } } });
+    expect(save.mock.calls[0][0]).toMatchObject({
+      baseRevision: 3,
+      message: 'Gentler ramp',
+      config: { safety: { rampPerSecond: 6 } },
+    });
     expect(await screen.findByText('Saved as r4.')).toBeTruthy();
     expect(localStorage.getItem('mixwright:draft:robot-1')).toBeNull();
   });
@@ -56,7 +60,11 @@ describe('the robot editor', () => {
     const user = userEvent.setup();
     const base = robotConfig();
     const theirs = { ...base, safety: { ...base.safety, failsafeTimeoutMs: 180 } };
-    const conflict = new ApiError(409, { code: 'revision_conflict', message: 'Revision 4 was saved', head: { number: 4, message: 'Faster failsafe', authorName: 'Wren', createdAt: '2026-03-02T10:00:00.000Z' } } as never);
+    const conflict = new ApiError(409, {
+      code: 'revision_conflict',
+      message: 'Revision 4 was saved',
+      head: { number: 4, message: 'Faster failsafe', authorName: 'Wren', createdAt: '2026-03-02T10:00:00.000Z' },
+    } as never);
     const { save } = renderEditor(robotDetail({ head: revisionDetail(3, base) }), {
       save: async () => {
         throw conflict;
@@ -77,7 +85,9 @@ describe('the robot editor', () => {
     expect((within(rampRow).getByLabelText('Mine') as HTMLInputElement).checked).toBe(true);
     await user.click(within(dialog).getByRole('button', { name: 'Move my draft onto r4' }));
     const saveDialog = await screen.findByRole('dialog', { name: 'Save a new revision' });
-    expect((within(saveDialog).getByLabelText('What changed, and why?') as HTMLInputElement).value).toBe('Gentler ramp');
+    expect((within(saveDialog).getByLabelText('What changed, and why?') as HTMLInputElement).value).toBe(
+      'Gentler ramp',
+    );
     expect(save).toHaveBeenCalledTimes(1);
     expect(localStorage.getItem('mixwright:draft:robot-1')).toContain('"baseRevision":4');
     expect(localStorage.getItem('mixwright:draft:robot-1')).toContain('"failsafeTimeoutMs":180');
@@ -106,7 +116,11 @@ describe('the robot editor', () => {
     await user.click(within(dialog).getByRole('button', { name: 'Stay' }));
     expect(router.state.location.pathname).toBe('/teams/team-1/robots/robot-1/safety');
     await user.click(screen.getByRole('link', { name: 'Hilltop Rover Club' }));
-    await user.click(within(await screen.findByRole('dialog', { name: 'Leave with unsaved changes?' })).getByRole('button', { name: 'Leave, keep the draft' }));
+    await user.click(
+      within(await screen.findByRole('dialog', { name: 'Leave with unsaved changes?' })).getByRole('button', {
+        name: 'Leave, keep the draft',
+      }),
+    );
     expect(await screen.findByText('Team page')).toBeTruthy();
     expect(localStorage.getItem('mixwright:draft:robot-1')).toContain('"rampPerSecond":6');
   });

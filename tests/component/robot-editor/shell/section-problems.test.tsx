@@ -5,7 +5,12 @@ import { describe, expect, it } from 'vitest';
 import { SectionNav } from '@/features/robot-editor/components/shell/section-nav';
 import { ProblemList, problemHref } from '@/features/robot-editor/components/shell/problem-list';
 import { SectionProblems } from '@/features/robot-editor/components/shell/section-problems';
-import { countBySection, fieldErrorProblems, sectionOfPath, type EditorProblem } from '@/features/robot-editor/lib/editor-sections';
+import {
+  countBySection,
+  fieldErrorProblems,
+  sectionOfPath,
+  type EditorProblem,
+} from '@/features/robot-editor/lib/editor-sections';
 import type { Problem } from '@shared/problems/problem';
 
 const problem = (severity: Problem['severity'], path: Problem['path'], message = 'Something is off'): Problem => ({
@@ -54,7 +59,11 @@ describe('problem counts per section', () => {
   });
 
   it('shows the counts beside each section in the navigation', () => {
-    const counts = countBySection([problem('error', ['chassis', 'wheels']), problem('warning', ['safety', 'rampPerSecond']), problem('warning', ['power', 'cells'])]);
+    const counts = countBySection([
+      problem('error', ['chassis', 'wheels']),
+      problem('warning', ['safety', 'rampPerSecond']),
+      problem('warning', ['power', 'cells']),
+    ]);
     render(
       <MemoryRouter initialEntries={['/teams/t/robots/r/chassis']}>
         <SectionNav sections={['chassis', 'controls', 'safety']} counts={counts} total={{ errors: 1, warnings: 2 }} />
@@ -69,25 +78,39 @@ describe('problem counts per section', () => {
 
 describe('links from a problem to its field', () => {
   it('leads to the section with the field’s path', () => {
-    expect(problemHref(problem('error', ['chassis', 'wheels', 2, 'radiusMm']), ['chassis'])).toBe('../chassis?field=chassis.wheels.2.radiusMm');
+    expect(problemHref(problem('error', ['chassis', 'wheels', 2, 'radiusMm']), ['chassis'])).toBe(
+      '../chassis?field=chassis.wheels.2.radiusMm',
+    );
   });
 
   it('has no link when this build has no section for it', () => {
-    expect(problemHref(problem('error', ['wiring', 'drivers', 0, 'pins', 'a.pwm']), ['chassis', 'controls'])).toBeNull();
+    expect(
+      problemHref(problem('error', ['wiring', 'drivers', 0, 'pins', 'a.pwm']), ['chassis', 'controls']),
+    ).toBeNull();
   });
 
   it('lists each problem with its hint and a link to the field', () => {
     render(
       <MemoryRouter initialEntries={['/teams/t/robots/r/problems']}>
         <Routes>
-          <Route path="/teams/:teamId/robots/:robotId/:section" element={<ProblemList problems={[problem('error', ['safety', 'failsafeTimeoutMs'], 'Failsafe too slow')]} available={['safety']} />} />
+          <Route
+            path="/teams/:teamId/robots/:robotId/:section"
+            element={
+              <ProblemList
+                problems={[problem('error', ['safety', 'failsafeTimeoutMs'], 'Failsafe too slow')]}
+                available={['safety']}
+              />
+            }
+          />
         </Routes>
       </MemoryRouter>,
     );
     const item = screen.getByRole('listitem');
     expect(within(item).getByText('Failsafe too slow')).toBeTruthy();
     expect(within(item).getByText('Do something about it')).toBeTruthy();
-    expect(within(item).getByRole('link', { name: 'Show field' }).getAttribute('href')).toBe('/teams/t/robots/r/safety?field=safety.failsafeTimeoutMs');
+    expect(within(item).getByRole('link', { name: 'Show field' }).getAttribute('href')).toBe(
+      '/teams/t/robots/r/safety?field=safety.failsafeTimeoutMs',
+    );
   });
 
   it('tells the links of several problems apart by the problem each is about', () => {
@@ -96,12 +119,22 @@ describe('links from a problem to its field', () => {
         <Routes>
           <Route
             path="/teams/:teamId/robots/:robotId/:section"
-            element={<ProblemList problems={[problem('error', ['safety', 'failsafeTimeoutMs'], 'Failsafe too slow'), problem('warning', ['safety', 'rampPerSecond'], 'Ramp too steep')]} available={['safety']} />}
+            element={
+              <ProblemList
+                problems={[
+                  problem('error', ['safety', 'failsafeTimeoutMs'], 'Failsafe too slow'),
+                  problem('warning', ['safety', 'rampPerSecond'], 'Ramp too steep'),
+                ]}
+                available={['safety']}
+              />
+            }
           />
         </Routes>
       </MemoryRouter>,
     );
-    expect(screen.getByRole('link', { name: 'Show field', description: 'Warning: Ramp too steep' }).getAttribute('href')).toBe('/teams/t/robots/r/safety?field=safety.rampPerSecond');
+    expect(
+      screen.getByRole('link', { name: 'Show field', description: 'Warning: Ramp too steep' }).getAttribute('href'),
+    ).toBe('/teams/t/robots/r/safety?field=safety.rampPerSecond');
     expect(screen.getByRole('link', { name: 'Show field', description: 'Error: Failsafe too slow' })).toBeTruthy();
   });
 });
@@ -111,7 +144,14 @@ describe('the problem line above a section', () => {
     const user = userEvent.setup();
     render(
       <MemoryRouter>
-        <SectionProblems label="Safety" available={['safety']} problems={[problem('error', ['safety', 'rampPerSecond'], 'Ramp too steep'), problem('warning', ['power', 'cells'])]} />
+        <SectionProblems
+          label="Safety"
+          available={['safety']}
+          problems={[
+            problem('error', ['safety', 'rampPerSecond'], 'Ramp too steep'),
+            problem('warning', ['power', 'cells']),
+          ]}
+        />
       </MemoryRouter>,
     );
     expect(screen.getByRole('status').textContent).toBe('Safety: 1 error, 1 warning');

@@ -13,7 +13,8 @@ describe('board catalogue', () => {
   });
 
   it('gives every pin a unique id on its board', () => {
-    for (const board of Object.values(BOARDS)) expect(new Set(board.pins.map((p) => p.id)).size).toBe(board.pins.length);
+    for (const board of Object.values(BOARDS))
+      expect(new Set(board.pins.map((p) => p.id)).size).toBe(board.pins.length);
   });
 
   it('names the bus and serial pins with ids that exist on the board', () => {
@@ -28,7 +29,8 @@ describe('board catalogue', () => {
 
 describe('Arduino AVR boards (REFERENCES §2)', () => {
   it('has PWM on 3, 5, 6, 9, 10, 11 on the Uno and the Nano', () => {
-    for (const id of ['uno', 'nano'] as const) expect(ids((p) => !!p.pwm, getBoard(id))).toEqual(['D3', 'D5', 'D6', 'D9', 'D10', 'D11']);
+    for (const id of ['uno', 'nano'] as const)
+      expect(ids((p) => !!p.pwm, getBoard(id))).toEqual(['D3', 'D5', 'D6', 'D9', 'D10', 'D11']);
   });
 
   it('has PWM on 2–13 and 44–46 on the Mega', () => {
@@ -37,7 +39,8 @@ describe('Arduino AVR boards (REFERENCES §2)', () => {
   });
 
   it('maps timers to pins as the reference table does', () => {
-    const byTimer = (id: 'uno' | 'mega2560') => Object.fromEntries(getBoard(id).timers.map((t) => [t.id, [...t.pins].sort()]));
+    const byTimer = (id: 'uno' | 'mega2560') =>
+      Object.fromEntries(getBoard(id).timers.map((t) => [t.id, [...t.pins].sort()]));
     // Uno: T0 6, 5 · T1 9, 10 · T2 11, 3.
     expect(byTimer('uno')).toEqual({ 0: ['D5', 'D6'], 1: ['D10', 'D9'], 2: ['D11', 'D3'] });
     // Mega: T0 13, 4 · T1 11, 12 · T2 10, 9 · T3 5, 2, 3 · T4 6, 7, 8 · T5 46, 45, 44.
@@ -77,7 +80,8 @@ describe('Arduino AVR boards (REFERENCES §2)', () => {
   });
 
   it('gives tone() timer 2', () => {
-    for (const id of ['uno', 'mega2560'] as const) expect(getBoard(id).timers.find((t) => t.libraries.includes('tone'))?.id).toBe(2);
+    for (const id of ['uno', 'mega2560'] as const)
+      expect(getBoard(id).timers.find((t) => t.libraries.includes('tone'))?.id).toBe(2);
   });
 
   it('puts the Mega serial ports on 0/1, 19/18, 17/16 and 15/14 (RX/TX)', () => {
@@ -161,7 +165,10 @@ describe('Raspberry Pi Pico (RP2040 datasheet PWM chapter; REFERENCES §4)', () 
   it('gives every GPIO PWM, and shares each slice channel between GPIO n and n + 16', () => {
     const header = pico.pins.filter((p) => p.onHeader);
     for (const p of header) expect(p.pwm).toBeDefined();
-    const pairs = [0, 1, 2, 3, 4, 5, 6, 10, 11, 12].map((n) => [findPin(pico, `GP${n}`)!, findPin(pico, `GP${n + 16}`)!]);
+    const pairs = [0, 1, 2, 3, 4, 5, 6, 10, 11, 12].map((n) => [
+      findPin(pico, `GP${n}`)!,
+      findPin(pico, `GP${n + 16}`)!,
+    ]);
     for (const [low, high] of pairs) expect(low.pwm).toEqual(high.pwm);
   });
 
@@ -175,6 +182,13 @@ describe('Raspberry Pi Pico (RP2040 datasheet PWM chapter; REFERENCES §4)', () 
   });
 
   it('offers UART receive on GP1, GP5, GP9, GP13, GP17 and GP21', () => {
-    expect(ids((p) => p.onHeader && !!p.uart?.some((u) => u.role === 'rx'), pico)).toEqual(['GP1', 'GP5', 'GP9', 'GP13', 'GP17', 'GP21']);
+    expect(ids((p) => p.onHeader && !!p.uart?.some((u) => u.role === 'rx'), pico)).toEqual([
+      'GP1',
+      'GP5',
+      'GP9',
+      'GP13',
+      'GP17',
+      'GP21',
+    ]);
   });
 });

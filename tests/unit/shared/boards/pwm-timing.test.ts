@@ -9,7 +9,11 @@ const setting = (board: Parameters<typeof getBoard>[0], pin: string, hz: number 
 
 describe('PWM settings per pin', () => {
   it('keeps the core default of 490.2 Hz when no frequency is asked for', () => {
-    expect(setting('uno', 'D9', null)).toMatchObject({ exact: true, steps: 255, avr: { prescaler: 64, mode: 'phase-correct' } });
+    expect(setting('uno', 'D9', null)).toMatchObject({
+      exact: true,
+      steps: 255,
+      avr: { prescaler: 64, mode: 'phase-correct' },
+    });
     expect(setting('uno', 'D9', null).actualHz).toBeCloseTo(490.196, 3);
   });
 

@@ -1,10 +1,17 @@
 import { describe, expect, it } from 'vitest';
-import { applyFindings, benchTestSteps, flipMotor, swapMotors, type BenchFinding } from '@shared/commissioning/commissioning';
+import {
+  applyFindings,
+  benchTestSteps,
+  flipMotor,
+  swapMotors,
+  type BenchFinding,
+} from '@shared/commissioning/commissioning';
 import { computeMixing } from '@shared/kinematics/mixing';
 import { buildStarterConfig } from '@shared/starter';
 
 const mecanum = () => buildStarterConfig({ layout: 'quad-mecanum', driver: 'pwm-in1-in2-stby' });
-const allFine = (names: string[]): BenchFinding[] => names.map((motor) => ({ motor, turned: motor, direction: 'expected' }));
+const allFine = (names: string[]): BenchFinding[] =>
+  names.map((motor) => ({ motor, turned: motor, direction: 'expected' }));
 
 describe('benchTestSteps', () => {
   it('runs the motors in configuration order with the firmware console line', () => {
@@ -18,7 +25,13 @@ describe('benchTestSteps', () => {
 describe('flipMotor', () => {
   it('toggles reversed on every wheel of that motor and no other', () => {
     const config = buildStarterConfig({ layout: 'skid-steer' });
-    const twoPerSide = { ...config, chassis: { ...config.chassis, wheels: config.chassis.wheels.map((w) => ({ ...w, motor: w.name.endsWith('left') ? 'Front left' : w.motor })) } };
+    const twoPerSide = {
+      ...config,
+      chassis: {
+        ...config.chassis,
+        wheels: config.chassis.wheels.map((w) => ({ ...w, motor: w.name.endsWith('left') ? 'Front left' : w.motor })),
+      },
+    };
     const flipped = flipMotor(twoPerSide, 'Front left');
     expect(flipped.chassis.wheels.map((w) => [w.name, w.reversed])).toEqual([
       ['Front left', true],
@@ -96,8 +109,15 @@ describe('applyFindings', () => {
       { motor: 'Rear left', turned: 'Rear left', direction: 'expected' },
     ]);
     if (!result.ok) throw new Error(result.reason);
-    expect(result.config.wiring.drivers.flatMap((d) => d.motors)).toEqual(['Front right', 'Rear right', 'Front left', 'Rear left']);
-    expect(result.actions).toEqual(['moved channels Front left to Front right, Front right to Rear right, Rear right to Front left']);
+    expect(result.config.wiring.drivers.flatMap((d) => d.motors)).toEqual([
+      'Front right',
+      'Rear right',
+      'Front left',
+      'Rear left',
+    ]);
+    expect(result.actions).toEqual([
+      'moved channels Front left to Front right, Front right to Rear right, Rear right to Front left',
+    ]);
   });
 
   it('refuses when two motors are said to turn the same wheels', () => {
@@ -113,7 +133,10 @@ describe('applyFindings', () => {
     const findings = allFine(config.motors.map((m) => m.name));
     findings[1] = { motor: 'Front right', turned: null, direction: 'expected' };
     const result = applyFindings(config, findings);
-    expect(result).toEqual({ ok: false, reason: expect.stringMatching(/Nothing turned for “Front right”.*power, driver and pins/) });
+    expect(result).toEqual({
+      ok: false,
+      reason: expect.stringMatching(/Nothing turned for “Front right”.*power, driver and pins/),
+    });
   });
 
   it('asks for every motor before changing anything', () => {

@@ -20,7 +20,11 @@ describe('driver kinds against their datasheets (REFERENCES §7)', () => {
   });
 
   it('gives the DRV8833 class 1.5 A RMS, 2 A peak and VM 2.7–10.8 V (DRV8833 datasheet)', () => {
-    expect(DRIVER_KINDS['two-input'].ratings).toMatchObject({ continuousA: 1.5, peakA: 2, motorVolts: { min: 2.7, max: 10.8 } });
+    expect(DRIVER_KINDS['two-input'].ratings).toMatchObject({
+      continuousA: 1.5,
+      peakA: 2,
+      motorVolts: { min: 2.7, max: 10.8 },
+    });
   });
 
   it('limits the dual half-bridge class to 25 kHz PWM', () => {

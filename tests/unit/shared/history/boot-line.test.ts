@@ -3,15 +3,24 @@ import { parseBootLine } from '@shared/history/boot-line';
 
 describe('reading a boot line', () => {
   it('reads the robot name, revision, hash and the rest', () => {
-    const result = parseBootLine('boot robot="Greenhouse Cart" revision=3 hash=1A2b3c4d generator=0.1.0 board=nano input=ppm');
+    const result = parseBootLine(
+      'boot robot="Greenhouse Cart" revision=3 hash=1A2b3c4d generator=0.1.0 board=nano input=ppm',
+    );
     expect(result).toEqual({
       ok: true,
-      line: { device: 'robot', robotName: 'Greenhouse Cart', revision: 3, hash: '1a2b3c4d', extra: { generator: '0.1.0', board: 'nano', input: 'ppm' } },
+      line: {
+        device: 'robot',
+        robotName: 'Greenhouse Cart',
+        revision: 3,
+        hash: '1a2b3c4d',
+        extra: { generator: '0.1.0', board: 'nano', input: 'ppm' },
+      },
     });
   });
 
   it('finds the line among others and behind a serial monitor time stamp', () => {
-    const pasted = 'ets Jun  8 2016 00:22:57\r\n12:03:04.120 -> boot robot="Aisle Scout" revision=12 hash=deadbeef generator=0.1.0\r\nhealth good=50/s';
+    const pasted =
+      'ets Jun  8 2016 00:22:57\r\n12:03:04.120 -> boot robot="Aisle Scout" revision=12 hash=deadbeef generator=0.1.0\r\nhealth good=50/s';
     const result = parseBootLine(pasted);
     expect(result.ok && result.line).toMatchObject({ robotName: 'Aisle Scout', revision: 12, hash: 'deadbeef' });
   });

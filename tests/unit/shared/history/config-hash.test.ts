@@ -36,7 +36,9 @@ describe('the configuration hash', () => {
   });
 
   it('does not depend on the order of keys', () => {
-    expect(canonicalJson({ b: 1, a: { d: [1, { z: 1, y: 2 }], c: null } })).toBe('{"a":{"c":null,"d":[1,{"y":2,"z":1}]},"b":1}');
+    expect(canonicalJson({ b: 1, a: { d: [1, { z: 1, y: 2 }], c: null } })).toBe(
+      '{"a":{"c":null,"d":[1,{"y":2,"z":1}]},"b":1}',
+    );
     const config = robotConfig();
     const reordered = Object.fromEntries(Object.entries(config).reverse());
     expect(configHash(reordered)).toBe(configHash(config));

@@ -9,15 +9,21 @@ describe('fieldChanges', () => {
 
   it('reports a changed field by its path with the old and new value', () => {
     const after = makeConfig('quad-mecanum', (c) => (c.chassis.wheels[2].radiusMm = 35));
-    expect(fieldChanges(makeConfig(), after)).toEqual([{ path: ['chassis', 'wheels', 2, 'radiusMm'], before: makeConfig().chassis.wheels[2].radiusMm, after: 35 }]);
+    expect(fieldChanges(makeConfig(), after)).toEqual([
+      { path: ['chassis', 'wheels', 2, 'radiusMm'], before: makeConfig().chassis.wheels[2].radiusMm, after: 35 },
+    ]);
   });
 
   it('compares a list of plain values as one value', () => {
-    expect(fieldChanges({ rates: [0.5, 1] }, { rates: [0.5, 0.8, 1] })).toEqual([{ path: ['rates'], before: [0.5, 1], after: [0.5, 0.8, 1] }]);
+    expect(fieldChanges({ rates: [0.5, 1] }, { rates: [0.5, 0.8, 1] })).toEqual([
+      { path: ['rates'], before: [0.5, 1], after: [0.5, 0.8, 1] },
+    ]);
   });
 
   it('reports an item present on one side only as one change', () => {
-    expect(fieldChanges({ w: [{ n: 1 }] }, { w: [{ n: 1 }, { n: 2 }] })).toEqual([{ path: ['w', 1], before: undefined, after: { n: 2 } }]);
+    expect(fieldChanges({ w: [{ n: 1 }] }, { w: [{ n: 1 }, { n: 2 }] })).toEqual([
+      { path: ['w', 1], before: undefined, after: { n: 2 } },
+    ]);
   });
 
   it('reports a key on one side only as one change of its whole value', () => {

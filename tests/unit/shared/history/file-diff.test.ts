@@ -19,7 +19,17 @@ describe('a side-by-side file diff', () => {
 
   it('keeps three unchanged lines around a change and counts the rest as skipped', () => {
     const diff = fileDiff('b.ino', numbered(20), numbered(20, { 10: 'line ten' }));
-    expect(diff.rows.map((r) => r.kind)).toEqual(['skip', 'same', 'same', 'same', 'changed', 'same', 'same', 'same', 'skip']);
+    expect(diff.rows.map((r) => r.kind)).toEqual([
+      'skip',
+      'same',
+      'same',
+      'same',
+      'changed',
+      'same',
+      'same',
+      'same',
+      'skip',
+    ]);
     expect(diff.rows[0]).toEqual({ kind: 'skip', count: 6 });
     expect(diff.rows[8]).toEqual({ kind: 'skip', count: 7 });
   });
@@ -65,8 +75,14 @@ describe('the difference between two sets of files', () => {
   it('sets apart files that differ only in the revision stamp', () => {
     const stamp = (revision: number, hash: string) =>
       `// Generated for revision ${revision} (configuration hash ${hash}).\n#define MW_REVISION ${revision}UL\n#define MW_CONFIG_HASH "${hash}"\nint pins = 13;\n`;
-    const before = [{ path: 'a.h', content: stamp(3, '0badc0de') }, { path: 'b.h', content: `${stamp(3, '0badc0de')}x\n` }];
-    const after = [{ path: 'a.h', content: stamp(4, 'cafef00d') }, { path: 'b.h', content: `${stamp(4, 'cafef00d')}y\n` }];
+    const before = [
+      { path: 'a.h', content: stamp(3, '0badc0de') },
+      { path: 'b.h', content: `${stamp(3, '0badc0de')}x\n` },
+    ];
+    const after = [
+      { path: 'a.h', content: stamp(4, 'cafef00d') },
+      { path: 'b.h', content: `${stamp(4, 'cafef00d')}y\n` },
+    ];
     const stamps = { from: { revision: 3, hash: '0badc0de' }, to: { revision: 4, hash: 'cafef00d' } };
     const result = filesDiff(before, after, { stamps });
     expect(result.stampOnly).toEqual(['a.h']);
@@ -74,8 +90,8 @@ describe('the difference between two sets of files', () => {
   });
 
   it('restamps only the revision number it was asked to', () => {
-    expect(restamp('revision=3 pins=3 "revision": 3 Revision 33', { revision: 3, hash: 'aa' }, { revision: 7, hash: 'bb' })).toBe(
-      'revision=7 pins=3 "revision": 7 Revision 33',
-    );
+    expect(
+      restamp('revision=3 pins=3 "revision": 3 Revision 33', { revision: 3, hash: 'aa' }, { revision: 7, hash: 'bb' }),
+    ).toBe('revision=7 pins=3 "revision": 7 Revision 33');
   });
 });

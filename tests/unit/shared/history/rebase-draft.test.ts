@@ -22,7 +22,12 @@ describe('rebaseRows', () => {
     const { base, theirs, mine } = threeWay();
     const rows = rebaseRows(base, theirs, mine);
     const byKey = Object.fromEntries(rows.map((r) => [r.key, r]));
-    expect(byKey['safety.failsafeTimeoutMs']).toMatchObject({ origin: 'theirs', suggested: 'theirs', from: '150 ms', to: '250 ms' });
+    expect(byKey['safety.failsafeTimeoutMs']).toMatchObject({
+      origin: 'theirs',
+      suggested: 'theirs',
+      from: '150 ms',
+      to: '250 ms',
+    });
     expect(byKey['safety.rampPerSecond']).toMatchObject({ origin: 'mine', suggested: 'mine' });
     expect(byKey['chassis.wheels.0.radiusMm']).toMatchObject({ origin: 'both', suggested: 'mine', baseWords: '30 mm' });
   });
@@ -39,7 +44,10 @@ describe('rebaseDraft', () => {
 
   it('takes their value where the person chose theirs', () => {
     const { base, theirs, mine } = threeWay();
-    const next = rebaseDraft(theirs, rebaseRows(base, theirs, mine), { 'chassis.wheels.0.radiusMm': 'theirs', 'safety.rampPerSecond': 'theirs' });
+    const next = rebaseDraft(theirs, rebaseRows(base, theirs, mine), {
+      'chassis.wheels.0.radiusMm': 'theirs',
+      'safety.rampPerSecond': 'theirs',
+    });
     expect(next.chassis.wheels[0].radiusMm).toBe(32);
     expect(next.safety.rampPerSecond).toBe(4);
   });
@@ -73,7 +81,11 @@ describe('rebaseDraft', () => {
     const mine = structuredClone(base);
     mine.controls.channels[0].centre = 1520;
     const next = rebaseDraft(theirs, rebaseRows(base, theirs, mine), {});
-    expect(next.controls.channels.map((c) => [c.number, c.centre])).toEqual([[1, 1520], [2, 1500], [3, 1500]]);
+    expect(next.controls.channels.map((c) => [c.number, c.centre])).toEqual([
+      [1, 1520],
+      [2, 1500],
+      [3, 1500],
+    ]);
   });
 
   it('takes out the items I removed when the person keeps mine', () => {

@@ -51,7 +51,10 @@ describe('setting changes in words', () => {
 
   it('names a driver pin by its role', () => {
     const after = edited((c) => (c.wiring.drivers[0].pins['a.fwd'] = { pin: 'D5', locked: true }));
-    expect(texts(mecanum(), after)).toEqual(['Driver 1: A PWM forward pin unassigned → D5', 'Driver 1: A PWM forward pin locked off → on']);
+    expect(texts(mecanum(), after)).toEqual([
+      'Driver 1: A PWM forward pin unassigned → D5',
+      'Driver 1: A PWM forward pin locked off → on',
+    ]);
   });
 
   it('says when a pin role appears', () => {
@@ -79,7 +82,10 @@ describe('setting changes in words', () => {
 
   it('puts the robot name under Robot', () => {
     const after = edited((c) => (c.name = 'Aisle Scout II'));
-    expect(settingChanges(mecanum(), after)[0]).toMatchObject({ section: 'Robot', text: `Robot: name ${mecanum().name} → Aisle Scout II` });
+    expect(settingChanges(mecanum(), after)[0]).toMatchObject({
+      section: 'Robot',
+      text: `Robot: name ${mecanum().name} → Aisle Scout II`,
+    });
   });
 
   it('finds nothing between a configuration and its copy', () => {
@@ -88,7 +94,9 @@ describe('setting changes in words', () => {
 
   it('names a changed layout parameter, with the unit read from its key', () => {
     const after = edited((c) => (c.chassis.params.wheelbaseMm = 180));
-    expect(settingChanges(mecanum(), after)).toMatchObject([{ subject: 'Chassis', field: 'layout wheelbase', from: '160 mm', to: '180 mm' }]);
+    expect(settingChanges(mecanum(), after)).toMatchObject([
+      { subject: 'Chassis', field: 'layout wheelbase', from: '160 mm', to: '180 mm' },
+    ]);
   });
 
   it('names a channel by its number and its name', () => {
@@ -97,7 +105,9 @@ describe('setting changes in words', () => {
   });
 
   it('names a field of some other JSON value by its last key', () => {
-    expect(settingChanges({ a: { radiusMm: 30 } }, { a: { radiusMm: 31 } })).toMatchObject([{ path: ['a', 'radiusMm'], field: 'radius', from: '30 mm', to: '31 mm' }]);
+    expect(settingChanges({ a: { radiusMm: 30 } }, { a: { radiusMm: 31 } })).toMatchObject([
+      { path: ['a', 'radiusMm'], field: 'radius', from: '30 mm', to: '31 mm' },
+    ]);
   });
 
   it('puts a value at a path in words as a change there would read it', () => {

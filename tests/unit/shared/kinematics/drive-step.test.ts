@@ -7,11 +7,17 @@ import { shapeAxis } from '@shared/shaping/input-curves';
 import { makeConfig } from '../../../factories/engine';
 import { seededRandom } from '../../../factories/random';
 
-const randomSticks = (random: () => number): Sticks => ({ forward: random() * 2 - 1, strafe: random() * 2 - 1, yaw: random() * 2 - 1 });
+const randomSticks = (random: () => number): Sticks => ({
+  forward: random() * 2 - 1,
+  strafe: random() * 2 - 1,
+  yaw: random() * 2 - 1,
+});
 
 /** Shaping that changes nothing: no deadband, linear, full rate; no threshold, no limit. */
 function neutral(config: RobotConfig): void {
-  STICK_AXES.forEach((axis) => (config.controls.axes[axis] = { ...config.controls.axes[axis], deadband: 0, expo: 0, rate: 1 }));
+  STICK_AXES.forEach(
+    (axis) => (config.controls.axes[axis] = { ...config.controls.axes[axis], deadband: 0, expo: 0, rate: 1 }),
+  );
   config.controls.rateSwitch = { ...config.controls.rateSwitch, channel: null };
   config.motors.forEach((m) => (m.startThreshold = 0));
   config.safety.outputLimitPercent = 100;
@@ -25,7 +31,11 @@ describe('the drive step', () => {
     for (let i = 0; i < 200; i += 1) {
       const sticks = randomSticks(random);
       // An axis the starter maps to no channel (strafe on a differential pair) reads 0, as in the firmware.
-      const expected = mixSticks(mixing, { ...sticks, strafe: config.controls.axes.strafe.channel === null ? 0 : sticks.strafe }, 'scale');
+      const expected = mixSticks(
+        mixing,
+        { ...sticks, strafe: config.controls.axes.strafe.channel === null ? 0 : sticks.strafe },
+        'scale',
+      );
       const step = driveStep(config, sticks, { mixing });
       step.outputs.forEach((v, k) => expect(v).toBeCloseTo(expected[k], 12));
     }
@@ -45,10 +55,17 @@ describe('the drive step', () => {
     for (let i = 0; i < 200; i += 1) {
       const sticks = randomSticks(random);
       const rateScale = config.controls.rateSwitch.rates[1];
-      const shaped = Object.fromEntries(STICK_AXES.map((a) => [a, shapeAxis(sticks[a], unit, { ...config.controls.axes[a], reverse: false }, rateScale)])) as Sticks;
+      const shaped = Object.fromEntries(
+        STICK_AXES.map((a) => [
+          a,
+          shapeAxis(sticks[a], unit, { ...config.controls.axes[a], reverse: false }, rateScale),
+        ]),
+      ) as Sticks;
       const limited = mixSticks(mixing, shaped, 'clip').map((c) => c * 0.7);
       const mixed = mixSticks(mixing, shaped, 'clip');
-      const outputs = mixed.map((c, k) => config.motors[k].startThreshold + (0.7 - config.motors[k].startThreshold) * Math.abs(c)).map((v, k) => (Math.abs(mixed[k]) < 1e-6 ? 0 : Math.sign(mixed[k]) * v));
+      const outputs = mixed
+        .map((c, k) => config.motors[k].startThreshold + (0.7 - config.motors[k].startThreshold) * Math.abs(c))
+        .map((v, k) => (Math.abs(mixed[k]) < 1e-6 ? 0 : Math.sign(mixed[k]) * v));
       const step = driveStep(config, sticks, { mixing, ratePosition: 1 });
       step.outputs.forEach((v, k) => expect(v).toBeCloseTo(outputs[k], 12));
       expect(step.motion.twist.vxMps).toBeCloseTo(forwardKinematics(mixing, limited).twist.vxMps, 12);
@@ -56,14 +73,19 @@ describe('the drive step', () => {
   });
 
   it('reads a missing rate switch position as the lowest rate, like the engine', () => {
-    const config = makeConfig('quad-mecanum', (c) => (c.controls.axes.forward = { ...c.controls.axes.forward, deadband: 0, expo: 0, rate: 1 }));
+    const config = makeConfig(
+      'quad-mecanum',
+      (c) => (c.controls.axes.forward = { ...c.controls.axes.forward, deadband: 0, expo: 0, rate: 1 }),
+    );
     const step = driveStep(config, { forward: 1, strafe: 0, yaw: 0 });
     expect(step.shapedSticks.forward).toBeCloseTo(config.controls.rateSwitch.rates[0], 12);
   });
 
   it('does not reverse the sticks, which are already in the driver’s view', () => {
     const config = makeConfig('differential', (c) => (c.controls.axes.forward.reverse = true));
-    expect(driveStep(config, { forward: 1, strafe: 0, yaw: 0 }, { ratePosition: 1 }).shapedSticks.forward).toBeGreaterThan(0);
+    expect(
+      driveStep(config, { forward: 1, strafe: 0, yaw: 0 }, { ratePosition: 1 }).shapedSticks.forward,
+    ).toBeGreaterThan(0);
   });
 
   it('names the axes it ignores: unmapped, or a motion the layout cannot make', () => {
@@ -75,7 +97,11 @@ describe('the drive step', () => {
 
   it('moves each command toward its target by at most the ramp limit times the step', () => {
     const config = makeConfig('differential', (c) => (c.safety.rampPerSecond = 4));
-    const step = driveStep(config, { forward: 1, strafe: 0, yaw: 0 }, { ratePosition: 1, ramp: { previous: [0, 0], dtS: 0.05 } });
+    const step = driveStep(
+      config,
+      { forward: 1, strafe: 0, yaw: 0 },
+      { ratePosition: 1, ramp: { previous: [0, 0], dtS: 0.05 } },
+    );
     step.ramped.forEach((c) => expect(c).toBeCloseTo(0.2, 12));
     expect(step.targets.every((t) => t > 0.2)).toBe(true);
   });

@@ -64,7 +64,9 @@ describe('the pseudo-inverse', () => {
       [1, 1, 1, 1],
       [-1, 1, -1, 1],
     ].map((row) => row.map((v) => (v * r) / 4));
-    pseudoInverse(wheelJacobian(wheels)).inverse.forEach((row, i) => row.forEach((v, j) => expect(v).toBeCloseTo(book[i][j], 12)));
+    pseudoInverse(wheelJacobian(wheels)).inverse.forEach((row, i) =>
+      row.forEach((v, j) => expect(v).toBeCloseTo(book[i][j], 12)),
+    );
   });
 });
 

@@ -77,13 +77,19 @@ describe('the mixing matrix', () => {
   it('combines wheels that share a motor into one row', () => {
     const twoMotors = makeConfig('skid-steer');
     twoMotors.chassis.wheels.forEach((w) => (w.motor = w.yMm > 0 ? 'Left' : 'Right'));
-    twoMotors.motors = [{ ...twoMotors.motors[0], name: 'Left' }, { ...twoMotors.motors[0], name: 'Right' }];
+    twoMotors.motors = [
+      { ...twoMotors.motors[0], name: 'Left' },
+      { ...twoMotors.motors[0], name: 'Right' },
+    ];
     expect(computeMixing(twoMotors).matrix).toEqual(computeMixing(makeConfig('differential')).matrix);
   });
 
   it('says when no motor can move the robot', () => {
     const stuck = computeMixing(
-      makeCustomConfig([makeWheel({ name: 'A', motor: 'A', xMm: 0, yMm: 50 }), makeWheel({ name: 'B', motor: 'A', xMm: 0, yMm: 50, reversed: true })]),
+      makeCustomConfig([
+        makeWheel({ name: 'A', motor: 'A', xMm: 0, yMm: 50 }),
+        makeWheel({ name: 'B', motor: 'A', xMm: 0, yMm: 50, reversed: true }),
+      ]),
     );
     expect(stuck.rank).toBe(0);
     expect(stuck.notes[0]).toMatch(/No motor can move this robot/);
@@ -95,7 +101,9 @@ describe('what if a motor were reversed', () => {
     const report = whatIfReversed(makeConfig('differential'), 'Left');
     const forward = report.cases.find((c) => c.axis === 'forward')!;
     expect(forward.changed).toBe(true);
-    expect(forward.sentence).toBe('Forward stick: instead of driving forward, the robot spins left (counter-clockwise) on the spot at 100 %.');
+    expect(forward.sentence).toBe(
+      'Forward stick: instead of driving forward, the robot spins left (counter-clockwise) on the spot at 100 %.',
+    );
     expect(report.cases.find((c) => c.axis === 'strafe')!.applicable).toBe(false);
   });
 

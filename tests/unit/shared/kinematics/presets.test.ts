@@ -27,7 +27,9 @@ describe('starter layouts', () => {
   });
 
   it('makes omni tracks when asked', () => {
-    expect(presetChassis('trio-omni', { element: 'omni-tracks' }).wheels.every((w) => w.kind === 'omni-track')).toBe(true);
+    expect(presetChassis('trio-omni', { element: 'omni-tracks' }).wheels.every((w) => w.kind === 'omni-track')).toBe(
+      true,
+    );
     expect(presetChassis('differential', { element: 'tracks' }).wheels.every((w) => w.kind === 'track')).toBe(true);
   });
 
@@ -50,7 +52,10 @@ describe('starter layouts', () => {
       expect.unreachable('a wheel radius of 0 mm was accepted');
     } catch (error) {
       expect(error).toBeInstanceOf(z.ZodError);
-      expect((error as z.ZodError).issues[0]).toMatchObject({ path: ['wheelRadiusMm'], message: 'Wheel radius must be at least 5 mm' });
+      expect((error as z.ZodError).issues[0]).toMatchObject({
+        path: ['wheelRadiusMm'],
+        message: 'Wheel radius must be at least 5 mm',
+      });
     }
   });
 });

@@ -26,11 +26,15 @@ describe('roller lines seen from above', () => {
   });
 
   it('keeps calling a long, narrow X base an X', () => {
-    expect(rollerPattern(presetChassis('quad-mecanum', { rollers: 'x', wheelbaseMm: 400, trackWidthMm: 120 }).wheels)).toBe('x');
+    expect(
+      rollerPattern(presetChassis('quad-mecanum', { rollers: 'x', wheelbaseMm: 400, trackWidthMm: 120 }).wheels),
+    ).toBe('x');
   });
 
   it('reports a mixed pattern when one wheel is fitted the wrong way round', () => {
-    const wheels = presetChassis('quad-mecanum').wheels.map((w, i) => (i === 0 ? { ...w, rollerAngleDeg: -w.rollerAngleDeg } : w));
+    const wheels = presetChassis('quad-mecanum').wheels.map((w, i) =>
+      i === 0 ? { ...w, rollerAngleDeg: -w.rollerAngleDeg } : w,
+    );
     expect(rollerPattern(wheels)).toBe('mixed');
   });
 

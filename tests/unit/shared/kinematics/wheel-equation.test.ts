@@ -16,7 +16,10 @@ describe('the general wheel equation', () => {
   it("reproduces Modern Robotics' three-omni H(0)", () => {
     const d = 0.15;
     const r = 0.03;
-    const at = (deg: number) => [d * 1000 * Math.cos((deg * Math.PI) / 180), d * 1000 * Math.sin((deg * Math.PI) / 180)];
+    const at = (deg: number) => [
+      d * 1000 * Math.cos((deg * Math.PI) / 180),
+      d * 1000 * Math.sin((deg * Math.PI) / 180),
+    ];
     const wheels = [
       makeWheel({ xMm: at(90)[0], yMm: at(90)[1], driveAngleDeg: 0, radiusMm: r * 1000 }),
       makeWheel({ xMm: at(-30)[0], yMm: at(-30)[1], driveAngleDeg: -120, radiusMm: r * 1000 }),
@@ -48,7 +51,11 @@ describe('the general wheel equation', () => {
     const l = 0.1;
     const w = 0.12;
     const r = 0.04;
-    const { wheels } = presetChassis('quad-mecanum', { wheelbaseMm: 2 * l * 1000, trackWidthMm: 2 * w * 1000, wheelRadiusMm: r * 1000 });
+    const { wheels } = presetChassis('quad-mecanum', {
+      wheelbaseMm: 2 * l * 1000,
+      trackWidthMm: 2 * w * 1000,
+      wheelRadiusMm: r * 1000,
+    });
     const book = [
       [-l - w, 1, -1],
       [l + w, 1, 1],
@@ -64,7 +71,12 @@ describe('the general wheel equation', () => {
     // Beyond the starter's size limits, so as a custom wheel table with the X pattern's rollers.
     const corner = (xMm: number, yMm: number, rollerAngleDeg: number) =>
       makeWheel({ kind: 'mecanum', xMm, yMm, rollerAngleDeg, radiusMm: 1000 });
-    const h = wheelJacobian([corner(2000, 1000, -45), corner(2000, -1000, 45), corner(-2000, -1000, -45), corner(-2000, 1000, 45)]);
+    const h = wheelJacobian([
+      corner(2000, 1000, -45),
+      corner(2000, -1000, 45),
+      corner(-2000, -1000, -45),
+      corner(-2000, 1000, 45),
+    ]);
     expectRows([multiplyVector(h, [0, 1, 0])], [[1, 1, 1, 1]]);
     expectRows([multiplyVector(h, [0, 0, 1])], [[-1, 1, -1, 1]]);
     expectRows([multiplyVector(h, [1, 0, 0])], [[-3, 3, 3, -3]]);
@@ -78,7 +90,11 @@ describe('the general wheel equation', () => {
     const ly = 0.08;
     const r = 0.03;
     const k = lx + ly;
-    const { wheels } = presetChassis('quad-mecanum', { wheelbaseMm: 2 * lx * 1000, trackWidthMm: 2 * ly * 1000, wheelRadiusMm: r * 1000 });
+    const { wheels } = presetChassis('quad-mecanum', {
+      wheelbaseMm: 2 * lx * 1000,
+      trackWidthMm: 2 * ly * 1000,
+      wheelRadiusMm: r * 1000,
+    });
     const byName = Object.fromEntries(wheels.map((w) => [w.name, w]));
     for (const [vx, vy, omega] of [
       [0.3, -0.2, 0.7],

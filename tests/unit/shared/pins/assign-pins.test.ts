@@ -11,35 +11,50 @@ import { buildStarterConfig } from '@shared/starter';
 import { buildConfig, withPins, type ConfigOptions } from '../../../fixtures/robot-config-factory';
 
 const COMBOS: ConfigOptions[] = DRIVE_LAYOUT_IDS.flatMap((layout) =>
-  INPUT_SOURCE_IDS.flatMap((source) => BOARD_IDS.flatMap((board) => DRIVER_KIND_IDS.map((driver) => ({ layout, source, board, driver, switches: true })))),
+  INPUT_SOURCE_IDS.flatMap((source) =>
+    BOARD_IDS.flatMap((board) => DRIVER_KIND_IDS.map((driver) => ({ layout, source, board, driver, switches: true }))),
+  ),
 );
 
 /** The engine's starter configuration for a combination: the real presets, channels and drivers. */
-const starter = (o: ConfigOptions) => buildStarterConfig({ layout: o.layout!, board: o.board, input: o.source, driver: o.driver });
+const starter = (o: ConfigOptions) =>
+  buildStarterConfig({ layout: o.layout!, board: o.board, input: o.source, driver: o.driver });
 
 const pinsOf = (config: RobotConfig) => collectDemands(config).map((d) => [d.roleName, d.pin, d.locked]);
 const isOneSentence = (text: string) => /^[A-Z“].*[.]$/.test(text) && !/[.] [A-Z]/.test(text);
 
 /** PWM roles of a configuration, counted from the driver catalogue (independent of the pin plan). */
 function pwmRoleCount(config: RobotConfig): number {
-  return config.wiring.drivers.reduce((sum, d) => sum + driverPinRoles(d.kind, d.motors.length).filter((r) => r.need === 'pwm' && !r.optional).length, 0);
+  return config.wiring.drivers.reduce(
+    (sum, d) => sum + driverPinRoles(d.kind, d.motors.length).filter((r) => r.need === 'pwm' && !r.optional).length,
+    0,
+  );
 }
 
 describe('automatic assignment over every starter layout, input source, board and driver kind', () => {
-  const results = COMBOS.map((options) => ({ options, config: starter(options), result: assignPins(starter(options)) }));
+  const results = COMBOS.map((options) => ({
+    options,
+    config: starter(options),
+    result: assignPins(starter(options)),
+  }));
 
   it('passes the pin check whenever it finds a plan, with every required role filled', () => {
     for (const { options, result } of results) {
       if (!result.ok) continue;
       const errors = checkPinPlan(result.config).filter((p) => p.severity === 'error');
       expect(errors, JSON.stringify(options)).toEqual([]);
-      for (const d of collectDemands(result.config)) if (d.required) expect(d.pin, `${JSON.stringify(options)} ${d.roleName}`).not.toBeNull();
+      for (const d of collectDemands(result.config))
+        if (d.required) expect(d.pin, `${JSON.stringify(options)} ${d.roleName}`).not.toBeNull();
     }
   });
 
   it('finds a plan for every combination on the Mega, the ESP32 and the Pico', () => {
-    const failed = results.filter(({ options, result }) => options.board !== 'uno' && options.board !== 'nano' && !result.ok);
-    expect(failed.map(({ options, result }) => `${JSON.stringify(options)}: ${result.ok ? '' : result.reason}`)).toEqual([]);
+    const failed = results.filter(
+      ({ options, result }) => options.board !== 'uno' && options.board !== 'nano' && !result.ok,
+    );
+    expect(
+      failed.map(({ options, result }) => `${JSON.stringify(options)}: ${result.ok ? '' : result.reason}`),
+    ).toEqual([]);
   });
 
   it('gives one sentence naming the board whenever it finds none', () => {
@@ -55,7 +70,9 @@ describe('automatic assignment over every starter layout, input source, board an
   it('backs every PWM shortage it reports with the board’s and the layout’s own counts', () => {
     for (const { config, result } of results) {
       if (result.ok) continue;
-      const match = /^The (Uno|Nano) has (\d+) PWM pins, (?:\d+ once .*; )?this layout needs (\d+)[.]$/.exec(result.reason);
+      const match = /^The (Uno|Nano) has (\d+) PWM pins, (?:\d+ once .*; )?this layout needs (\d+)[.]$/.exec(
+        result.reason,
+      );
       if (!match) continue;
       const board = getBoard(config.wiring.board);
       expect(Number(match[2])).toBe(board.pins.filter((p) => p.pwm).length);
@@ -80,7 +97,10 @@ describe('automatic assignment over every starter layout, input source, board an
 
 describe('reasons for impossible plans', () => {
   it('says the Uno has too few PWM pins for four dual half-bridges', () => {
-    expect(assignPins(buildConfig({ layout: 'quad-mecanum', driver: 'dual-pwm' }))).toEqual({ ok: false, reason: 'The Uno has 6 PWM pins, this layout needs 8.' });
+    expect(assignPins(buildConfig({ layout: 'quad-mecanum', driver: 'dual-pwm' }))).toEqual({
+      ok: false,
+      reason: 'The Uno has 6 PWM pins, this layout needs 8.',
+    });
   });
 
   it('counts the PWM pins an ESC’s servo timer takes', () => {
@@ -90,7 +110,11 @@ describe('reasons for impossible plans', () => {
 
   it('explains that the only serial port on the Uno is busy with diagnostics', () => {
     const result = assignPins(buildConfig({ source: 'sbus' }));
-    expect(result).toEqual({ ok: false, reason: 'The Uno’s only serial receive pin, D0, carries the USB serial port that serial diagnostics use; turn diagnostics off to receive the serial receiver there.' });
+    expect(result).toEqual({
+      ok: false,
+      reason:
+        'The Uno’s only serial receive pin, D0, carries the USB serial port that serial diagnostics use; turn diagnostics off to receive the serial receiver there.',
+    });
   });
 
   it('uses D0 for the receiver once diagnostics are off, with a warning about uploads', () => {
@@ -101,25 +125,38 @@ describe('reasons for impossible plans', () => {
 
   it('counts external-interrupt pins', () => {
     const config = withPins(buildConfig({ source: 'ppm' }), { 'Driver 1/a.dir': 'D2', 'Driver 1/b.dir': 'D3' }, true);
-    expect(assignPins(config)).toEqual({ ok: false, reason: 'The Uno has 0 free pins with an external interrupt, this layout needs 1.' });
+    expect(assignPins(config)).toEqual({
+      ok: false,
+      reason: 'The Uno has 0 free pins with an external interrupt, this layout needs 1.',
+    });
   });
 
   it('names a locked pin that cannot do its role', () => {
     const config = withPins(buildConfig({}), { 'Driver 1/a.pwm': 'D4' }, true);
     const result = assignPins(config);
-    expect(result).toEqual({ ok: false, reason: 'D4 has no PWM, but Driver 1 A PWM needs PWM; unlock or move that pin.' });
+    expect(result).toEqual({
+      ok: false,
+      reason: 'D4 has no PWM, but Driver 1 A PWM needs PWM; unlock or move that pin.',
+    });
   });
 
   it('refuses to plan pins while a motor has no driver channel', () => {
     const config = buildConfig({});
     config.wiring.drivers[0].motors = ['Left'];
-    expect(assignPins(config)).toEqual({ ok: false, reason: 'Motor “Right” is not on any driver channel; fix that before pins can be assigned.' });
+    expect(assignPins(config)).toEqual({
+      ok: false,
+      reason: 'Motor “Right” is not on any driver channel; fix that before pins can be assigned.',
+    });
   });
 });
 
 describe('choices the assignment makes', () => {
   it('keeps locked pins where they are', () => {
-    const config = withPins(buildConfig({ layout: 'quad-mecanum', board: 'mega2560', driver: 'dual-pwm', source: 'nrf24' }), { 'Driver 3/a.fwd': 'D46', 'input/ce': 'D30' }, true);
+    const config = withPins(
+      buildConfig({ layout: 'quad-mecanum', board: 'mega2560', driver: 'dual-pwm', source: 'nrf24' }),
+      { 'Driver 3/a.fwd': 'D46', 'input/ce': 'D30' },
+      true,
+    );
     const result = assignPins(config);
     expect(result.ok).toBe(true);
     if (!result.ok) return;
@@ -128,15 +165,39 @@ describe('choices the assignment makes', () => {
   });
 
   it('leaves external interrupts, serial ports and the unused SPI bus free on the Mega', () => {
-    const result = assignPins(buildConfig({ layout: 'quad-mecanum', board: 'mega2560', driver: 'dual-pwm', source: 'rc-pwm', switches: true }));
+    const result = assignPins(
+      buildConfig({ layout: 'quad-mecanum', board: 'mega2560', driver: 'dual-pwm', source: 'rc-pwm', switches: true }),
+    );
     expect(result.ok).toBe(true);
     if (!result.ok) return;
     const driverPins = result.config.wiring.drivers.flatMap((d) => Object.values(d.pins).map((a) => a.pin));
-    for (const precious of ['D2', 'D3', 'D18', 'D19', 'D20', 'D21', 'D14', 'D15', 'D16', 'D17', 'D50', 'D51', 'D52', 'D53', 'D0', 'D1']) expect(driverPins).not.toContain(precious);
+    for (const precious of [
+      'D2',
+      'D3',
+      'D18',
+      'D19',
+      'D20',
+      'D21',
+      'D14',
+      'D15',
+      'D16',
+      'D17',
+      'D50',
+      'D51',
+      'D52',
+      'D53',
+      'D0',
+      'D1',
+    ])
+      expect(driverPins).not.toContain(precious);
   });
 
   it('drops unlocked pins of roles that no longer exist, and keeps locked ones', () => {
-    const config = withPins(withPins(buildConfig({ source: 'ppm' }), { 'input/rx': 'D4', 'Driver 1/c.pwm': 'D5' }), { 'input/ch9': 'A5' }, true);
+    const config = withPins(
+      withPins(buildConfig({ source: 'ppm' }), { 'input/rx': 'D4', 'Driver 1/c.pwm': 'D5' }),
+      { 'input/ch9': 'A5' },
+      true,
+    );
     const result = assignPins(config);
     expect(result.ok).toBe(true);
     if (!result.ok) return;
@@ -164,23 +225,43 @@ describe('choices the assignment makes', () => {
   });
 
   it('runs a 20 kHz layout on 16-bit timers on the Mega', () => {
-    const result = assignPins(buildConfig({ layout: 'quad-mecanum', board: 'mega2560', driver: 'dual-pwm', source: 'nrf24', pwmFrequencyHz: 20000 }));
+    const result = assignPins(
+      buildConfig({
+        layout: 'quad-mecanum',
+        board: 'mega2560',
+        driver: 'dual-pwm',
+        source: 'nrf24',
+        pwmFrequencyHz: 20000,
+      }),
+    );
     expect(result.ok).toBe(true);
     if (!result.ok) return;
     const board = getBoard('mega2560');
-    const timers = result.config.wiring.drivers.flatMap((d) => [d.pins['a.fwd'].pin, d.pins['a.rev'].pin]).map((id) => board.timers.find((t) => t.pins.includes(id!))!);
+    const timers = result.config.wiring.drivers
+      .flatMap((d) => [d.pins['a.fwd'].pin, d.pins['a.rev'].pin])
+      .map((id) => board.timers.find((t) => t.pins.includes(id!))!);
     for (const t of timers) expect(t.bits).toBe(16);
     expect(checkPinPlan(result.config)).toEqual([]);
   });
 
   it('keeps the two PWM inputs of an RP2040 driver on separate slice channels at one frequency', () => {
-    const result = assignPins(buildConfig({ layout: 'quad-omni-x', board: 'rp2040-pico', driver: 'two-input', source: 'nrf24', pwmFrequencyHz: 20000 }));
+    const result = assignPins(
+      buildConfig({
+        layout: 'quad-omni-x',
+        board: 'rp2040-pico',
+        driver: 'two-input',
+        source: 'nrf24',
+        pwmFrequencyHz: 20000,
+      }),
+    );
     expect(result.ok && checkPinPlan(result.config).filter((p) => p.severity === 'error')).toEqual([]);
   });
 });
 
 describe('assignment around locked pins', () => {
-  const feasible = COMBOS.filter((o) => o.board === 'nano' || o.board === 'esp32-devkitc' || o.board === 'rp2040-pico').flatMap((options) => {
+  const feasible = COMBOS.filter(
+    (o) => o.board === 'nano' || o.board === 'esp32-devkitc' || o.board === 'rp2040-pico',
+  ).flatMap((options) => {
     const result = assignPins(buildConfig(options));
     return result.ok ? [{ options, config: result.config }] : [];
   });
@@ -207,7 +288,9 @@ describe('assignment around locked pins', () => {
 
   it('gives the same plan for the same input', () => {
     const options = feasible[0].options;
-    expect(pinsOf(assignPins(buildConfig(options)).ok ? feasible[0].config : buildConfig(options))).toEqual(pinsOf(feasible[0].config));
+    expect(pinsOf(assignPins(buildConfig(options)).ok ? feasible[0].config : buildConfig(options))).toEqual(
+      pinsOf(feasible[0].config),
+    );
   });
 });
 

@@ -40,7 +40,9 @@ describe('logic-level-too-low', () => {
   });
 
   it('is quiet for an L298-class driver on a 3.3 V board (inputs high from 2.3 V)', () => {
-    expect(codes(assignedPlan({ driver: 'en-in1-in2', source: 'ppm', board: 'rp2040-pico' }))).not.toContain('logic-level-too-low');
+    expect(codes(assignedPlan({ driver: 'en-in1-in2', source: 'ppm', board: 'rp2040-pico' }))).not.toContain(
+      'logic-level-too-low',
+    );
   });
 });
 
@@ -49,7 +51,10 @@ describe('motors and driver channels', () => {
     const config = reparse(unoPlan(), (c) => {
       c.wiring.drivers[0].motors = ['Left'];
     });
-    expect(problemsWith(config, 'motor-not-on-driver')[0]).toMatchObject({ roles: ['Right'], path: ['motors', 1, 'name'] });
+    expect(problemsWith(config, 'motor-not-on-driver')[0]).toMatchObject({
+      roles: ['Right'],
+      path: ['motors', 1, 'name'],
+    });
   });
 
   it('is quiet when every motor has a channel', () => {
@@ -60,7 +65,9 @@ describe('motors and driver channels', () => {
     const config = reparse(assignedPlan({ driver: 'dual-pwm', source: 'ppm' }), (c) => {
       c.wiring.drivers[1].motors = ['Left'];
     });
-    expect(problemsWith(config, 'motor-on-two-drivers')[0].message).toBe('Motor “Left” is on Driver 1 and Driver 2; one motor takes one driver channel.');
+    expect(problemsWith(config, 'motor-on-two-drivers')[0].message).toBe(
+      'Motor “Left” is on Driver 1 and Driver 2; one motor takes one driver channel.',
+    );
   });
 
   it('reports a driver naming a motor the robot lacks', () => {
@@ -101,7 +108,9 @@ describe('stop-mode-unsupported', () => {
     const config = reparse(unoPlan(), (c) => {
       c.wiring.drivers[0].stopMode = 'coast';
     });
-    expect(problemsWith(config, 'stop-mode-unsupported')[0].message).toBe('Driver 1 cannot coast with its pins as wired; it will brake instead.');
+    expect(problemsWith(config, 'stop-mode-unsupported')[0].message).toBe(
+      'Driver 1 cannot coast with its pins as wired; it will brake instead.',
+    );
   });
 
   it('is quiet for a PWM + direction module set to brake', () => {
@@ -114,7 +123,9 @@ describe('stop-mode-unsupported', () => {
     });
     expect(plan.wiring.drivers[0].pins['a.en'].pin).not.toBeNull();
     expect(codes(plan)).not.toContain('stop-mode-unsupported');
-    expect(problemsWith(withPins(plan, { 'Driver 1/a.en': null }), 'stop-mode-unsupported')[0].message).toContain('coasting needs the enable pin');
+    expect(problemsWith(withPins(plan, { 'Driver 1/a.en': null }), 'stop-mode-unsupported')[0].message).toContain(
+      'coasting needs the enable pin',
+    );
   });
 });
 

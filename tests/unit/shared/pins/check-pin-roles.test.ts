@@ -14,7 +14,12 @@ describe('the pin check on complete plans', () => {
   });
 
   it('uses only codes from the published list, with their severity', () => {
-    const problems = checkPinPlan(unoPlan({ source: 'nrf24', pwmFrequencyHz: 20000 }, { 'Driver 1/a.pwm': 'D5', 'Driver 1/b.dir': 'D11', 'status-led': null }));
+    const problems = checkPinPlan(
+      unoPlan(
+        { source: 'nrf24', pwmFrequencyHz: 20000 },
+        { 'Driver 1/a.pwm': 'D5', 'Driver 1/b.dir': 'D11', 'status-led': null },
+      ),
+    );
     expect(problems.length).toBeGreaterThan(3);
     for (const p of problems) expect(PIN_PROBLEM_CODES[p.code as keyof typeof PIN_PROBLEM_CODES]).toBe(p.severity);
   });
@@ -28,7 +33,11 @@ describe('the pin check on complete plans', () => {
 describe('pin-missing', () => {
   it('reports a required role without a pin, pointing at its field', () => {
     const [problem] = problemsWith(unoPlan({}, { 'Driver 1/a.pwm': null }), 'pin-missing');
-    expect(problem).toMatchObject({ severity: 'error', roles: ['Driver 1/a.pwm'], path: ['wiring', 'drivers', 0, 'pins', 'a.pwm', 'pin'] });
+    expect(problem).toMatchObject({
+      severity: 'error',
+      roles: ['Driver 1/a.pwm'],
+      path: ['wiring', 'drivers', 0, 'pins', 'a.pwm', 'pin'],
+    });
     expect(problem.hint).toBe('Pins that can: D9, D5, D6, D11, D3.');
   });
 
@@ -56,17 +65,31 @@ describe('pin-unknown', () => {
   });
 
   it('accepts an A6 on the Nano that the Uno lacks', () => {
-    const nano = unoPlan({ board: 'nano', source: 'nrf24', channels: 1 }, { 'input/ppm': null, 'input/ce': 'D4', 'input/csn': 'D5', 'remote/ce': 'D9', 'remote/csn': 'D10', 'remote/ch1': 'A6' });
+    const nano = unoPlan(
+      { board: 'nano', source: 'nrf24', channels: 1 },
+      {
+        'input/ppm': null,
+        'input/ce': 'D4',
+        'input/csn': 'D5',
+        'remote/ce': 'D9',
+        'remote/csn': 'D10',
+        'remote/ch1': 'A6',
+      },
+    );
     expect(codes(nano)).not.toContain('pin-unknown');
     const uno = withPins(nano, {});
     uno.controls.link.remoteBoard = 'uno';
-    expect(problemsWith(uno, 'pin-unknown')[0].message).toBe('A6 (for remote channel 1 stick (Ch 1)) is not a pin of the remote’s Uno.');
+    expect(problemsWith(uno, 'pin-unknown')[0].message).toBe(
+      'A6 (for remote channel 1 stick (Ch 1)) is not a pin of the remote’s Uno.',
+    );
   });
 });
 
 describe('pin-cannot-do-role', () => {
   it('reports a PWM role on a pin without PWM', () => {
-    expect(problemsWith(unoPlan({}, { 'Driver 1/a.pwm': 'D4' }), 'pin-cannot-do-role')[0].message).toBe('D4 has no PWM, but Driver 1 A PWM needs PWM.');
+    expect(problemsWith(unoPlan({}, { 'Driver 1/a.pwm': 'D4' }), 'pin-cannot-do-role')[0].message).toBe(
+      'D4 has no PWM, but Driver 1 A PWM needs PWM.',
+    );
   });
 
   it('accepts a PWM role on a PWM pin', () => {
@@ -74,7 +97,9 @@ describe('pin-cannot-do-role', () => {
   });
 
   it('reports a PPM signal on a pin without an external interrupt', () => {
-    expect(problemsWith(unoPlan({}, { 'input/ppm': 'D4' }), 'pin-cannot-do-role')[0].message).toContain('needs an external interrupt');
+    expect(problemsWith(unoPlan({}, { 'input/ppm': 'D4' }), 'pin-cannot-do-role')[0].message).toContain(
+      'needs an external interrupt',
+    );
   });
 
   it('accepts an RC channel on a pin-change pin of the Uno but not of the Mega', () => {
@@ -82,13 +107,17 @@ describe('pin-cannot-do-role', () => {
     expect(codes(withPins(uno, { 'input/ch1': 'A3' }))).not.toContain('pin-cannot-do-role');
     const mega = assignedPlan({ source: 'rc-pwm', channels: 2, board: 'mega2560' });
     // variants/mega: only 10–13, 50–53 and A8–A15 have pin-change interrupts in the core.
-    expect(problemsWith(withPins(mega, { 'input/ch1': 'A3' }), 'pin-cannot-do-role')[0].message).toContain('neither an external nor a pin-change interrupt');
+    expect(problemsWith(withPins(mega, { 'input/ch1': 'A3' }), 'pin-cannot-do-role')[0].message).toContain(
+      'neither an external nor a pin-change interrupt',
+    );
     expect(codes(withPins(mega, { 'input/ch1': 'A9' }))).not.toContain('pin-cannot-do-role');
   });
 
   it('reports a digital role on the Nano analog-only A7', () => {
     const nano = unoPlan({ board: 'nano' }, { 'Driver 1/a.dir': 'A7' });
-    expect(problemsWith(nano, 'pin-cannot-do-role')[0].message).toBe('A7 is an analog input only, but Driver 1 A Direction needs a digital output.');
+    expect(problemsWith(nano, 'pin-cannot-do-role')[0].message).toBe(
+      'A7 is an analog input only, but Driver 1 A Direction needs a digital output.',
+    );
   });
 
   it('reports a remote stick on a pin without an analog input', () => {
@@ -98,14 +127,19 @@ describe('pin-cannot-do-role', () => {
 
   it('reports a serial receiver on a pin that is no UART receive line', () => {
     const plan = assignedPlan({ source: 'sbus', board: 'mega2560' });
-    expect(problemsWith(withPins(plan, { 'input/rx': 'D22' }), 'pin-cannot-do-role')[0].message).toContain('is not a serial receive pin');
+    expect(problemsWith(withPins(plan, { 'input/rx': 'D22' }), 'pin-cannot-do-role')[0].message).toContain(
+      'is not a serial receive pin',
+    );
     expect(codes(withPins(plan, { 'input/rx': 'D17' }))).not.toContain('pin-cannot-do-role');
   });
 });
 
 describe('ESP32 pins (ESP-IDF GPIO page; REFERENCES §3)', () => {
   it('rejects a flash pin as an error', () => {
-    expect(problemsWith(esp32Plan({}, { 'Driver 1/a.dir': 'GPIO6' }), 'pin-flash')[0]).toMatchObject({ severity: 'error', pins: ['GPIO6'] });
+    expect(problemsWith(esp32Plan({}, { 'Driver 1/a.dir': 'GPIO6' }), 'pin-flash')[0]).toMatchObject({
+      severity: 'error',
+      pins: ['GPIO6'],
+    });
   });
 
   it('has no flash problem on an ordinary GPIO', () => {
@@ -153,7 +187,9 @@ describe('pin-used-twice', () => {
 describe('pin-on-spi-bus', () => {
   it('reports a driver on the SPI MOSI pin while the transceiver uses the bus', () => {
     const plan = assignedPlan({ source: 'nrf24' });
-    expect(problemsWith(withPins(plan, { 'Driver 1/a.pwm': 'D11' }), 'pin-on-spi-bus')[0].message).toContain('SPI bus MOSI line');
+    expect(problemsWith(withPins(plan, { 'Driver 1/a.pwm': 'D11' }), 'pin-on-spi-bus')[0].message).toContain(
+      'SPI bus MOSI line',
+    );
   });
 
   it('allows that pin when no transceiver is fitted', () => {
@@ -162,7 +198,13 @@ describe('pin-on-spi-bus', () => {
 
   it('checks the remote board too', () => {
     const plan = assignedPlan({ source: 'nrf24' });
-    expect(problemsWith(withPins(plan, { 'remote/ce': 'D13' }), 'pin-on-spi-bus')[0].path).toEqual(['controls', 'link', 'remotePins', 'ce', 'pin']);
+    expect(problemsWith(withPins(plan, { 'remote/ce': 'D13' }), 'pin-on-spi-bus')[0].path).toEqual([
+      'controls',
+      'link',
+      'remotePins',
+      'ce',
+      'pin',
+    ]);
   });
 });
 
@@ -182,7 +224,9 @@ describe('spi-ss-not-output', () => {
 
 describe('USB serial pins', () => {
   it('reports a role on the USB serial pins while diagnostics print there', () => {
-    expect(problemsWith(unoPlan({}, { 'Driver 1/a.dir': 'D1' }), 'pin-on-usb-serial')[0].hint).toMatch(/turn serial diagnostics off/);
+    expect(problemsWith(unoPlan({}, { 'Driver 1/a.dir': 'D1' }), 'pin-on-usb-serial')[0].hint).toMatch(
+      /turn serial diagnostics off/,
+    );
   });
 
   it('only warns about uploads when diagnostics are off', () => {
@@ -208,14 +252,23 @@ describe('role-unknown', () => {
 
   it('warns about an input pin left over from another input source', () => {
     const plan = unoPlan({}, { 'input/rx': 'D4' });
-    expect(problemsWith(plan, 'role-unknown')[0]).toMatchObject({ roles: ['input/rx'], path: ['wiring', 'inputPins', 'rx', 'pin'] });
+    expect(problemsWith(plan, 'role-unknown')[0]).toMatchObject({
+      roles: ['input/rx'],
+      path: ['wiring', 'inputPins', 'rx', 'pin'],
+    });
   });
 });
 
 describe('missing pins on an empty plan', () => {
   it('reports every required role and suggests pins for each', () => {
     const problems = checkPinPlan(buildConfig({ source: 'ppm' })).filter((p) => p.code === 'pin-missing');
-    expect(problems.map((p) => p.roles[0])).toEqual(['Driver 1/a.pwm', 'Driver 1/a.dir', 'Driver 1/b.pwm', 'Driver 1/b.dir', 'input/ppm']);
+    expect(problems.map((p) => p.roles[0])).toEqual([
+      'Driver 1/a.pwm',
+      'Driver 1/a.dir',
+      'Driver 1/b.pwm',
+      'Driver 1/b.dir',
+      'input/ppm',
+    ]);
     expect(problems[4].hint).toBe('Pins that can: D2, D3.');
   });
 });

@@ -11,7 +11,9 @@ describe('PWM frequency advice', () => {
     // 31.4 kHz, above this driver's 20 kHz; timer 0 runs millis().
     expect(advice.quietPins.map((q) => q.pin)).toEqual(['D9', 'D10']);
     expect(advice.quietPins[0]).toEqual({ pin: 'D9', hz: 20000, formula: '16 MHz / (2 × 1 × 400) = 20 kHz' });
-    expect(advice.suggestion).toBe('Set 20 kHz: above hearing and within the driver’s 20 kHz; it runs cleanly on D9, D10.');
+    expect(advice.suggestion).toBe(
+      'Set 20 kHz: above hearing and within the driver’s 20 kHz; it runs cleanly on D9, D10.',
+    );
   });
 
   it('offers timer 2 at 31.4 kHz (16 MHz / 1 / 510) for a driver that accepts it', () => {
@@ -64,7 +66,13 @@ describe('PWM frequency advice', () => {
 
   it('offers every output GPIO of the ESP32 at 20 kHz except strapping, flash and USB serial pins', () => {
     const [advice] = pwmAdvice(buildConfig({ board: 'esp32-devkitc', source: 'ppm' }));
-    expect(advice.quietPins.map((q) => Number(q.pin.slice(4)))).toEqual([4, 13, 14, 16, 17, 18, 19, 21, 22, 23, 25, 26, 27, 32, 33]);
-    expect(advice.quietPins.find((q) => q.pin === 'GPIO25')).toEqual({ pin: 'GPIO25', hz: 20000, formula: 'floor(log2(80 MHz / 20 kHz)) = 11 bits' });
+    expect(advice.quietPins.map((q) => Number(q.pin.slice(4)))).toEqual([
+      4, 13, 14, 16, 17, 18, 19, 21, 22, 23, 25, 26, 27, 32, 33,
+    ]);
+    expect(advice.quietPins.find((q) => q.pin === 'GPIO25')).toEqual({
+      pin: 'GPIO25',
+      hz: 20000,
+      formula: 'floor(log2(80 MHz / 20 kHz)) = 11 bits',
+    });
   });
 });

@@ -35,7 +35,8 @@ describe('power advice on a sound robot', () => {
       c.power = { ...c.power, chemistry: 'alkaline', cells: 6, logicSupply: 'usb' };
       stall(50)(c);
     });
-    for (const p of powerAdvice(config).problems) expect(POWER_PROBLEM_CODES[p.code as keyof typeof POWER_PROBLEM_CODES]).toBe(p.severity);
+    for (const p of powerAdvice(config).problems)
+      expect(POWER_PROBLEM_CODES[p.code as keyof typeof POWER_PROBLEM_CODES]).toBe(p.severity);
   });
 });
 
@@ -87,10 +88,12 @@ describe('battery voltage against the drivers', () => {
 
 describe('battery voltage against the motors', () => {
   it('warns about 6 V motors on a full 3S LiPo and suggests an output limit', () => {
-    const [p] = powerAdvice(robot((c) => {
-      c.power.cells = 3;
-      for (const m of c.motors) m.ratedVoltage = 6;
-    })).problems.filter((x) => x.code === 'battery-above-motor-rating');
+    const [p] = powerAdvice(
+      robot((c) => {
+        c.power.cells = 3;
+        for (const m of c.motors) m.ratedVoltage = 6;
+      }),
+    ).problems.filter((x) => x.code === 'battery-above-motor-rating');
     // 6 V / 12.6 V = 47.6 %.
     expect(p.hint).toBe('Set the output limit to 47 % or less, or use a lower-voltage battery.');
   });
@@ -109,7 +112,9 @@ describe('battery voltage against the motors', () => {
   });
 
   it('counts the L298 bridge drop', () => {
-    const [p] = powerAdvice(robot(() => {}, 'en-in1-in2')).problems.filter((x) => x.code === 'battery-below-motor-rating');
+    const [p] = powerAdvice(robot(() => {}, 'en-in1-in2')).problems.filter(
+      (x) => x.code === 'battery-below-motor-rating',
+    );
     expect(p.message).toContain('after the driver’s 2.5 V drop');
   });
 });
@@ -121,28 +126,43 @@ describe('battery current', () => {
   });
 
   it('is quiet when the pack can deliver it', () => {
-    expect(codes(robot((c) => {
-      stall(30)(c);
-      c.power.dischargeC = 30;
-    }, 'dual-pwm'))).not.toContain('battery-current-too-low');
+    expect(
+      codes(
+        robot((c) => {
+          stall(30)(c);
+          c.power.dischargeC = 30;
+        }, 'dual-pwm'),
+      ),
+    ).not.toContain('battery-current-too-low');
   });
 
   it('warns about a 9 V block battery', () => {
-    expect(codes(robot((c) => (c.power = { ...c.power, chemistry: 'alkaline', cells: 6 }), 'two-input'))).toContain('small-9v-battery');
+    expect(codes(robot((c) => (c.power = { ...c.power, chemistry: 'alkaline', cells: 6 }), 'two-input'))).toContain(
+      'small-9v-battery',
+    );
   });
 
   it('is quiet for four alkaline cells', () => {
-    expect(codes(robot((c) => (c.power = { ...c.power, chemistry: 'alkaline', cells: 4 }), 'two-input'))).not.toContain('small-9v-battery');
+    expect(codes(robot((c) => (c.power = { ...c.power, chemistry: 'alkaline', cells: 4 }), 'two-input'))).not.toContain(
+      'small-9v-battery',
+    );
   });
 });
 
 describe('logic supply', () => {
-  const logic = (supply: RobotConfig['power']['logicSupply'], driver: DriverKindId, cells = 2, board: RobotConfig['wiring']['board'] = 'uno') =>
-    codes(robot((c) => {
-      c.power.logicSupply = supply;
-      c.power.cells = cells;
-      c.wiring.board = board;
-    }, driver));
+  const logic = (
+    supply: RobotConfig['power']['logicSupply'],
+    driver: DriverKindId,
+    cells = 2,
+    board: RobotConfig['wiring']['board'] = 'uno',
+  ) =>
+    codes(
+      robot((c) => {
+        c.power.logicSupply = supply;
+        c.power.cells = cells;
+        c.wiring.board = board;
+      }, driver),
+    );
 
   it('reports a driver regulator that no driver has', () => {
     expect(logic('driver-regulator', 'pwm-in1-in2-stby')).toContain('logic-regulator-missing');

@@ -36,7 +36,13 @@ describe('fuse size', () => {
 describe('battery summary', () => {
   it('gives a 2S LiPo 6.0 / 7.4 / 8.4 V and 44 A at 2200 mAh 20 C', () => {
     // LiPo 3.0–4.2 V per cell (REFERENCES §8); 3.7 V nominal from memory.
-    expect(summarizeBattery(PowerSchema.parse({}))).toEqual({ emptyVolts: 6, nominalVolts: 7.4, fullVolts: 8.4, maxCurrentA: 44, isNineVoltBlock: false });
+    expect(summarizeBattery(PowerSchema.parse({}))).toEqual({
+      emptyVolts: 6,
+      nominalVolts: 7.4,
+      fullVolts: 8.4,
+      maxCurrentA: 44,
+      isNineVoltBlock: false,
+    });
   });
 
   it('recognises the six-cell alkaline 9 V block', () => {

@@ -4,7 +4,8 @@ import { DRIVE_LAYOUT_IDS } from '@shared/schemas/ids';
 import { makeConfig, makeCustomConfig, makeWheel } from '../../../factories/engine';
 
 const codes = (config: Parameters<typeof engineProblems>[0]) => engineProblems(config).map((p) => p.code);
-const find = (config: Parameters<typeof engineProblems>[0], code: string) => engineProblems(config).find((p) => p.code === code);
+const find = (config: Parameters<typeof engineProblems>[0], code: string) =>
+  engineProblems(config).find((p) => p.code === code);
 
 describe('engine problems', () => {
   it.each(DRIVE_LAYOUT_IDS)('finds nothing wrong with the %s starter', (layout) => {
@@ -22,7 +23,10 @@ describe('engine problems', () => {
   });
 
   it('reports a layout that cannot move at all as an error', () => {
-    const config = makeCustomConfig([makeWheel({ name: 'A', motor: 'A' }), makeWheel({ name: 'B', motor: 'A', reversed: true })]);
+    const config = makeCustomConfig([
+      makeWheel({ name: 'A', motor: 'A' }),
+      makeWheel({ name: 'B', motor: 'A', reversed: true }),
+    ]);
     expect(find(config, 'layout-cannot-move')).toMatchObject({ severity: 'error', path: ['chassis', 'wheels'] });
   });
 
@@ -43,7 +47,10 @@ describe('engine problems', () => {
       c.chassis.wheels[3].reversed = true;
       c.motors = c.motors.slice(0, 2);
     });
-    expect(find(config, 'shared-motor-opposed')).toMatchObject({ severity: 'error', path: ['chassis', 'wheels', 3, 'reversed'] });
+    expect(find(config, 'shared-motor-opposed')).toMatchObject({
+      severity: 'error',
+      path: ['chassis', 'wheels', 3, 'reversed'],
+    });
   });
 
   it('finds wheels on one motor that need different speeds', () => {
@@ -52,7 +59,10 @@ describe('engine problems', () => {
       c.chassis.wheels[3].radiusMm = 50;
       c.motors = c.motors.slice(0, 2);
     });
-    expect(find(config, 'shared-motor-disagrees')).toMatchObject({ severity: 'warning', path: ['chassis', 'wheels', 3, 'motor'] });
+    expect(find(config, 'shared-motor-disagrees')).toMatchObject({
+      severity: 'warning',
+      path: ['chassis', 'wheels', 3, 'motor'],
+    });
   });
 
   it('reports arming required without an arming channel as an error', () => {
@@ -60,7 +70,10 @@ describe('engine problems', () => {
       c.controls.armingSwitch.channel = null;
       c.safety.armingRequired = true;
     });
-    expect(find(config, 'arming-without-channel')).toMatchObject({ severity: 'error', path: ['controls', 'armingSwitch', 'channel'] });
+    expect(find(config, 'arming-without-channel')).toMatchObject({
+      severity: 'error',
+      path: ['controls', 'armingSwitch', 'channel'],
+    });
   });
 
   it('warns about an axis the layout can do but no channel drives', () => {
@@ -81,7 +94,9 @@ describe('engine problems', () => {
 
   it('warns about plain wheels that are not parallel', () => {
     const config = makeConfig('differential', (c) => (c.chassis.wheels[1].driveAngleDeg = 30));
-    expect(find(config, 'plain-wheels-not-parallel')).toMatchObject({ path: ['chassis', 'wheels', 1, 'driveAngleDeg'] });
+    expect(find(config, 'plain-wheels-not-parallel')).toMatchObject({
+      path: ['chassis', 'wheels', 1, 'driveAngleDeg'],
+    });
   });
 
   it('warns about a mecanum wheel without angled rollers', () => {

@@ -14,7 +14,9 @@ describe('account schemas', () => {
 
   it('asks for at least 10 characters in a new password', () => {
     const result = SignUpInputSchema.safeParse({ name: 'A', email: 'a@example.org', password: '123456789' });
-    expect(result.error?.issues).toEqual([expect.objectContaining({ path: ['password'], message: 'Use at least 10 characters' })]);
+    expect(result.error?.issues).toEqual([
+      expect.objectContaining({ path: ['password'], message: 'Use at least 10 characters' }),
+    ]);
   });
 
   it('accepts any non-empty password when signing in', () => {

@@ -3,7 +3,12 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { ZodError } from 'zod';
 import { CURRENT_SCHEMA_VERSION, RobotConfigSchema } from '@shared/schemas/robot-config';
-import { ConfigVersionError, migrateConfig, migrateConfigWithNotes, parseAnyVersion } from '@shared/schemas/migrate-config';
+import {
+  ConfigVersionError,
+  migrateConfig,
+  migrateConfigWithNotes,
+  parseAnyVersion,
+} from '@shared/schemas/migrate-config';
 import { robotConfig } from '../../../factories/robot-config';
 
 // Files written by Mixwright while the schema was at version 1 (the demo robots as that
@@ -35,7 +40,11 @@ describe('migrating version 1 files', () => {
     const { rateSwitch: _old, ...controlsBefore } = v1.controls;
     const { rateSwitch: _new, ...controlsAfter } = migrated.controls;
     expect(controlsAfter).toEqual(controlsBefore);
-    expect({ ...migrated, controls: null, schemaVersion: null }).toEqual({ ...v1, controls: null, schemaVersion: null });
+    expect({ ...migrated, controls: null, schemaVersion: null }).toEqual({
+      ...v1,
+      controls: null,
+      schemaVersion: null,
+    });
   });
 
   it('gives a three-position file without rates a third rate copied from the last default', () => {
@@ -43,7 +52,9 @@ describe('migrating version 1 files', () => {
     expect(v1.controls.rateSwitch).toEqual({ channel: 6, positions: 3 });
     const { json, notes } = migrateConfigWithNotes(v1);
     expect(RobotConfigSchema.parse(json).controls.rateSwitch.rates).toEqual([0.5, 1, 1]);
-    expect(notes).toEqual(['Rate switch: 3 positions but no rates (so the default two); position 3 uses the last rate (100 %)']);
+    expect(notes).toEqual([
+      'Rate switch: 3 positions but no rates (so the default two); position 3 uses the last rate (100 %)',
+    ]);
   });
 
   it('truncates extra rates to the old number of positions', () => {
@@ -81,9 +92,15 @@ describe('files of the current version', () => {
   });
 
   it('refuse a rate switch with one rate, naming the field', () => {
-    const result = RobotConfigSchema.safeParse({ ...robotConfig(), controls: { ...robotConfig().controls, rateSwitch: { channel: null, rates: [1] } } });
+    const result = RobotConfigSchema.safeParse({
+      ...robotConfig(),
+      controls: { ...robotConfig().controls, rateSwitch: { channel: null, rates: [1] } },
+    });
     expect(result.success).toBe(false);
-    expect(result.error?.issues[0]).toMatchObject({ path: ['controls', 'rateSwitch', 'rates'], message: 'A rate switch has 2 or 3 positions: give 2 or 3 rates' });
+    expect(result.error?.issues[0]).toMatchObject({
+      path: ['controls', 'rateSwitch', 'rates'],
+      message: 'A rate switch has 2 or 3 positions: give 2 or 3 rates',
+    });
   });
 });
 
@@ -109,7 +126,10 @@ describe('files that cannot be migrated', () => {
       expect.unreachable();
     } catch (error) {
       expect(error).toBeInstanceOf(ZodError);
-      expect((error as ZodError).issues[0]).toMatchObject({ path: ['schemaVersion'], message: 'schemaVersion must be a whole number from 1, got "one"' });
+      expect((error as ZodError).issues[0]).toMatchObject({
+        path: ['schemaVersion'],
+        message: 'schemaVersion must be a whole number from 1, got "one"',
+      });
     }
   });
 });

@@ -3,7 +3,11 @@ import { describe, expect, it } from 'vitest';
 import { applyDeadband, applyExpo, calibrate, shapeAxis } from '@shared/shaping/input-curves';
 
 const calibration = fc
-  .record({ centre: fc.double({ min: 900, max: 2100, noNaN: true }), below: fc.double({ min: 50, max: 800, noNaN: true }), above: fc.double({ min: 50, max: 800, noNaN: true }) })
+  .record({
+    centre: fc.double({ min: 900, max: 2100, noNaN: true }),
+    below: fc.double({ min: 50, max: 800, noNaN: true }),
+    above: fc.double({ min: 50, max: 800, noNaN: true }),
+  })
   .map(({ centre, below, above }) => ({ low: centre - below, centre, high: centre + above }));
 const axis = fc.record({
   reverse: fc.constant(false),
@@ -54,7 +58,11 @@ describe('deadband, expo and rate', () => {
   });
 
   it('chains calibration, reverse, deadband, expo and rate', () => {
-    const value = shapeAxis(1750, { low: 1000, centre: 1500, high: 2000 }, { reverse: true, deadband: 0.1, expo: 0.5, rate: 0.8 });
+    const value = shapeAxis(
+      1750,
+      { low: 1000, centre: 1500, high: 2000 },
+      { reverse: true, deadband: 0.1, expo: 0.5, rate: 0.8 },
+    );
     const afterDeadband = (0.5 - 0.1) / 0.9;
     expect(value).toBeCloseTo(-0.8 * (0.5 * afterDeadband + 0.5 * afterDeadband ** 3), 12);
   });
@@ -93,10 +101,16 @@ describe('shaping properties', () => {
 
   it('is odd where the calibration is symmetric', () => {
     fc.assert(
-      fc.property(fc.double({ min: 1000, max: 2000, noNaN: true }), fc.double({ min: 100, max: 800, noNaN: true }), axis, fc.double({ min: 0, max: 1000, noNaN: true }), (centre, half, a, offset) => {
-        const c = { low: centre - half, centre, high: centre + half };
-        expect(shapeAxis(centre + offset, c, a)).toBeCloseTo(-shapeAxis(centre - offset, c, a), 12);
-      }),
+      fc.property(
+        fc.double({ min: 1000, max: 2000, noNaN: true }),
+        fc.double({ min: 100, max: 800, noNaN: true }),
+        axis,
+        fc.double({ min: 0, max: 1000, noNaN: true }),
+        (centre, half, a, offset) => {
+          const c = { low: centre - half, centre, high: centre + half };
+          expect(shapeAxis(centre + offset, c, a)).toBeCloseTo(-shapeAxis(centre - offset, c, a), 12);
+        },
+      ),
     );
   });
 

@@ -31,7 +31,8 @@ describe('switches', () => {
 describe('sticks from channels', () => {
   const linear = () =>
     makeConfig('quad-mecanum', (c) => {
-      for (const axis of ['forward', 'strafe', 'yaw'] as const) Object.assign(c.controls.axes[axis], { deadband: 0, expo: 0 });
+      for (const axis of ['forward', 'strafe', 'yaw'] as const)
+        Object.assign(c.controls.axes[axis], { deadband: 0, expo: 0 });
     });
 
   it('shapes each axis and applies the rate switch position', () => {
@@ -60,7 +61,9 @@ describe('sticks from channels', () => {
 
 describe('one channel after shaping', () => {
   it('gives an axis value without the rate switch', () => {
-    const config = makeConfig('quad-mecanum', (c) => Object.assign(c.controls.axes.forward, { deadband: 0, expo: 0, rate: 0.8 }));
+    const config = makeConfig('quad-mecanum', (c) =>
+      Object.assign(c.controls.axes.forward, { deadband: 0, expo: 0, rate: 0.8 }),
+    );
     expect(shapeChannel(config, 2, 2000)).toEqual({ value: 0.8, role: 'forward' });
   });
 
@@ -71,6 +74,8 @@ describe('one channel after shaping', () => {
   });
 
   it('refuses a channel that is not in the table', () => {
-    expect(() => shapeChannel(makeConfig('quad-mecanum'), 9, 1500)).toThrow(/Channel 9 is not in the channel table \(controls.channels\)/);
+    expect(() => shapeChannel(makeConfig('quad-mecanum'), 9, 1500)).toThrow(
+      /Channel 9 is not in the channel table \(controls.channels\)/,
+    );
   });
 });

@@ -19,7 +19,15 @@ export function LayoutPanel() {
   const id = useId();
   const layout = config.chassis.layout;
   return (
-    <Panel title="Drive layout" titleId={`${id}-title`} description={layout === 'custom' ? 'Every wheel is set in the table below.' : 'The wheel table below is built from these parameters.'}>
+    <Panel
+      title="Drive layout"
+      titleId={`${id}-title`}
+      description={
+        layout === 'custom'
+          ? 'Every wheel is set in the table below.'
+          : 'The wheel table below is built from these parameters.'
+      }
+    >
       <div className="flex flex-col gap-1">
         <label htmlFor={`${id}-layout`} className="text-sm font-semibold text-ink-soft">
           Layout
@@ -39,7 +47,9 @@ export function LayoutPanel() {
           ))}
         </select>
         <p className="min-h-5 text-xs leading-5 text-ink-muted">
-          {layout === 'custom' ? 'Picking a starter layout replaces the wheel table.' : 'Choose “Custom wheel table” to edit each wheel; the table is kept.'}
+          {layout === 'custom'
+            ? 'Picking a starter layout replaces the wheel table.'
+            : 'Choose “Custom wheel table” to edit each wheel; the table is kept.'}
         </p>
       </div>
       {layout !== 'custom' && (
@@ -59,14 +69,18 @@ function ParamField({ layout, field }: { layout: DriveLayoutId; field: PresetPar
   const key = `chassis.params.${field.key}`;
   // The schema's messages start with the parameter's name, which is already the label.
   const raw = errors[key];
-  const error = raw?.startsWith(`${field.label} `) ? `${raw.charAt(field.label.length + 1).toUpperCase()}${raw.slice(field.label.length + 2)}` : raw;
+  const error = raw?.startsWith(`${field.label} `)
+    ? `${raw.charAt(field.label.length + 1).toUpperCase()}${raw.slice(field.label.length + 2)}`
+    : raw;
   const value = config.chassis.params[field.key];
   // The typed value goes into the draft; the wheels are rebuilt only from parameters that pass.
   const commit = (next: number | string | null) =>
     update((c) => {
       const params = { ...c.chassis.params, [field.key]: next as number | string };
       const checked = checkPresetParams(layout, params);
-      return checked.ok ? changeParams({ ...c, chassis: { ...c.chassis, params } }, checked.params) : { ...c, chassis: { ...c.chassis, params } };
+      return checked.ok
+        ? changeParams({ ...c, chassis: { ...c.chassis, params } }, checked.params)
+        : { ...c, chassis: { ...c.chassis, params } };
     });
   return (
     <div className="flex flex-col gap-1">
@@ -76,7 +90,16 @@ function ParamField({ layout, field }: { layout: DriveLayoutId; field: PresetPar
       <div className="flex items-center gap-1.5">
         {field.kind === 'number' ? (
           <>
-            <NumberInput id={id} data-field={key} value={typeof value === 'number' ? value : null} onCommit={commit} invalid={Boolean(error)} disabled={disabled} aria-describedby={`${id}-note`} className="w-24" />
+            <NumberInput
+              id={id}
+              data-field={key}
+              value={typeof value === 'number' ? value : null}
+              onCommit={commit}
+              invalid={Boolean(error)}
+              disabled={disabled}
+              aria-describedby={`${id}-note`}
+              className="w-24"
+            />
             {field.unit && <span className="text-sm text-ink-muted">{field.unit}</span>}
           </>
         ) : (
@@ -85,7 +108,9 @@ function ParamField({ layout, field }: { layout: DriveLayoutId; field: PresetPar
             data-field={key}
             value={String(value ?? '')}
             disabled={disabled}
-            onChange={(e) => commit(field.options.find((o) => String(o.value) === e.target.value)?.value ?? e.target.value)}
+            onChange={(e) =>
+              commit(field.options.find((o) => String(o.value) === e.target.value)?.value ?? e.target.value)
+            }
             className={cx(compactInputClasses, 'w-full border-rule-strong py-1.5')}
           >
             {field.options.map((o) => (
@@ -96,8 +121,15 @@ function ParamField({ layout, field }: { layout: DriveLayoutId; field: PresetPar
           </select>
         )}
       </div>
-      <p id={`${id}-note`} className={cx('min-h-5 text-xs leading-5', error ? 'font-semibold text-error' : 'text-ink-muted')}>
-        {error ? `✕ ${error}` : field.kind === 'number' && field.min && field.max !== undefined ? `${field.min} to ${field.max}` : ''}
+      <p
+        id={`${id}-note`}
+        className={cx('min-h-5 text-xs leading-5', error ? 'font-semibold text-error' : 'text-ink-muted')}
+      >
+        {error
+          ? `✕ ${error}`
+          : field.kind === 'number' && field.min && field.max !== undefined
+            ? `${field.min} to ${field.max}`
+            : ''}
       </p>
     </div>
   );

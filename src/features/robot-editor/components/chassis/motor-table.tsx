@@ -34,17 +34,46 @@ export function MotorTable() {
                   className="w-32"
                 />
               </td>
-              <td className="px-1.5 py-1"><NumberCell path={['motors', i, 'startThreshold']} label={`${motor.name}: start threshold in percent`} scale={100} width="w-16" /></td>
-              <td className="px-1.5 py-1"><NumberCell path={['motors', i, 'stallCurrentA']} label={`${motor.name}: stall current in amperes`} width="w-16" /></td>
-              <td className="px-1.5 py-1"><NumberCell path={['motors', i, 'ratedVoltage']} label={`${motor.name}: rated voltage`} width="w-16" /></td>
-              <td className={cx('px-1.5 py-1 whitespace-nowrap', wheels.length === 0 ? 'font-semibold text-error' : 'text-ink-soft')}>{wheels.length ? wheels.join(', ') : 'no wheel'}</td>
-              <RemoveCell what={motor.name} show={wheels.length === 0 && !disabled} onRemove={() => update((c) => syncMotors(c))} />
+              <td className="px-1.5 py-1">
+                <NumberCell
+                  path={['motors', i, 'startThreshold']}
+                  label={`${motor.name}: start threshold in percent`}
+                  scale={100}
+                  width="w-16"
+                />
+              </td>
+              <td className="px-1.5 py-1">
+                <NumberCell
+                  path={['motors', i, 'stallCurrentA']}
+                  label={`${motor.name}: stall current in amperes`}
+                  width="w-16"
+                />
+              </td>
+              <td className="px-1.5 py-1">
+                <NumberCell path={['motors', i, 'ratedVoltage']} label={`${motor.name}: rated voltage`} width="w-16" />
+              </td>
+              <td
+                className={cx(
+                  'px-1.5 py-1 whitespace-nowrap',
+                  wheels.length === 0 ? 'font-semibold text-error' : 'text-ink-soft',
+                )}
+              >
+                {wheels.length ? wheels.join(', ') : 'no wheel'}
+              </td>
+              <RemoveCell
+                what={motor.name}
+                show={wheels.length === 0 && !disabled}
+                onRemove={() => update((c) => syncMotors(c))}
+              />
             </tr>
           );
         })}
       </EditTable>
       <EditRefusal error={rename.error} />
-      <TableErrors prefix={['motors']} rowName={(i) => `Motor ${i + 1}${config.motors[i] ? ` (${config.motors[i].name})` : ''}`} />
+      <TableErrors
+        prefix={['motors']}
+        rowName={(i) => `Motor ${i + 1}${config.motors[i] ? ` (${config.motors[i].name})` : ''}`}
+      />
     </Panel>
   );
 }

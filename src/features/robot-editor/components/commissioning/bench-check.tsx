@@ -18,9 +18,13 @@ export interface BenchCheckProps {
 
 type Answers = Record<string, Partial<BenchFinding>>;
 
-const complete = (f: Partial<BenchFinding> | undefined): f is BenchFinding => f !== undefined && f.turned !== undefined && (f.turned === null || f.direction !== undefined);
+const complete = (f: Partial<BenchFinding> | undefined): f is BenchFinding =>
+  f !== undefined && f.turned !== undefined && (f.turned === null || f.direction !== undefined);
 
-function statusWords(motor: string, f: Partial<BenchFinding> | undefined): { text: string; tone: 'muted' | 'ok' | 'fix' | 'bad' } {
+function statusWords(
+  motor: string,
+  f: Partial<BenchFinding> | undefined,
+): { text: string; tone: 'muted' | 'ok' | 'fix' | 'bad' } {
   if (!complete(f)) return { text: 'not checked yet', tone: 'muted' };
   if (f.turned === null) return { text: 'nothing turned', tone: 'bad' };
   const parts = [f.turned !== motor && `turned ${f.turned}`, f.direction === 'opposite' && 'wrong way'].filter(Boolean);
@@ -36,7 +40,12 @@ export function BenchCheck({ config, canEdit, onApply, onSave }: BenchCheckProps
   const index = Math.min(at, steps.length - 1);
   const step = steps[index];
   const done = steps.every((s) => complete(answers[s.motor]));
-  const result = done ? applyFindings(config, steps.map((s) => answers[s.motor] as BenchFinding)) : null;
+  const result = done
+    ? applyFindings(
+        config,
+        steps.map((s) => answers[s.motor] as BenchFinding),
+      )
+    : null;
   const apply = (save: boolean) => {
     if (!result?.ok || !result.message) return;
     onApply(result.config);
@@ -56,12 +65,27 @@ export function BenchCheck({ config, canEdit, onApply, onSave }: BenchCheckProps
                 type="button"
                 aria-current={i === index ? 'step' : undefined}
                 onClick={() => setAt(i)}
-                className={cx('w-full rounded-md border px-3 py-1.5 text-left text-sm', i === index ? 'border-accent bg-accent-soft' : 'border-rule hover:bg-paper-sunken')}
+                className={cx(
+                  'w-full rounded-md border px-3 py-1.5 text-left text-sm',
+                  i === index ? 'border-accent bg-accent-soft' : 'border-rule hover:bg-paper-sunken',
+                )}
               >
                 <span className="block font-semibold">
                   {i + 1}. {s.motor}
                 </span>
-                <span className={cx('text-xs', { muted: 'text-ink-muted', ok: 'text-accent-strong', fix: 'font-semibold text-warn-strong', bad: 'font-semibold text-error' }[status.tone])}>{status.text}</span>
+                <span
+                  className={cx(
+                    'text-xs',
+                    {
+                      muted: 'text-ink-muted',
+                      ok: 'text-accent-strong',
+                      fix: 'font-semibold text-warn-strong',
+                      bad: 'font-semibold text-error',
+                    }[status.tone],
+                  )}
+                >
+                  {status.text}
+                </span>
               </button>
             </li>
           );
@@ -97,9 +121,20 @@ export function BenchCheck({ config, canEdit, onApply, onSave }: BenchCheckProps
   );
 }
 
-function Outcome({ result, canEdit, canSave, onApply }: { result: ReturnType<typeof applyFindings>; canEdit: boolean; canSave: boolean; onApply: (save: boolean) => void }) {
+function Outcome({
+  result,
+  canEdit,
+  canSave,
+  onApply,
+}: {
+  result: ReturnType<typeof applyFindings>;
+  canEdit: boolean;
+  canSave: boolean;
+  onApply: (save: boolean) => void;
+}) {
   if (!result.ok) return <FormError message={result.reason} />;
-  if (!result.message) return <FormNotice message="Every motor turned the expected way on its own corner: nothing to change." />;
+  if (!result.message)
+    return <FormNotice message="Every motor turned the expected way on its own corner: nothing to change." />;
   return (
     <section aria-label="The fix" className="rounded-md border border-accent/40 bg-accent-soft/50 px-4 py-3">
       <h3 className="font-semibold">Mixwright will fix this in the configuration, not the wiring</h3>
@@ -108,7 +143,10 @@ function Outcome({ result, canEdit, canSave, onApply }: { result: ReturnType<typ
           <li key={a}>{a.charAt(0).toUpperCase() + a.slice(1)}</li>
         ))}
       </ul>
-      <p className="text-sm text-ink-muted">Flipping turns a motor round in the mixing; swapping exchanges which driver channel each motor is on. Run the bench test again after flashing.</p>
+      <p className="text-sm text-ink-muted">
+        Flipping turns a motor round in the mixing; swapping exchanges which driver channel each motor is on. Run the
+        bench test again after flashing.
+      </p>
       {canEdit && (
         <div className="mt-2 flex gap-2">
           {canSave && <Button onClick={() => onApply(true)}>Apply and save as a revision…</Button>}

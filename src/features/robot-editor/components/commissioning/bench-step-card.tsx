@@ -33,23 +33,39 @@ export function BenchStepCard({ config, step, total, finding, onAnswer, disabled
           width={420}
           height={380}
         />
-        <figcaption className="mt-1 text-xs text-ink-muted">Arrows: which way the top of each wheel should move (wheels off the ground).</figcaption>
+        <figcaption className="mt-1 text-xs text-ink-muted">
+          Arrows: which way the top of each wheel should move (wheels off the ground).
+        </figcaption>
       </figure>
       <div className="flex flex-col gap-3 text-sm">
         <p>
-          The firmware prints <code className="rounded bg-paper-sunken px-1.5 py-0.5 text-[0.85rem]">{step.consoleLine}</code> and runs{' '}
+          The firmware prints{' '}
+          <code className="rounded bg-paper-sunken px-1.5 py-0.5 text-[0.85rem]">{step.consoleLine}</code> and runs{' '}
           <strong>{step.motor}</strong> forward at {Math.round(step.duty * 100)} % for {(step.ms / 1000).toFixed(1)} s.
         </p>
         <fieldset disabled={disabled}>
           <legend className="mb-1 font-semibold">Which wheels turned?</legend>
           <div className="flex flex-col gap-1.5">
             <label className="flex items-center gap-2">
-              <input type="radio" name={`${id}-where`} checked={where === 'expected' && turned !== undefined} onChange={() => onAnswer({ ...finding, turned: step.motor })} className="accent-accent" />
-              The highlighted {step.wheels.length === 1 ? 'wheel' : 'wheels'} ({step.wheels.map((w) => w.name).join(', ')})
+              <input
+                type="radio"
+                name={`${id}-where`}
+                checked={where === 'expected' && turned !== undefined}
+                onChange={() => onAnswer({ ...finding, turned: step.motor })}
+                className="accent-accent"
+              />
+              The highlighted {step.wheels.length === 1 ? 'wheel' : 'wheels'} (
+              {step.wheels.map((w) => w.name).join(', ')})
             </label>
             {others.length > 0 && (
               <label className="flex flex-wrap items-center gap-2">
-                <input type="radio" name={`${id}-where`} checked={where === 'other'} onChange={() => onAnswer({ ...finding, turned: others[0] })} className="accent-accent" />
+                <input
+                  type="radio"
+                  name={`${id}-where`}
+                  checked={where === 'other'}
+                  onChange={() => onAnswer({ ...finding, turned: others[0] })}
+                  className="accent-accent"
+                />
                 The wheels of another motor:
                 <select
                   aria-label="Which motor's wheels turned"
@@ -62,14 +78,25 @@ export function BenchStepCard({ config, step, total, finding, onAnswer, disabled
                   </option>
                   {others.map((n) => (
                     <option key={n} value={n}>
-                      {n} ({config.chassis.wheels.filter((w) => w.motor === n).map((w) => w.name).join(', ')})
+                      {n} (
+                      {config.chassis.wheels
+                        .filter((w) => w.motor === n)
+                        .map((w) => w.name)
+                        .join(', ')}
+                      )
                     </option>
                   ))}
                 </select>
               </label>
             )}
             <label className="flex items-center gap-2">
-              <input type="radio" name={`${id}-where`} checked={where === 'nothing'} onChange={() => onAnswer({ motor: step.motor, turned: null, direction: 'expected' })} className="accent-accent" />
+              <input
+                type="radio"
+                name={`${id}-where`}
+                checked={where === 'nothing'}
+                onChange={() => onAnswer({ motor: step.motor, turned: null, direction: 'expected' })}
+                className="accent-accent"
+              />
               Nothing turned
             </label>
           </div>
@@ -86,8 +113,20 @@ export function BenchStepCard({ config, step, total, finding, onAnswer, disabled
             </ul>
             <div className="flex gap-4">
               {(['expected', 'opposite'] as const).map((d) => (
-                <label key={d} className={cx('flex items-center gap-2', d === 'opposite' && finding.direction === d && 'font-semibold text-warn-strong')}>
-                  <input type="radio" name={`${id}-direction`} checked={finding.direction === d} onChange={() => onAnswer({ ...finding, direction: d })} className="accent-accent" />
+                <label
+                  key={d}
+                  className={cx(
+                    'flex items-center gap-2',
+                    d === 'opposite' && finding.direction === d && 'font-semibold text-warn-strong',
+                  )}
+                >
+                  <input
+                    type="radio"
+                    name={`${id}-direction`}
+                    checked={finding.direction === d}
+                    onChange={() => onAnswer({ ...finding, direction: d })}
+                    className="accent-accent"
+                  />
                   {d === 'expected' ? 'Yes, as shown' : 'No, the other way'}
                 </label>
               ))}
@@ -96,7 +135,8 @@ export function BenchStepCard({ config, step, total, finding, onAnswer, disabled
         )}
         {turned === null && (
           <p className="rounded border border-error/30 bg-error-soft px-3 py-2 text-error-strong">
-            A motor that does not turn at all is not fixed by the configuration: check its power, the driver’s enable or standby pin, and the wiring to the pins shown in Wiring.
+            A motor that does not turn at all is not fixed by the configuration: check its power, the driver’s enable or
+            standby pin, and the wiring to the pins shown in Wiring.
           </p>
         )}
       </div>

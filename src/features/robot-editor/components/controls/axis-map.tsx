@@ -29,7 +29,8 @@ export function AxisMap() {
           return (
             <section key={axis} aria-labelledby={`axis-${axis}`} className="rounded border border-rule p-3">
               <h3 id={`axis-${axis}`} className="font-semibold">
-                {AXIS_WORDS[axis].title} <span className="text-sm font-normal text-ink-muted">({AXIS_WORDS[axis].plus})</span>
+                {AXIS_WORDS[axis].title}{' '}
+                <span className="text-sm font-normal text-ink-muted">({AXIS_WORDS[axis].plus})</span>
               </h3>
               <div className="mt-2 flex items-start gap-x-4">
                 <DraftSelectField path={[...base, 'channel']} label="Channel" options={options} width="w-40" />

@@ -18,14 +18,24 @@ export function ChannelTable() {
   const id = useId();
   const source = INPUT_SOURCES[config.controls.source];
   const renumber = useCheckedEdit();
-  const columns: EditColumn[] = [{ title: 'Ch' }, { title: 'Name' }, ...['Low end', 'Centre', 'High end'].map((title) => ({ title, unit: source.unit }))];
+  const columns: EditColumn[] = [
+    { title: 'Ch' },
+    { title: 'Name' },
+    ...['Low end', 'Centre', 'High end'].map((title) => ({ title, unit: source.unit })),
+  ];
   const canAdd = !disabled && nextFreeChannel(config) !== null && config.controls.channels.length < 18;
   return (
     <Panel
       title="Input and channels"
       titleId={`${id}-title`}
       description={`Calibrate each channel with the transmitter: the reading at full low, at rest and at full high, in ${source.unit}.`}
-      actions={!disabled && <Button size="sm" variant="secondary" onClick={() => update(addChannel)} disabled={!canAdd}>Add channel</Button>}
+      actions={
+        !disabled && (
+          <Button size="sm" variant="secondary" onClick={() => update(addChannel)} disabled={!canAdd}>
+            Add channel
+          </Button>
+        )
+      }
     >
       <div className="mb-3 flex flex-col gap-1">
         <label htmlFor={`${id}-source`} className="text-sm font-semibold text-ink-soft">
@@ -46,7 +56,9 @@ export function ChannelTable() {
           ))}
         </select>
         <p className="text-xs text-ink-muted">
-          Carries up to {source.maxChannels} channels; default calibration {source.defaultCalibration.low} / {source.defaultCalibration.centre} / {source.defaultCalibration.high} {source.unit}. Changing the source resets every calibration.
+          Carries up to {source.maxChannels} channels; default calibration {source.defaultCalibration.low} /{' '}
+          {source.defaultCalibration.centre} / {source.defaultCalibration.high} {source.unit}. Changing the source
+          resets every calibration.
         </p>
       </div>
       <EditTable field="controls.channels" caption="Channels" columns={columns}>
@@ -60,22 +72,39 @@ export function ChannelTable() {
                   label={`Number of channel ${channel.number}`}
                   field={`controls.channels.${i}.number`}
                   disabled={disabled}
-                  onCommit={(text) => Number(text) === channel.number || renumber.apply(renumberChannel(config, i, Number(text)))}
+                  onCommit={(text) =>
+                    Number(text) === channel.number || renumber.apply(renumberChannel(config, i, Number(text)))
+                  }
                   numeric
                   className="w-12 text-right"
                 />
               </td>
-              <td className="px-1.5 py-1"><TextCell path={p('name')} label={`Name of channel ${channel.number}`} width="w-36" /></td>
-              <td className="px-1.5 py-1"><NumberCell path={p('low')} label={`Channel ${channel.number} low end in ${source.unit}`} /></td>
-              <td className="px-1.5 py-1"><NumberCell path={p('centre')} label={`Channel ${channel.number} centre in ${source.unit}`} /></td>
-              <td className="px-1.5 py-1"><NumberCell path={p('high')} label={`Channel ${channel.number} high end in ${source.unit}`} /></td>
-              <RemoveCell what={`channel ${channel.number}`} show={!disabled} onRemove={() => update((c) => removeChannel(c, i))} />
+              <td className="px-1.5 py-1">
+                <TextCell path={p('name')} label={`Name of channel ${channel.number}`} width="w-36" />
+              </td>
+              <td className="px-1.5 py-1">
+                <NumberCell path={p('low')} label={`Channel ${channel.number} low end in ${source.unit}`} />
+              </td>
+              <td className="px-1.5 py-1">
+                <NumberCell path={p('centre')} label={`Channel ${channel.number} centre in ${source.unit}`} />
+              </td>
+              <td className="px-1.5 py-1">
+                <NumberCell path={p('high')} label={`Channel ${channel.number} high end in ${source.unit}`} />
+              </td>
+              <RemoveCell
+                what={`channel ${channel.number}`}
+                show={!disabled}
+                onRemove={() => update((c) => removeChannel(c, i))}
+              />
             </tr>
           );
         })}
       </EditTable>
       <EditRefusal error={renumber.error} />
-      <TableErrors prefix={['controls', 'channels']} rowName={(i) => `Channel ${config.controls.channels[i]?.number ?? i + 1}`} />
+      <TableErrors
+        prefix={['controls', 'channels']}
+        rowName={(i) => `Channel ${config.controls.channels[i]?.number ?? i + 1}`}
+      />
     </Panel>
   );
 }

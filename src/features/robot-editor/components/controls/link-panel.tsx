@@ -18,18 +18,48 @@ export function LinkPanel() {
   const link = config.controls.link;
   const mhz = Number.isInteger(link.rfChannel) ? 2400 + link.rfChannel : null;
   return (
-    <Panel title="2.4 GHz link" titleId="link-title" description="Robot and remote must share these; the remote's sketch is generated from the same settings.">
+    <Panel
+      title="2.4 GHz link"
+      titleId="link-title"
+      description="Robot and remote must share these; the remote's sketch is generated from the same settings."
+    >
       <div className="flex flex-wrap gap-x-5">
         {/* nRF24L01+ Product Specification: RF channel frequency F0 = 2400 + RF_CH MHz, RF_CH 0–125. */}
-        <DraftNumberField path={['controls', 'link', 'rfChannel']} label="RF channel" hint={mhz !== null ? `${mhz} MHz` : '0 to 125'} width="w-16" />
+        <DraftNumberField
+          path={['controls', 'link', 'rfChannel']}
+          label="RF channel"
+          hint={mhz !== null ? `${mhz} MHz` : '0 to 125'}
+          width="w-16"
+        />
         <DraftSelectField path={['controls', 'link', 'dataRate']} label="Data rate" options={DATA_RATES} width="w-52" />
-        <DraftNumberField path={['controls', 'link', 'sendRateHz']} label="Send rate" unit="Hz" hint="Packets per second from the remote" width="w-16" />
-        <DraftSelectField path={['controls', 'link', 'remoteBoard']} label="Remote board" options={BOARD_IDS.map((id) => ({ value: id, label: BOARDS[id].name }))} width="w-56" />
+        <DraftNumberField
+          path={['controls', 'link', 'sendRateHz']}
+          label="Send rate"
+          unit="Hz"
+          hint="Packets per second from the remote"
+          width="w-16"
+        />
+        <DraftSelectField
+          path={['controls', 'link', 'remoteBoard']}
+          label="Remote board"
+          options={BOARD_IDS.map((id) => ({ value: id, label: BOARDS[id].name }))}
+          width="w-56"
+        />
       </div>
       <div className="flex flex-wrap items-start gap-x-3">
-        <DraftTextField path={['controls', 'link', 'address']} label="Address (5 bytes, hex)" hint="Unique per robot, so two remotes never drive one robot." width="w-36 font-mono" />
+        <DraftTextField
+          path={['controls', 'link', 'address']}
+          label="Address (5 bytes, hex)"
+          hint="Unique per robot, so two remotes never drive one robot."
+          width="w-36 font-mono"
+        />
         {!disabled && (
-          <Button size="sm" variant="secondary" className="mt-7" onClick={() => set(['controls', 'link', 'address'], randomLinkAddress())}>
+          <Button
+            size="sm"
+            variant="secondary"
+            className="mt-7"
+            onClick={() => set(['controls', 'link', 'address'], randomLinkAddress())}
+          >
             New random address
           </Button>
         )}

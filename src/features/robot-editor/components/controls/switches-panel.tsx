@@ -24,9 +24,16 @@ export function SwitchesPanel() {
         <fieldset className="min-w-0">
           <legend className="mb-1 font-semibold">Rate switch</legend>
           <div className="flex flex-wrap gap-x-3">
-            <DraftSelectField path={['controls', 'rateSwitch', 'channel']} label="Channel" options={options} width="w-44" />
+            <DraftSelectField
+              path={['controls', 'rateSwitch', 'channel']}
+              label="Channel"
+              options={options}
+              width="w-44"
+            />
             <div className="flex flex-col gap-1">
-              <label htmlFor={`${id}-positions`} className="text-sm font-semibold text-ink-soft">Positions</label>
+              <label htmlFor={`${id}-positions`} className="text-sm font-semibold text-ink-soft">
+                Positions
+              </label>
               <select
                 id={`${id}-positions`}
                 data-field="controls.rateSwitch.rates"
@@ -42,14 +49,26 @@ export function SwitchesPanel() {
           </div>
           <div className="flex flex-wrap gap-x-3">
             {positionNames.map((name, i) => (
-              <DraftNumberField key={`${positions}-${i}`} path={['controls', 'rateSwitch', 'rates', i]} label={`${name} rate`} unit="%" scale={100} width="w-16" />
+              <DraftNumberField
+                key={`${positions}-${i}`}
+                path={['controls', 'rateSwitch', 'rates', i]}
+                label={`${name} rate`}
+                unit="%"
+                scale={100}
+                width="w-16"
+              />
             ))}
           </div>
         </fieldset>
         <fieldset className="min-w-0">
           <legend className="mb-1 font-semibold">Arming switch</legend>
           <div className="flex flex-wrap gap-x-3">
-            <DraftSelectField path={['controls', 'armingSwitch', 'channel']} label="Channel" options={options} width="w-44" />
+            <DraftSelectField
+              path={['controls', 'armingSwitch', 'channel']}
+              label="Channel"
+              options={options}
+              width="w-44"
+            />
             <DraftSelectField
               path={['controls', 'armingSwitch', 'armedWhen']}
               label="Armed when the switch is"
@@ -62,7 +81,11 @@ export function SwitchesPanel() {
           </div>
           <p className="text-xs text-ink-muted">
             Whether the motors need arming at all is set in{' '}
-            <Link to="../safety?field=safety.armingRequired" relative="path" className="font-semibold text-accent-strong underline">
+            <Link
+              to="../safety?field=safety.armingRequired"
+              relative="path"
+              className="font-semibold text-accent-strong underline"
+            >
               Safety
             </Link>
             .
@@ -78,8 +101,18 @@ function Desaturation() {
   const { config, set, disabled } = useDraftFields();
   const mode = config.controls.desaturation;
   const choices = [
-    { value: 'scale', title: 'Scale all motors down together', words: 'Keeps the direction of travel: the robot goes where the sticks point, a little slower.', worse: false },
-    { value: 'clip', title: 'Clip each motor at 100 %', words: 'Worse: the clipped motor falls behind the others, so the robot veers off the direction asked for.', worse: true },
+    {
+      value: 'scale',
+      title: 'Scale all motors down together',
+      words: 'Keeps the direction of travel: the robot goes where the sticks point, a little slower.',
+      worse: false,
+    },
+    {
+      value: 'clip',
+      title: 'Clip each motor at 100 %',
+      words: 'Worse: the clipped motor falls behind the others, so the robot veers off the direction asked for.',
+      worse: true,
+    },
   ] as const;
   return (
     <fieldset className="mt-3 border-t border-rule pt-3" data-field="controls.desaturation">
@@ -87,8 +120,26 @@ function Desaturation() {
       <p className="mb-1 font-semibold">When a mix asks a motor for more than 100 %</p>
       <div className="grid gap-2 lg:grid-cols-2">
         {choices.map((c) => (
-          <label key={c.value} className={cx('flex gap-2 rounded border p-2 text-sm', mode === c.value ? (c.worse ? 'border-warn bg-warn-soft/60' : 'border-accent bg-accent-soft/60') : 'border-rule')}>
-            <input type="radio" name="desaturation" value={c.value} checked={mode === c.value} disabled={disabled} onChange={() => set(['controls', 'desaturation'], c.value)} className="mt-1 accent-accent" />
+          <label
+            key={c.value}
+            className={cx(
+              'flex gap-2 rounded border p-2 text-sm',
+              mode === c.value
+                ? c.worse
+                  ? 'border-warn bg-warn-soft/60'
+                  : 'border-accent bg-accent-soft/60'
+                : 'border-rule',
+            )}
+          >
+            <input
+              type="radio"
+              name="desaturation"
+              value={c.value}
+              checked={mode === c.value}
+              disabled={disabled}
+              onChange={() => set(['controls', 'desaturation'], c.value)}
+              className="mt-1 accent-accent"
+            />
             <span>
               <span className={cx('block font-semibold', c.worse && 'text-warn-strong')}>{c.title}</span>
               <span className="text-ink-muted">{c.words}</span>

@@ -6,9 +6,30 @@ import { DraftNumberInput, DraftSelect, DraftTextInput, type Option } from './dr
 // Table cells: no visible label (the column heading is one; aria-label names the cell), no
 // error text in the cell (the row would grow): a red border, and the reason below the table.
 
-export function NumberCell({ path, label, width = 'w-20', scale, allowEmpty }: { path: FieldPath; label: string; width?: string; scale?: number; allowEmpty?: boolean }) {
+export function NumberCell({
+  path,
+  label,
+  width = 'w-20',
+  scale,
+  allowEmpty,
+}: {
+  path: FieldPath;
+  label: string;
+  width?: string;
+  scale?: number;
+  allowEmpty?: boolean;
+}) {
   const field = useDraftField<number | null>(path);
-  return <DraftNumberInput field={field} width={width} scale={scale} allowEmpty={allowEmpty} aria-label={label} title={field.error} />;
+  return (
+    <DraftNumberInput
+      field={field}
+      width={width}
+      scale={scale}
+      allowEmpty={allowEmpty}
+      aria-label={label}
+      title={field.error}
+    />
+  );
 }
 
 export function TextCell({ path, label, width = 'w-32' }: { path: FieldPath; label: string; width?: string }) {
@@ -16,9 +37,28 @@ export function TextCell({ path, label, width = 'w-32' }: { path: FieldPath; lab
   return <DraftTextInput field={field} width={width} aria-label={label} title={field.error} />;
 }
 
-export function SelectCell<V extends string | number | null>({ path, label, options, width = 'w-32' }: { path: FieldPath; label: string; options: Option<V>[]; width?: string }) {
+export function SelectCell<V extends string | number | null>({
+  path,
+  label,
+  options,
+  width = 'w-32',
+}: {
+  path: FieldPath;
+  label: string;
+  options: Option<V>[];
+  width?: string;
+}) {
   const field = useDraftField<V>(path);
-  return <DraftSelect field={field} options={options} width={width} className="py-1" aria-label={label} title={field.error} />;
+  return (
+    <DraftSelect
+      field={field}
+      options={options}
+      width={width}
+      className="py-1"
+      aria-label={label}
+      title={field.error}
+    />
+  );
 }
 
 export function CheckboxCell({ path, label }: { path: FieldPath; label: string }) {

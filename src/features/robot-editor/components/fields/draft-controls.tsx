@@ -16,9 +16,18 @@ const encode = (v: string | number | null) => (v === null ? '' : String(v));
 const borderFor = (error: string | undefined) => (error ? 'border-error' : 'border-rule-strong');
 
 type DraftField<T> = ReturnType<typeof useDraftField<T>>;
-type ControlProps<T, E> = { field: DraftField<T>; width: string } & Omit<E, 'value' | 'onChange' | 'disabled' | 'className'>;
+type ControlProps<T, E> = { field: DraftField<T>; width: string } & Omit<
+  E,
+  'value' | 'onChange' | 'disabled' | 'className'
+>;
 
-export function DraftSelect<V extends string | number | null>({ field, width, options, className, ...rest }: ControlProps<V, SelectHTMLAttributes<HTMLSelectElement>> & { options: Option<V>[]; className: string }) {
+export function DraftSelect<V extends string | number | null>({
+  field,
+  width,
+  options,
+  className,
+  ...rest
+}: ControlProps<V, SelectHTMLAttributes<HTMLSelectElement>> & { options: Option<V>[]; className: string }) {
   return (
     <select
       {...rest}
@@ -54,6 +63,20 @@ export function DraftTextInput({ field, width, ...rest }: ControlProps<string, I
   );
 }
 
-export function DraftNumberInput({ field, width, ...rest }: ControlProps<number | null, Omit<NumberInputProps, 'onCommit' | 'invalid'>>) {
-  return <NumberInput {...rest} data-field={field.key} value={field.value} onCommit={field.set} invalid={Boolean(field.error)} disabled={field.disabled} className={width} />;
+export function DraftNumberInput({
+  field,
+  width,
+  ...rest
+}: ControlProps<number | null, Omit<NumberInputProps, 'onCommit' | 'invalid'>>) {
+  return (
+    <NumberInput
+      {...rest}
+      data-field={field.key}
+      value={field.value}
+      onCommit={field.set}
+      invalid={Boolean(field.error)}
+      disabled={field.disabled}
+      className={width}
+    />
+  );
 }

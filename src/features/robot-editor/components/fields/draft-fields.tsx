@@ -12,14 +12,31 @@ interface LabelledProps {
 }
 
 /** Label above, control and unit in a row, then one line kept for the hint or the error. */
-function FieldFrame({ id, label, hint, error, children, className }: { id: string; label: string; hint?: ReactNode; error?: string; children: ReactNode; className?: string }) {
+function FieldFrame({
+  id,
+  label,
+  hint,
+  error,
+  children,
+  className,
+}: {
+  id: string;
+  label: string;
+  hint?: ReactNode;
+  error?: string;
+  children: ReactNode;
+  className?: string;
+}) {
   return (
     <div className={cx('flex flex-col gap-1', className)}>
       <label htmlFor={id} className="text-sm font-semibold text-ink-soft">
         {label}
       </label>
       <div className="flex items-center gap-1.5">{children}</div>
-      <p id={`${id}-note`} className={cx('min-h-5 text-xs leading-5', error ? 'font-semibold text-error' : 'text-ink-muted')}>
+      <p
+        id={`${id}-note`}
+        className={cx('min-h-5 text-xs leading-5', error ? 'font-semibold text-error' : 'text-ink-muted')}
+      >
         {error ? `✕ ${error}` : hint}
       </p>
     </div>
@@ -40,7 +57,14 @@ export function DraftNumberField({
   const field = useDraftField<number | null>(path);
   return (
     <FieldFrame id={id} label={label} hint={hint} error={field.error} className={className}>
-      <DraftNumberInput id={id} field={field} width={width} scale={scale} allowEmpty={allowEmpty} aria-describedby={`${id}-note`} />
+      <DraftNumberInput
+        id={id}
+        field={field}
+        width={width}
+        scale={scale}
+        allowEmpty={allowEmpty}
+        aria-describedby={`${id}-note`}
+      />
       {unit && <span className="text-sm text-ink-muted">{unit}</span>}
     </FieldFrame>
   );
@@ -58,7 +82,14 @@ export function DraftSelectField<V extends string | number | null>({
   const field = useDraftField<V>(path);
   return (
     <FieldFrame id={id} label={label} hint={hint} error={field.error} className={className}>
-      <DraftSelect id={id} field={field} options={options} width={width} className="py-1.5" aria-describedby={`${id}-note`} />
+      <DraftSelect
+        id={id}
+        field={field}
+        options={options}
+        width={width}
+        className="py-1.5"
+        aria-describedby={`${id}-note`}
+      />
     </FieldFrame>
   );
 }

@@ -16,7 +16,19 @@ export interface EditColumn {
  * A table of draft rows (motors, channels): a caption for screen readers, column headings with
  * their units, and a blank heading over the remove buttons.
  */
-export function EditTable({ field, caption, columns, fullWidth, children }: { field: string; caption: string; columns: EditColumn[]; fullWidth?: boolean; children: ReactNode }) {
+export function EditTable({
+  field,
+  caption,
+  columns,
+  fullWidth,
+  children,
+}: {
+  field: string;
+  caption: string;
+  columns: EditColumn[];
+  fullWidth?: boolean;
+  children: ReactNode;
+}) {
   return (
     <div className="overflow-x-auto" data-field={field}>
       <table className={cx(fullWidth && 'w-full', 'border-collapse text-left text-sm')}>
@@ -24,7 +36,12 @@ export function EditTable({ field, caption, columns, fullWidth, children }: { fi
         <thead className="border-b border-rule-strong text-xs text-ink-muted">
           <tr>
             {columns.map((c, i) => (
-              <th key={c.title} scope="col" className={cx(i === 0 ? 'py-1 pr-1.5' : 'px-1.5 py-1', 'font-semibold')} title={c.hint}>
+              <th
+                key={c.title}
+                scope="col"
+                className={cx(i === 0 ? 'py-1 pr-1.5' : 'px-1.5 py-1', 'font-semibold')}
+                title={c.hint}
+              >
                 <span className="tracking-wide uppercase">{c.title}</span>
                 {c.unit && ` (${c.unit})`}
               </th>

@@ -28,11 +28,22 @@ function parse(text: string, allowEmpty: boolean): number | null {
  * A number typed as text: what was typed stays on screen ("1.", "-") while the draft gets the
  * number (or NaN, which the schema reports). Fixed width, so nothing moves while typing.
  */
-export function NumberInput({ value, onCommit, allowEmpty = false, scale = 1, invalid = false, className, ...rest }: NumberInputProps) {
+export function NumberInput({
+  value,
+  onCommit,
+  allowEmpty = false,
+  scale = 1,
+  invalid = false,
+  className,
+  ...rest
+}: NumberInputProps) {
   const [text, setText] = useState(() => shown(value, scale));
   useEffect(() => {
     const typed = parse(text, allowEmpty);
-    const same = typed === null ? value === null : value !== null && (Object.is(typed / scale, value) || Math.abs(typed / scale - value) < 1e-9);
+    const same =
+      typed === null
+        ? value === null
+        : value !== null && (Object.is(typed / scale, value) || Math.abs(typed / scale - value) < 1e-9);
     if (!same && !(Number.isNaN(typed) && value !== null && Number.isNaN(value))) setText(shown(value, scale));
     // Only an outside change of the value rewrites the text; typing must not be reformatted.
   }, [value, scale]);

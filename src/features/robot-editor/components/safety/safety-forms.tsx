@@ -35,16 +35,48 @@ const seconds = (ms: number) => (Number.isFinite(ms) ? `${(ms / 1000).toFixed(2)
 export function MotorSafetyForm() {
   const { config } = useDraftFields();
   const s = config.safety;
-  const rampHint = Number.isFinite(s.rampPerSecond) && s.rampPerSecond > 0 ? `Standstill to full in ${(1 / s.rampPerSecond).toFixed(2)} s` : 'Full scale per second';
+  const rampHint =
+    Number.isFinite(s.rampPerSecond) && s.rampPerSecond > 0
+      ? `Standstill to full in ${(1 / s.rampPerSecond).toFixed(2)} s`
+      : 'Full scale per second';
   return (
-    <Panel title="Motor safety" titleId="motor-safety-title" description="The firmware enforces these whatever the sticks say.">
+    <Panel
+      title="Motor safety"
+      titleId="motor-safety-title"
+      description="The firmware enforces these whatever the sticks say."
+    >
       <div className="grid grid-cols-[repeat(auto-fill,minmax(14rem,1fr))] gap-x-5">
-        <DraftNumberField path={['safety', 'failsafeTimeoutMs']} label="Failsafe after" unit="ms" hint={`Motors stop ${seconds(s.failsafeTimeoutMs)} after the last good frame`} />
+        <DraftNumberField
+          path={['safety', 'failsafeTimeoutMs']}
+          label="Failsafe after"
+          unit="ms"
+          hint={`Motors stop ${seconds(s.failsafeTimeoutMs)} after the last good frame`}
+        />
         <DraftNumberField path={['safety', 'rampPerSecond']} label="Ramp limit" unit="full scale/s" hint={rampHint} />
-        <DraftNumberField path={['safety', 'outputLimitPercent']} label="Output limit" unit="%" hint="Highest duty any motor gets" />
-        <DraftNumberField path={['safety', 'reverseDwellMs']} label="Reverse dwell" unit="ms" hint="Pause at stop before a motor reverses" />
-        <DraftNumberField path={['safety', 'startupValidFrames']} label="Good frames before start" hint="After power-on or a failsafe" />
-        <DraftNumberField path={['safety', 'centreTolerance']} label="Centre tolerance" unit="%" scale={100} hint="Sticks this near centre count as centred" />
+        <DraftNumberField
+          path={['safety', 'outputLimitPercent']}
+          label="Output limit"
+          unit="%"
+          hint="Highest duty any motor gets"
+        />
+        <DraftNumberField
+          path={['safety', 'reverseDwellMs']}
+          label="Reverse dwell"
+          unit="ms"
+          hint="Pause at stop before a motor reverses"
+        />
+        <DraftNumberField
+          path={['safety', 'startupValidFrames']}
+          label="Good frames before start"
+          hint="After power-on or a failsafe"
+        />
+        <DraftNumberField
+          path={['safety', 'centreTolerance']}
+          label="Centre tolerance"
+          unit="%"
+          scale={100}
+          hint="Sticks this near centre count as centred"
+        />
       </div>
       <DraftCheckbox
         path={['safety', 'armingRequired']}
@@ -64,10 +96,21 @@ export function PowerForm() {
     <Panel title="Battery and logic supply" titleId="power-title">
       <div className="grid grid-cols-[repeat(auto-fill,minmax(12rem,1fr))] gap-x-5">
         <DraftSelectField path={['power', 'chemistry']} label="Chemistry" options={CHEMISTRY} width="w-full" />
-        <DraftNumberField path={['power', 'cells']} label="Cells in series" hint={CELLS_HINT[config.power.chemistry]} width="w-16" />
+        <DraftNumberField
+          path={['power', 'cells']}
+          label="Cells in series"
+          hint={CELLS_HINT[config.power.chemistry]}
+          width="w-16"
+        />
         <DraftNumberField path={['power', 'capacityMah']} label="Capacity" unit="mAh" />
         <DraftNumberField path={['power', 'dischargeC']} label="Discharge rating" unit="C" width="w-16" />
-        <DraftSelectField path={['power', 'logicSupply']} label="The board is fed from" options={LOGIC_SUPPLY} width="w-full" className="col-span-2" />
+        <DraftSelectField
+          path={['power', 'logicSupply']}
+          label="The board is fed from"
+          options={LOGIC_SUPPLY}
+          width="w-full"
+          className="col-span-2"
+        />
       </div>
       <p className="min-h-5 text-sm text-ink-soft">
         {battery &&

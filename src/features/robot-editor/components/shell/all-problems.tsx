@@ -1,16 +1,30 @@
 import { Panel } from '@/components/ui/panel';
-import { homeSectionOf, SECTION_IDS, SECTION_LABELS, type EditorProblem, type SectionId } from '../../lib/editor-sections';
+import {
+  homeSectionOf,
+  SECTION_IDS,
+  SECTION_LABELS,
+  type EditorProblem,
+  type SectionId,
+} from '../../lib/editor-sections';
 import { ProblemList } from './problem-list';
 
 /**
  * Every problem of the draft once, grouped by its home section: a power problem under Safety,
  * which explains it, any other under the section with its field. Each links to its field.
  */
-export function AllProblems({ problems, available }: { problems: readonly EditorProblem[]; available: readonly SectionId[] }) {
+export function AllProblems({
+  problems,
+  available,
+}: {
+  problems: readonly EditorProblem[];
+  available: readonly SectionId[];
+}) {
   if (problems.length === 0) {
     return (
       <Panel title="All problems" titleId="all-problems-title">
-        <p className="text-accent-strong">No errors or warnings: the engine, the pin check and the power advice are all satisfied.</p>
+        <p className="text-accent-strong">
+          No errors or warnings: the engine, the pin check and the power advice are all satisfied.
+        </p>
       </Panel>
     );
   }
@@ -19,13 +33,19 @@ export function AllProblems({ problems, available }: { problems: readonly Editor
     items: problems.filter((p) => homeSectionOf(p) === section),
   }));
   return (
-    <Panel title="All problems" titleId="all-problems-title" description="From the drive engine, the pin check, the power advice and the form's own checks. Errors first.">
+    <Panel
+      title="All problems"
+      titleId="all-problems-title"
+      description="From the drive engine, the pin check, the power advice and the form's own checks. Errors first."
+    >
       <div className="flex flex-col gap-4">
         {groups
           .filter((g) => g.items.length > 0)
           .map((g) => (
             <section key={g.section ?? 'other'} aria-label={g.section ? SECTION_LABELS[g.section] : 'Other'}>
-              <h3 className="border-b border-rule pb-1 font-semibold">{g.section ? SECTION_LABELS[g.section] : 'Other'}</h3>
+              <h3 className="border-b border-rule pb-1 font-semibold">
+                {g.section ? SECTION_LABELS[g.section] : 'Other'}
+              </h3>
               <ProblemList problems={g.items} available={available} />
             </section>
           ))}

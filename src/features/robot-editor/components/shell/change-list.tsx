@@ -15,14 +15,18 @@ export function ChangeList({ changes, limit = Infinity }: { changes: readonly Se
             </span>
             <span>
               <span className="text-ink-muted line-through decoration-ink-faint">{c.from ?? 'not set'}</span>
-              <span aria-hidden="true" className="px-1 text-ink-faint">→</span>
+              <span aria-hidden="true" className="px-1 text-ink-faint">
+                →
+              </span>
               <span className="sr-only"> becomes </span>
               <span className="font-semibold">{c.to ?? 'not set'}</span>
             </span>
           </li>
         ))}
       </ul>
-      {changes.length > shown.length && <p className="mt-1 text-xs text-ink-muted">and {changes.length - shown.length} more.</p>}
+      {changes.length > shown.length && (
+        <p className="mt-1 text-xs text-ink-muted">and {changes.length - shown.length} more.</p>
+      )}
     </>
   );
 }

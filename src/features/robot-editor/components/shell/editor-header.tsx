@@ -16,7 +16,16 @@ export interface EditorHeaderProps {
 }
 
 /** Robot name, where the draft stands, and the one action that matters: save. */
-export function EditorHeader({ robot, head, baseRevision, dirty, canEdit, saving, onSave, onDiscard }: EditorHeaderProps) {
+export function EditorHeader({
+  robot,
+  head,
+  baseRevision,
+  dirty,
+  canEdit,
+  saving,
+  onSave,
+  onDiscard,
+}: EditorHeaderProps) {
   return (
     <header className="mb-4 flex flex-wrap items-end justify-between gap-4 border-b border-rule pb-3">
       <div className="min-w-0">

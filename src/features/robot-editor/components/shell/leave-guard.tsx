@@ -8,8 +8,19 @@ import { Dialog } from '@/components/ui/dialog';
  * the tab closes or reloads with the browser's own question. Moving between the robot's
  * sections (paths under `basePath`) never asks.
  */
-export function LeaveGuard({ dirty, basePath, onDiscard }: { dirty: boolean; basePath: string; onDiscard: () => void }) {
-  const blocker = useBlocker(({ nextLocation }) => dirty && !nextLocation.pathname.startsWith(`${basePath}/`) && nextLocation.pathname !== basePath);
+export function LeaveGuard({
+  dirty,
+  basePath,
+  onDiscard,
+}: {
+  dirty: boolean;
+  basePath: string;
+  onDiscard: () => void;
+}) {
+  const blocker = useBlocker(
+    ({ nextLocation }) =>
+      dirty && !nextLocation.pathname.startsWith(`${basePath}/`) && nextLocation.pathname !== basePath,
+  );
 
   useEffect(() => {
     if (!dirty) return;
@@ -24,7 +35,12 @@ export function LeaveGuard({ dirty, basePath, onDiscard }: { dirty: boolean; bas
 
   const blocked = blocker.state === 'blocked';
   return (
-    <Dialog open={blocked} onClose={() => blocker.reset?.()} title="Leave with unsaved changes?" description="Your draft stays on this computer and is here when you come back, but nobody else sees it until you save.">
+    <Dialog
+      open={blocked}
+      onClose={() => blocker.reset?.()}
+      title="Leave with unsaved changes?"
+      description="Your draft stays on this computer and is here when you come back, but nobody else sees it until you save."
+    >
       <div className="flex flex-wrap justify-end gap-2">
         <Button variant="secondary" onClick={() => blocker.reset?.()}>
           Stay

@@ -12,7 +12,15 @@ export function problemHref(problem: EditorProblem, available: readonly SectionI
 }
 
 /** Problems as a list: what is wrong, what to do, and a link to the field. */
-export function ProblemList({ problems, available, className }: { problems: readonly EditorProblem[]; available: readonly SectionId[]; className?: string }) {
+export function ProblemList({
+  problems,
+  available,
+  className,
+}: {
+  problems: readonly EditorProblem[];
+  available: readonly SectionId[];
+  className?: string;
+}) {
   const id = useId();
   return (
     <ul className={cx('divide-y divide-rule', className)}>
@@ -22,7 +30,10 @@ export function ProblemList({ problems, available, className }: { problems: read
         const messageId = `${id}-${index}`;
         return (
           <li key={`${problem.code}-${pathKey(problem.path)}-${index}`} className="flex gap-2 py-1.5 text-sm">
-            <span aria-hidden="true" className={cx('mt-0.5 w-4 shrink-0 text-center font-bold', error ? 'text-error' : 'text-warn')}>
+            <span
+              aria-hidden="true"
+              className={cx('mt-0.5 w-4 shrink-0 text-center font-bold', error ? 'text-error' : 'text-warn')}
+            >
               {error ? '✕' : '!'}
             </span>
             <div className="min-w-0 flex-1">
@@ -33,7 +44,12 @@ export function ProblemList({ problems, available, className }: { problems: read
               <p className="text-ink-muted">{problem.hint}</p>
             </div>
             {href && (
-              <Link to={href} relative="path" aria-describedby={messageId} className="shrink-0 self-start rounded px-1 text-sm font-semibold text-accent-strong hover:underline">
+              <Link
+                to={href}
+                relative="path"
+                aria-describedby={messageId}
+                className="shrink-0 self-start rounded px-1 text-sm font-semibold text-accent-strong hover:underline"
+              >
                 Show field
               </Link>
             )}

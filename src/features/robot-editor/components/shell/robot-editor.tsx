@@ -65,11 +65,21 @@ export function RobotEditor({ detail, section, sections, basePath, save, revisio
   const engineConfig = useDeferredValue(validConfig);
   const problems = useMemo<EditorProblem[]>(() => {
     const engine = robotProblems(engineConfig);
-    return [...fieldErrorProblems(fieldErrors), ...engine.filter((p) => p.severity === 'error'), ...engine.filter((p) => p.severity === 'warning')];
+    return [
+      ...fieldErrorProblems(fieldErrors),
+      ...engine.filter((p) => p.severity === 'error'),
+      ...engine.filter((p) => p.severity === 'warning'),
+    ];
   }, [engineConfig, fieldErrors]);
   const counts = useMemo(() => countBySection(problems), [problems]);
   const available = useMemo(() => SECTION_IDS.filter((id) => sections[id]), [sections]);
-  const total = useMemo<SectionCount>(() => ({ errors: problems.filter((p) => p.severity === 'error').length, warnings: problems.filter((p) => p.severity === 'warning').length }), [problems]);
+  const total = useMemo<SectionCount>(
+    () => ({
+      errors: problems.filter((p) => p.severity === 'error').length,
+      warnings: problems.filter((p) => p.severity === 'warning').length,
+    }),
+    [problems],
+  );
 
   const [saveState, setSaveState] = useState<SaveState>(CLOSED);
   const [conflict, setConflict] = useState<RevisionSummary | null>(null);
@@ -102,7 +112,10 @@ export function RobotEditor({ detail, section, sections, basePath, save, revisio
 
   const contentRef = useRef<HTMLDivElement>(null);
   const [searchParams, setSearchParams] = useSearchParams();
-  const clearField = useCallback(() => setSearchParams((p) => (p.delete('field'), p), { replace: true }), [setSearchParams]);
+  const clearField = useCallback(
+    () => setSearchParams((p) => (p.delete('field'), p), { replace: true }),
+    [setSearchParams],
+  );
   useFieldFocus(searchParams.get('field'), contentRef, clearField);
 
   const Section = section === 'problems' ? null : sections[section];
@@ -135,11 +148,15 @@ export function RobotEditor({ detail, section, sections, basePath, save, revisio
         <FormNotice message={notice ?? undefined} />
         {draft.behindHead && (
           <p role="status" className="rounded-md border border-warn/30 bg-warn-soft px-3 py-2 text-sm text-warn-strong">
-            Your draft started from r{draft.baseRevision}; r{head.number} was saved since. Saving will show both and let you choose field by field.
+            Your draft started from r{draft.baseRevision}; r{head.number} was saved since. Saving will show both and let
+            you choose field by field.
           </p>
         )}
         {draft.storageFailed && (
-          <p role="alert" className="rounded-md border border-error/30 bg-error-soft px-3 py-2 text-sm text-error-strong">
+          <p
+            role="alert"
+            className="rounded-md border border-error/30 bg-error-soft px-3 py-2 text-sm text-error-strong"
+          >
             This browser would not keep the draft (storage full or turned off): save before you leave this page.
           </p>
         )}

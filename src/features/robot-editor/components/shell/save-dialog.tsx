@@ -30,9 +30,27 @@ export interface SaveDialogProps {
 }
 
 /** Review what changed, say why in a sentence, and save it as the next revision. */
-export function SaveDialog({ open, onClose, initialMessage, baseRevision, baseConfig, draft, invalidFields, saving, error, onSubmit }: SaveDialogProps) {
+export function SaveDialog({
+  open,
+  onClose,
+  initialMessage,
+  baseRevision,
+  baseConfig,
+  draft,
+  invalidFields,
+  saving,
+  error,
+  onSubmit,
+}: SaveDialogProps) {
   return (
-    <Dialog open={open} onClose={onClose} busy={saving} title="Save a new revision" size="max-w-2xl" description={`On top of r${baseRevision}. Everyone in the team sees it.`}>
+    <Dialog
+      open={open}
+      onClose={onClose}
+      busy={saving}
+      title="Save a new revision"
+      size="max-w-2xl"
+      description={`On top of r${baseRevision}. Everyone in the team sees it.`}
+    >
       {open && (
         <SaveForm
           initialMessage={initialMessage}
@@ -58,7 +76,10 @@ function SaveForm({
   error,
   onSubmit,
   onCancel,
-}: Pick<SaveDialogProps, 'initialMessage' | 'baseRevision' | 'invalidFields' | 'saving' | 'error' | 'onSubmit'> & { changes: SettingChange[] | null; onCancel: () => void }) {
+}: Pick<SaveDialogProps, 'initialMessage' | 'baseRevision' | 'invalidFields' | 'saving' | 'error' | 'onSubmit'> & {
+  changes: SettingChange[] | null;
+  onCancel: () => void;
+}) {
   const form = useForm<SaveForm>({ resolver: zodResolver(SaveFormSchema), defaultValues: { message: initialMessage } });
   const submit = form.handleSubmit((values) => onSubmit(values.message.trim()));
   return (
@@ -68,11 +89,15 @@ function SaveForm({
         {changes ? (
           <ChangeList changes={changes} limit={12} />
         ) : (
-          <p className="text-sm text-ink-muted">This draft started from r{baseRevision}; a newer revision exists, so saving will ask how to combine them.</p>
+          <p className="text-sm text-ink-muted">
+            This draft started from r{baseRevision}; a newer revision exists, so saving will ask how to combine them.
+          </p>
         )}
       </section>
       {invalidFields > 0 && (
-        <FormError message={`${invalidFields} ${invalidFields === 1 ? 'field needs' : 'fields need'} fixing before this can be saved: see “All problems”.`} />
+        <FormError
+          message={`${invalidFields} ${invalidFields === 1 ? 'field needs' : 'fields need'} fixing before this can be saved: see “All problems”.`}
+        />
       )}
       <FormError message={error ?? undefined} />
       <TextField

@@ -7,13 +7,19 @@ export function CountBadges({ count }: { count: SectionCount }) {
   return (
     <span className="ml-auto flex gap-1">
       {count.errors > 0 && (
-        <span className="rounded bg-error-soft px-1.5 text-xs font-semibold text-error-strong" title={`${count.errors} ${count.errors === 1 ? 'error' : 'errors'}`}>
+        <span
+          className="rounded bg-error-soft px-1.5 text-xs font-semibold text-error-strong"
+          title={`${count.errors} ${count.errors === 1 ? 'error' : 'errors'}`}
+        >
           {count.errors}
           <span className="sr-only"> {count.errors === 1 ? 'error' : 'errors'}</span>
         </span>
       )}
       {count.warnings > 0 && (
-        <span className="rounded bg-warn-soft px-1.5 text-xs font-semibold text-warn-strong" title={`${count.warnings} ${count.warnings === 1 ? 'warning' : 'warnings'}`}>
+        <span
+          className="rounded bg-warn-soft px-1.5 text-xs font-semibold text-warn-strong"
+          title={`${count.warnings} ${count.warnings === 1 ? 'warning' : 'warnings'}`}
+        >
           {count.warnings}
           <span className="sr-only"> {count.warnings === 1 ? 'warning' : 'warnings'}</span>
         </span>
@@ -29,7 +35,15 @@ const itemClasses = ({ isActive }: { isActive: boolean }) =>
   );
 
 /** The sections of this build, each with its live count of errors and warnings. */
-export function SectionNav({ sections, counts, total }: { sections: SectionId[]; counts: Record<SectionId, SectionCount>; total: SectionCount }) {
+export function SectionNav({
+  sections,
+  counts,
+  total,
+}: {
+  sections: SectionId[];
+  counts: Record<SectionId, SectionCount>;
+  total: SectionCount;
+}) {
   return (
     <nav aria-label="Robot sections" className="flex flex-col gap-0.5">
       {sections.map((id) => (

@@ -7,7 +7,12 @@ function summary(problems: readonly EditorProblem[]): string {
   const errors = problems.filter((p) => p.severity === 'error').length;
   const warnings = problems.length - errors;
   if (problems.length === 0) return 'no errors or warnings';
-  return [errors > 0 && `${errors} ${errors === 1 ? 'error' : 'errors'}`, warnings > 0 && `${warnings} ${warnings === 1 ? 'warning' : 'warnings'}`].filter(Boolean).join(', ');
+  return [
+    errors > 0 && `${errors} ${errors === 1 ? 'error' : 'errors'}`,
+    warnings > 0 && `${warnings} ${warnings === 1 ? 'warning' : 'warnings'}`,
+  ]
+    .filter(Boolean)
+    .join(', ');
 }
 
 /**
@@ -15,7 +20,15 @@ function summary(problems: readonly EditorProblem[]): string {
  * on request as a sheet over the content, so problems coming and going while someone types
  * never move the fields.
  */
-export function SectionProblems({ problems, available, label }: { problems: readonly EditorProblem[]; available: readonly SectionId[]; label: string }) {
+export function SectionProblems({
+  problems,
+  available,
+  label,
+}: {
+  problems: readonly EditorProblem[];
+  available: readonly SectionId[];
+  label: string;
+}) {
   const [open, setOpen] = useState(false);
   const id = useId();
   const box = useRef<HTMLDivElement>(null);
@@ -23,7 +36,8 @@ export function SectionProblems({ problems, available, label }: { problems: read
   useEffect(() => {
     if (!open) return;
     const close = (event: MouseEvent | KeyboardEvent) => {
-      if (event instanceof KeyboardEvent ? event.key === 'Escape' : !box.current?.contains(event.target as Node)) setOpen(false);
+      if (event instanceof KeyboardEvent ? event.key === 'Escape' : !box.current?.contains(event.target as Node))
+        setOpen(false);
     };
     document.addEventListener('mousedown', close);
     document.addEventListener('keydown', close);
@@ -40,14 +54,27 @@ export function SectionProblems({ problems, available, label }: { problems: read
       <div
         className={cx(
           'flex h-10 items-center gap-3 rounded-lg border px-4 text-sm',
-          problems.length === 0 ? 'border-rule bg-paper-raised text-ink-muted' : errors ? 'border-error/30 bg-error-soft/60' : 'border-warn/30 bg-warn-soft/60',
+          problems.length === 0
+            ? 'border-rule bg-paper-raised text-ink-muted'
+            : errors
+              ? 'border-error/30 bg-error-soft/60'
+              : 'border-warn/30 bg-warn-soft/60',
         )}
       >
-        <p role="status" className={cx('font-semibold', problems.length > 0 && (errors ? 'text-error-strong' : 'text-warn-strong'))}>
+        <p
+          role="status"
+          className={cx('font-semibold', problems.length > 0 && (errors ? 'text-error-strong' : 'text-warn-strong'))}
+        >
           {label}: {summary(problems)}
         </p>
         {problems.length > 0 && (
-          <button type="button" aria-expanded={open} aria-controls={id} onClick={() => setOpen((o) => !o)} className="ml-auto rounded px-2 py-0.5 font-semibold text-accent-strong hover:underline">
+          <button
+            type="button"
+            aria-expanded={open}
+            aria-controls={id}
+            onClick={() => setOpen((o) => !o)}
+            className="ml-auto rounded px-2 py-0.5 font-semibold text-accent-strong hover:underline"
+          >
             {open ? 'Hide the list' : 'Show the list'}
           </button>
         )}

@@ -72,7 +72,11 @@ describe('reasons that block generation', () => {
   });
 
   it("strips the body's config prefix from an invalid draft's fields", () => {
-    const error = new ApiError(400, { code: 'invalid_input', message: 'x', fields: { 'config.safety.rampPerSecond': 'Too big' } });
+    const error = new ApiError(400, {
+      code: 'invalid_input',
+      message: 'x',
+      fields: { 'config.safety.rampPerSecond': 'Too big' },
+    });
     expect(blockersOf(error)).toEqual([{ path: ['safety', 'rampPerSecond'], message: 'Too big' }]);
   });
 
@@ -90,7 +94,9 @@ describe('links to fields', () => {
   });
 
   it("lead to Wiring for the handheld remote's pins, which Wiring plans beside the robot's", () => {
-    expect(fieldLink(['controls', 'link', 'remotePins', 'throttle', 'pin'])).toBe('../wiring?field=controls.link.remotePins.throttle.pin');
+    expect(fieldLink(['controls', 'link', 'remotePins', 'throttle', 'pin'])).toBe(
+      '../wiring?field=controls.link.remotePins.throttle.pin',
+    );
   });
 });
 

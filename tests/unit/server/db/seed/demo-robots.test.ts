@@ -51,7 +51,12 @@ describe('the demo robots', () => {
   it('sets the Aisle Scout mecanum rollers in an X seen from above', () => {
     const wheels = byName('Aisle Scout').chassis.wheels;
     expect(wheels.map((w) => w.rollerAngleDeg)).toEqual([-45, 45, -45, 45]);
-    expect(wheels.map((w) => [Math.sign(w.xMm), Math.sign(w.yMm)])).toEqual([[1, 1], [1, -1], [-1, -1], [-1, 1]]);
+    expect(wheels.map((w) => [Math.sign(w.xMm), Math.sign(w.yMm)])).toEqual([
+      [1, 1],
+      [1, -1],
+      [-1, -1],
+      [-1, 1],
+    ]);
   });
 
   it('places the Garden Hauler tracks symmetrically either side of the centre line', () => {

@@ -6,7 +6,12 @@ const limits = { maxEntries: 10, maxTotalBytes: 1000 };
 
 describe('paths inside an uploaded zip', () => {
   it('accepts plain relative paths', () => {
-    expect(['config.json', 'robot/robot.ino', 'a/b/c.h', 'dots..in.name'].map(unsafePathReason)).toEqual([null, null, null, null]);
+    expect(['config.json', 'robot/robot.ino', 'a/b/c.h', 'dots..in.name'].map(unsafePathReason)).toEqual([
+      null,
+      null,
+      null,
+      null,
+    ]);
   });
 
   it('refuses climbing, roots, drives, backslashes and NUL', () => {
@@ -46,6 +51,8 @@ describe('reading a zip', () => {
     const damaged = Buffer.from(await zipOf({ 'a.txt': 'hello hello hello' }));
     const central = damaged.indexOf(Buffer.from([0x50, 0x4b, 0x01, 0x02])); // central directory record
     damaged.writeUInt32LE((damaged.readUInt32LE(central + 16) ^ 1) >>> 0, central + 16); // its CRC-32, one bit off
-    expect(() => readZip(damaged, limits)).toThrow(new ZipRejected('The zip archive is damaged ("a.txt" fails its checksum)'));
+    expect(() => readZip(damaged, limits)).toThrow(
+      new ZipRejected('The zip archive is damaged ("a.txt" fails its checksum)'),
+    );
   });
 });

@@ -32,7 +32,12 @@ describe('reading caught e-mail', () => {
       '----b1--',
     ].join('\r\n');
     const mail = parseMail(raw);
-    expect(mail).toMatchObject({ subject: 'Hello', to: 'b@example.org', text: 'Open https://mixwright.test/x now', html: '<p>html</p>' });
+    expect(mail).toMatchObject({
+      subject: 'Hello',
+      to: 'b@example.org',
+      text: 'Open https://mixwright.test/x now',
+      html: '<p>html</p>',
+    });
   });
 
   it('finds each link once, without trailing punctuation inside brackets', () => {

@@ -22,13 +22,19 @@ describe('changing the board', () => {
 
   it('names each cleared pin with its role in the message', () => {
     const message = boardChangeMessage(changeBoard(esp32Plan(), 'uno'), 'Uno');
-    expect(message).toMatch(/^The robot is now on the Uno\. Every role is kept; the Uno has no GPIO25 \(Driver 1 A PWM\), /);
+    expect(message).toMatch(
+      /^The robot is now on the Uno\. Every role is kept; the Uno has no GPIO25 \(Driver 1 A PWM\), /,
+    );
     expect(message).toContain('GPIO13 (status LED)');
     expect(message).toMatch(/so those pins were cleared\. Choose new pins, or use “Assign free pins”\.$/);
   });
 
   it('moves the remote to another board without touching the robot’s pins', () => {
-    const config = withPins(buildConfig({ source: 'nrf24', remoteBoard: 'nano' }), { 'remote/ce': 'D8', 'remote/ch1': 'A7', 'Driver 1/a.pwm': 'D9' });
+    const config = withPins(buildConfig({ source: 'nrf24', remoteBoard: 'nano' }), {
+      'remote/ce': 'D8',
+      'remote/ch1': 'A7',
+      'Driver 1/a.pwm': 'D9',
+    });
     const change = changeRemoteBoard(config, 'uno');
     // The Uno has A0–A5 only (pins_arduino.h, standard variant), the Nano also A6 and A7.
     expect(change.cleared).toEqual([{ label: 'remote channel 1 stick (Ch 1)', pin: 'A7' }]);

@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { addDriver, freeMotors, removeDriver, setChannelMotor, setDriverKind } from '@/features/wiring/lib/driver-edits';
+import {
+  addDriver,
+  freeMotors,
+  removeDriver,
+  setChannelMotor,
+  setDriverKind,
+} from '@/features/wiring/lib/driver-edits';
 import { RobotConfigSchema } from '@shared/schemas/robot-config';
 import { buildConfig, withPins } from '../../../../fixtures/robot-config-factory';
 
@@ -10,7 +16,11 @@ describe('driver edits', () => {
     const fewer = removeDriver(config, 1);
     expect(freeMotors(fewer)).toEqual(['Rear right', 'Rear left']);
     const added = addDriver(fewer)!;
-    expect(added.wiring.drivers[1]).toMatchObject({ name: 'Driver 2', kind: 'pwm-dir', motors: ['Rear right', 'Rear left'] });
+    expect(added.wiring.drivers[1]).toMatchObject({
+      name: 'Driver 2',
+      kind: 'pwm-dir',
+      motors: ['Rear right', 'Rear left'],
+    });
     expect(Object.keys(added.wiring.drivers[1].pins)).toEqual(['a.pwm', 'a.dir', 'b.pwm', 'b.dir']);
     expect(() => RobotConfigSchema.parse(added)).not.toThrow();
   });
@@ -27,10 +37,20 @@ describe('driver edits', () => {
 
   it('takes the second motor off a one-channel kind and picks a stop mode the kind can do', () => {
     const config = buildConfig({ driver: 'pwm-dir' });
-    const coasting = { ...config, wiring: { ...config.wiring, drivers: [{ ...config.wiring.drivers[0], stopMode: 'coast' as const, peakCurrentA: 20 }] } };
+    const coasting = {
+      ...config,
+      wiring: {
+        ...config.wiring,
+        drivers: [{ ...config.wiring.drivers[0], stopMode: 'coast' as const, peakCurrentA: 20 }],
+      },
+    };
     const change = setDriverKind(coasting, 0, 'servo-esc');
     expect(change.unplacedMotors).toEqual(['Right']);
-    expect(change.config.wiring.drivers[0]).toMatchObject({ motors: ['Left'], peakCurrentA: null, pwmFrequencyHz: null });
+    expect(change.config.wiring.drivers[0]).toMatchObject({
+      motors: ['Left'],
+      peakCurrentA: null,
+      pwmFrequencyHz: null,
+    });
     // PWM + direction modules cannot coast with their pins (the kind has no coast), so coast becomes brake.
     expect(setDriverKind(coasting, 0, 'pwm-dir').config.wiring.drivers[0].stopMode).toBe('brake');
   });

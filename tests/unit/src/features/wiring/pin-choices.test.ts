@@ -29,7 +29,9 @@ describe('pin choices', () => {
 
   it('keeps a second PWM role off the RP2040 slice channel another role drives', () => {
     // RP2040 datasheet, PWM: slice = (gpio >> 1) & 7, channel = gpio & 1, so GP2 and GP18 share 1A.
-    const config = withPins(buildConfig({ board: 'rp2040-pico', driver: 'pwm-dir', source: 'ppm' }), { 'Driver 1/a.pwm': 'GP2' });
+    const config = withPins(buildConfig({ board: 'rp2040-pico', driver: 'pwm-dir', source: 'ppm' }), {
+      'Driver 1/a.pwm': 'GP2',
+    });
     const choices = allPinChoices(config).get('driver:0:b.pwm')!;
     expect(ids(choices.suits)).not.toContain('GP18');
     expect(noteOf(choices.others, 'GP18')).toMatch(/slice 1 channel A/);
@@ -37,7 +39,10 @@ describe('pin choices', () => {
   });
 
   it('lets chips of one kind share their standby pin', () => {
-    const config = withPins(buildConfig({ layout: 'quad-mecanum', board: 'mega2560', driver: 'pwm-in1-in2-stby', source: 'ppm' }), { 'Driver 1/stby': 'D30' });
+    const config = withPins(
+      buildConfig({ layout: 'quad-mecanum', board: 'mega2560', driver: 'pwm-in1-in2-stby', source: 'ppm' }),
+      { 'Driver 1/stby': 'D30' },
+    );
     const choices = allPinChoices(config).get('driver:1:stby')!;
     expect(ids(choices.suits)).toContain('D30');
     expect(noteOf(choices.suits, 'D30')).toBe('digital output (shared with Driver 1 Standby)');

@@ -11,7 +11,11 @@ describe('pin records', () => {
     const after = collectDemands(next);
     expect(after.map((d) => d.pin)).toEqual(after.map((_, i) => `GP${i}`));
     expect(next.wiring.statusLed.pin).not.toBeNull();
-    expect(Object.keys(next.controls.link.remotePins)).toEqual(collectDemands(config).filter((d) => d.owner === 'remote').map((d) => d.roleId));
+    expect(Object.keys(next.controls.link.remotePins)).toEqual(
+      collectDemands(config)
+        .filter((d) => d.owner === 'remote')
+        .map((d) => d.roleId),
+    );
   });
 
   it('keeps the lock when the pin changes and the pin when the lock changes', () => {

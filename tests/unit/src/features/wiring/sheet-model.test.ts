@@ -5,7 +5,10 @@ import { buildConfig, withPins } from '../../../../fixtures/robot-config-factory
 
 describe('the wiring sheet’s tables', () => {
   it('puts two roles that share a pin on one row', () => {
-    const config = withPins(buildConfig({ layout: 'quad-mecanum', board: 'mega2560', driver: 'pwm-in1-in2-stby', source: 'ppm' }), { 'Driver 1/stby': 'D30', 'Driver 2/stby': 'D30' });
+    const config = withPins(
+      buildConfig({ layout: 'quad-mecanum', board: 'mega2560', driver: 'pwm-in1-in2-stby', source: 'ppm' }),
+      { 'Driver 1/stby': 'D30', 'Driver 2/stby': 'D30' },
+    );
     const row = sheetPinRows(config).find((r) => r.pin.id === 'D30')!;
     expect(row.roles).toEqual(['Driver 1 Standby', 'Driver 2 Standby']);
     expect(row.note).toBe('digital out');

@@ -12,7 +12,9 @@ describe('wiring problems', () => {
     const config = buildConfig({ layout: 'differential' });
     const all = robotProblems(config);
     expect(all.some((p) => p.code === 'pin-missing')).toBe(true);
-    expect(all.filter(isWiringProblem).every((p) => !p.path.includes('chassis') && !p.path.includes('axes'))).toBe(true);
+    expect(all.filter(isWiringProblem).every((p) => !p.path.includes('chassis') && !p.path.includes('axes'))).toBe(
+      true,
+    );
   });
 
   it('shows a board-wide PWM shortage in the list but not beside every PWM role', () => {
@@ -43,6 +45,10 @@ describe('pin changes', () => {
   it('lists the roles whose pin moved, was set or was cleared', () => {
     const before = unoPlan();
     const after = withPins(before, { 'Driver 1/a.pwm': 'D3', 'status-led': null, 'bench-test': 'A3' });
-    expect(pinChanges(before, after).map(describePinChange)).toEqual(['Driver 1 A PWM: D9 → D3', 'status LED: cleared (was D13)', 'bench-test switch: A3']);
+    expect(pinChanges(before, after).map(describePinChange)).toEqual([
+      'Driver 1 A PWM: D9 → D3',
+      'status LED: cleared (was D13)',
+      'bench-test switch: A3',
+    ]);
   });
 });

@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { addWheel, changeLayout, changeParams, removeWheel, renameMotor, syncMotors } from '@/features/robot-editor/lib/chassis-edits';
+import {
+  addWheel,
+  changeLayout,
+  changeParams,
+  removeWheel,
+  renameMotor,
+  syncMotors,
+} from '@/features/robot-editor/lib/chassis-edits';
 import { RobotConfigSchema, type RobotConfig } from '@shared/schemas/robot-config';
 import { buildStarterConfig } from '@shared/starter';
 
@@ -80,7 +87,10 @@ describe('wheels and motors', () => {
 
   it('gives a new motor the ratings of the robot’s motors, so the power advice stays quiet', () => {
     const config = changeLayout(trio(), 'custom');
-    const next = addWheel({ ...config, motors: config.motors.map((m) => ({ ...m, stallCurrentA: 0.8, ratedVoltage: 4.5 })) });
+    const next = addWheel({
+      ...config,
+      motors: config.motors.map((m) => ({ ...m, stallCurrentA: 0.8, ratedVoltage: 4.5 })),
+    });
     expect(next.motors.find((m) => m.name === 'Wheel 4')).toMatchObject({ stallCurrentA: 0.8, ratedVoltage: 4.5 });
   });
 
@@ -106,7 +116,10 @@ describe('wheels and motors', () => {
   });
 
   it('refuses a motor name another motor has', () => {
-    expect(renameMotor(mecanum(), 0, 'Rear left')).toEqual({ ok: false, reason: 'Another motor is already named “Rear left”' });
+    expect(renameMotor(mecanum(), 0, 'Rear left')).toEqual({
+      ok: false,
+      reason: 'Another motor is already named “Rear left”',
+    });
   });
 
   it('drops a motor no wheel uses', () => {

@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { addChannel, changeSource, randomLinkAddress, removeChannel, renumberChannel, setRatePositions } from '@/features/robot-editor/lib/controls-edits';
+import {
+  addChannel,
+  changeSource,
+  randomLinkAddress,
+  removeChannel,
+  renumberChannel,
+  setRatePositions,
+} from '@/features/robot-editor/lib/controls-edits';
 import { RobotConfigSchema } from '@shared/schemas/robot-config';
 import { buildStarterConfig } from '@shared/starter';
 
@@ -21,14 +28,21 @@ describe('controls edits', () => {
 
   it('leaves the stick that used a removed channel without a channel', () => {
     const config = rc();
-    const next = removeChannel(config, config.controls.channels.findIndex((c) => c.number === 4));
+    const next = removeChannel(
+      config,
+      config.controls.channels.findIndex((c) => c.number === 4),
+    );
     expect(next.controls.axes.yaw.channel).toBeNull();
     expect(next.wiring.inputPins.ch4).toBeUndefined();
   });
 
   it('moves the stick map along when a channel is renumbered', () => {
     const config = rc();
-    const result = renumberChannel(config, config.controls.channels.findIndex((c) => c.number === 2), 3);
+    const result = renumberChannel(
+      config,
+      config.controls.channels.findIndex((c) => c.number === 2),
+      3,
+    );
     if (!result.ok) throw new Error(result.reason);
     expect(result.config.controls.axes.forward.channel).toBe(3);
     expect(RobotConfigSchema.safeParse(result.config).success).toBe(true);

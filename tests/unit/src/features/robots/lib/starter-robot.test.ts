@@ -3,7 +3,8 @@ import { NEW_ROBOT_DEFAULTS, starterRobot } from '@/features/robots/lib/starter-
 import { robotProblems } from '@shared/problems/robot-problems';
 import { DRIVE_LAYOUT_IDS, DRIVER_KIND_IDS } from '@shared/schemas/ids';
 
-const describeProblems = (layout: string, driver: string) => (p: { severity: string; code: string; message: string }) => `${layout}/${driver}: ${p.severity} ${p.code}: ${p.message}`;
+const describeProblems = (layout: string, driver: string) => (p: { severity: string; code: string; message: string }) =>
+  `${layout}/${driver}: ${p.severity} ${p.code}: ${p.message}`;
 
 describe('a new robot from a starter layout', () => {
   it.each(DRIVE_LAYOUT_IDS)('opens %s with no errors and no warnings on the form’s first choices', (layout) => {
