@@ -53,7 +53,8 @@ export function createApp(deps: AppDeps): Express {
   const showMailbox = deps.mailbox && config.nodeEnv !== 'production';
 
   const api = Router();
-  api.use(express.json({ limit: config.jsonLimitBytes }));
+  // Cheap checks first: the origin (headers only) and the session (one indexed read). Each route
+  // reads its own body, within its own size limit, after its access checks (`validateBody`).
   api.use(originCheck(config.appUrl));
   api.use(loadSession(auth));
   api.use(authRoutes(ctx));

@@ -28,13 +28,13 @@ export interface AppConfig {
   rateLimits: {
     /** Per address and e-mail: guesses at one account. */
     signIn: RateLimitSetting;
+    /** Per address, failed sign-ins only: one address trying many accounts (password spraying). */
+    signInPerAddress: RateLimitSetting;
     /** Per address: reset e-mails requested. */
     passwordReset: RateLimitSetting;
     /** Per address: accounts created; also slows probing which e-mails already have one. */
     signUp: RateLimitSetting;
   };
-  /** Largest JSON body accepted, in bytes. */
-  jsonLimitBytes: number;
   /**
    * Reverse proxies in front of the app. With 0 the client address is the socket's; behind a
    * proxy that would put every visitor under one rate limit, so the proxy's hop count is set.
@@ -54,11 +54,13 @@ export function configFromEnv(env: Env): AppConfig {
     passwordResetMinutes: 60,
     rateLimits: {
       signIn: { windowMs: 15 * 60_000, limit: 10 },
+      // Only failures count, so a classroom signing in together is never stopped; a script
+      // trying one password on many accounts is, after a few dozen misses.
+      signInPerAddress: { windowMs: 15 * 60_000, limit: 30 },
       passwordReset: { windowMs: 60 * 60_000, limit: 5 },
       // A classroom signing up together shares one address: room for a class, not for a script.
       signUp: { windowMs: 60 * 60_000, limit: 40 },
     },
-    jsonLimitBytes: 1024 * 1024,
     trustProxyHops: env.TRUST_PROXY,
   };
 }

@@ -1,4 +1,6 @@
 import { randomBytes, scrypt, timingSafeEqual, type ScryptOptions } from 'node:crypto';
+import { availableParallelism } from 'node:os';
+import { createConcurrencyGate } from './concurrency-gate';
 
 /**
  * Password hashing with scrypt (memory-hard), see docs/decisions/001-password-hashing.md.
@@ -22,7 +24,19 @@ export const DEFAULT_PASSWORD_COST: PasswordCost = { log2N: 15, r: 8, p: 3 };
 const KEY_LENGTH = 32;
 const SALT_BYTES = 16;
 
+/**
+ * Every hash in this process goes through one gate: half the cores at most, and a short wait
+ * beyond which a sign-in is refused as busy (GateFullError) rather than queued for seconds. A
+ * burst of sign-ins then slows sign-ins, not the rest of the app.
+ */
+const HASHES_AT_ONCE = Math.max(1, Math.floor(availableParallelism() / 2));
+export const passwordHashGate = createConcurrencyGate({ maxRunning: HASHES_AT_ONCE, maxWaiting: 8 * HASHES_AT_ONCE });
+
 function deriveKey(password: string, salt: Buffer, cost: PasswordCost): Promise<Buffer> {
+  return passwordHashGate.run(() => scryptKey(password, salt, cost));
+}
+
+function scryptKey(password: string, salt: Buffer, cost: PasswordCost): Promise<Buffer> {
   const N = 2 ** cost.log2N;
   // Node refuses to use more than `maxmem`; allow the 128·N·r the setting needs plus headroom.
   const options: ScryptOptions = { N, r: cost.r, p: cost.p, maxmem: 128 * N * cost.r * 2 };

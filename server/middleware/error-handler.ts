@@ -1,5 +1,6 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
+import { GateFullError } from '@server/lib/concurrency-gate';
 import { HttpError } from '@server/lib/http-error';
 
 /** Field path → first message, with paths dotted (`config.chassis.wheels.0.radiusMm`). */
@@ -30,6 +31,9 @@ function translate(error: unknown): HttpError {
     const fields = zodFields(error);
     return new HttpError(400, zodMessage(fields), { fields });
   }
+  if (error instanceof GateFullError) {
+    return new HttpError(503, 'The server is busy with other sign-ins; try again in a few seconds', { code: 'busy' });
+  }
   const parserError = error as BodyParserError;
   if (parserError?.type === 'entity.too.large') {
     return new HttpError(413, 'The request body is too large');
@@ -47,7 +51,9 @@ function translate(error: unknown): HttpError {
 export const errorHandler: ErrorRequestHandler = (error, _req, res, next) => {
   if (res.headersSent) return next(error);
   const httpError = translate(error);
-  if (httpError.status >= 500) console.error(error);
+  if (httpError.status >= 500 && httpError.status !== 503) console.error(error);
+  // Busy answers say when to come back, so well-behaved clients do not hammer the server.
+  if (httpError.status === 503) res.set('Retry-After', '5');
   res.status(httpError.status).json({
     error: {
       ...httpError.details,

@@ -10,14 +10,19 @@ function minutes(ms: number): string {
 /**
  * Limits attempts per client address, optionally per address and e-mail, so one account can
  * not be guessed at quickly and a whole classroom behind one address is not locked out by one
- * person's typos.
+ * person's typos. A per-e-mail limit goes after `validateBody`, which reads the e-mail; with
+ * `failuresOnly` only answers of 400 and above count.
  */
-export function attemptLimit(setting: RateLimitSetting, options: { perEmail: boolean; what: string }) {
+export function attemptLimit(
+  setting: RateLimitSetting,
+  options: { perEmail: boolean; what: string; failuresOnly?: boolean },
+) {
   return rateLimit({
     windowMs: setting.windowMs,
     limit: setting.limit,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
+    skipSuccessfulRequests: options.failuresOnly ?? false,
     keyGenerator: (req) => {
       const ip = ipKeyGenerator(req.ip ?? 'unknown');
       const email = typeof req.body?.email === 'string' ? req.body.email.trim().toLowerCase() : '';

@@ -4,7 +4,7 @@ import { client, createTestContext, TEST_APP_URL, type TestContext } from './sup
 
 let ctx: TestContext;
 beforeAll(async () => {
-  ctx = await createTestContext({ jsonLimitBytes: 2048 });
+  ctx = await createTestContext();
 });
 afterAll(() => ctx.close());
 

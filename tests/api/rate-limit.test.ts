@@ -7,6 +7,7 @@ beforeAll(async () => {
   ctx = await createTestContext({
     rateLimits: {
       signIn: { windowMs: 60_000, limit: 3 },
+      signInPerAddress: { windowMs: 60_000, limit: 1000 },
       passwordReset: { windowMs: 60_000, limit: 2 },
       signUp: { windowMs: 60_000, limit: 2 },
     },
@@ -64,6 +65,7 @@ describe('rate limits behind a reverse proxy', () => {
   const tightLimits = {
     rateLimits: {
       signIn: { windowMs: 60_000, limit: 3 },
+      signInPerAddress: { windowMs: 60_000, limit: 1000 },
       passwordReset: { windowMs: 60_000, limit: 1 },
       signUp: { windowMs: 60_000, limit: 1 },
     },

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import type { AppContext } from '@server/config';
 import { requireUser } from '@server/middleware/session';
 import { requireRobotRole } from '@server/middleware/team-access';
-import { validateBody } from '@server/middleware/validate';
+import { BODY_LIMITS, validateBody } from '@server/middleware/validate';
 import { PreviewFilesInputSchema } from '@shared/schemas/firmware';
 import {
   defaultVerifySettings,
@@ -47,9 +47,14 @@ export function firmwareRoutes(ctx: AppContext, verify: VerifySettings = default
     res.json(await verifyRevision(ctx, robotOf(req), revisionOf(req), verify));
   });
 
-  router.post('/robots/:robotId/preview-files', ...viewer, validateBody(PreviewFilesInputSchema), (req, res) => {
-    res.json(draftFiles(ctx, robotOf(req), req.body.config));
-  });
+  router.post(
+    '/robots/:robotId/preview-files',
+    ...viewer,
+    validateBody(PreviewFilesInputSchema, BODY_LIMITS.configuration),
+    (req, res) => {
+      res.json(draftFiles(ctx, robotOf(req), req.body.config));
+    },
+  );
 
   return router;
 }

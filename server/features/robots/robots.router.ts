@@ -3,7 +3,7 @@ import { z } from 'zod';
 import type { AppContext } from '@server/config';
 import { currentUser, requireUser } from '@server/middleware/session';
 import { grantedAccess, requireRobotRole, requireTeamRole } from '@server/middleware/team-access';
-import { validateBody } from '@server/middleware/validate';
+import { BODY_LIMITS, validateBody } from '@server/middleware/validate';
 import { CreateRobotInputSchema, RenameRobotInputSchema, SaveRevisionInputSchema } from '@shared/schemas/robots';
 import { listRobotsForTeam } from './robot-list.service';
 import { listRevisions, robotSummary } from './robots.repository';
@@ -27,7 +27,7 @@ export function robotsRoutes(ctx: AppContext): Router {
     '/teams/:teamId/robots',
     requireUser,
     requireTeamRole(ctx, 'editor'),
-    validateBody(CreateRobotInputSchema),
+    validateBody(CreateRobotInputSchema, BODY_LIMITS.configuration),
     (req, res) => {
       res.status(201).json({ robot: createRobot(ctx, currentUser(req), grantedAccess(req).teamId, req.body) });
     },
@@ -62,7 +62,7 @@ export function robotsRoutes(ctx: AppContext): Router {
     '/robots/:robotId/revisions',
     requireUser,
     requireRobotRole(ctx, 'editor'),
-    validateBody(SaveRevisionInputSchema),
+    validateBody(SaveRevisionInputSchema, BODY_LIMITS.configuration),
     (req, res) => {
       res.status(201).json({ revision: saveRevision(ctx, currentUser(req), String(req.params.robotId), req.body) });
     },

@@ -26,10 +26,10 @@ export function testConfig(overrides: Partial<AppConfig> = {}): AppConfig {
     passwordResetMinutes: 60,
     rateLimits: {
       signIn: { windowMs: 60_000, limit: 1000 },
+      signInPerAddress: { windowMs: 60_000, limit: 1000 },
       passwordReset: { windowMs: 60_000, limit: 1000 },
       signUp: { windowMs: 60_000, limit: 1000 },
     },
-    jsonLimitBytes: 1024 * 1024,
     trustProxyHops: 0,
     ...overrides,
   };
