@@ -15,6 +15,7 @@ import { robotsRoutes } from './features/robots/robots.router';
 import { invitationsRoutes } from './features/teams/invitations.router';
 import { teamsRoutes } from './features/teams/teams.router';
 import { createAuth } from './lib/auth';
+import { createBackgroundTasks, type BackgroundTasks } from './lib/background-tasks';
 import type { Mailbox } from './lib/mail/fake-smtp';
 import type { Mailer } from './lib/mail/mailer';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
@@ -31,6 +32,8 @@ export interface AppDeps {
   client?: RequestHandler[];
   /** Vite's development client injects inline scripts, which a content security policy forbids. */
   clientHasInlineScripts?: boolean;
+  /** Where after-the-answer work runs; tests hand in their own to wait for it. */
+  background?: BackgroundTasks;
 }
 
 function securityHeaders(config: AppConfig, inlineScripts: boolean): RequestHandler {
@@ -49,7 +52,7 @@ function securityHeaders(config: AppConfig, inlineScripts: boolean): RequestHand
 export function createApp(deps: AppDeps): Express {
   const { db, mailer, config } = deps;
   const auth = createAuth(db, { secure: config.nodeEnv === 'production', sessionDays: config.sessionDays });
-  const ctx: AppContext = { db, mailer, config, auth };
+  const ctx: AppContext = { db, mailer, config, auth, background: deps.background ?? createBackgroundTasks() };
   const showMailbox = deps.mailbox && config.nodeEnv !== 'production';
 
   const api = Router();

@@ -1,6 +1,7 @@
 import type { Db } from './db/client';
 import type { Env } from './env';
 import type { Auth } from './lib/auth';
+import type { BackgroundTasks } from './lib/background-tasks';
 import type { Mailer } from './lib/mail/mailer';
 import { DEFAULT_PASSWORD_COST, type PasswordCost } from './lib/password';
 
@@ -71,4 +72,6 @@ export interface AppContext {
   mailer: Mailer;
   config: AppConfig;
   auth: Auth;
+  /** Work that runs after the answer has been sent. */
+  background: BackgroundTasks;
 }

@@ -14,6 +14,7 @@ describe('the development mailbox', () => {
     ctx = await createTestContext();
     const user = await makeUser(ctx, { name: 'Mail <Reader>' });
     await client(ctx).post('/api/auth/password-reset').send({ email: user.email });
+    await ctx.background.settled();
     const json = await request(ctx.app).get('/api/dev/mailbox');
     expect(json.body.messages[0]).toMatchObject({ subject: 'Reset your Mixwright password', to: user.email });
     expect(json.body.messages[0].links[0]).toMatch(/\/reset-password\?token=/);

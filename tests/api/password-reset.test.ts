@@ -11,6 +11,7 @@ afterAll(() => ctx.close());
 async function requestLink(email: string): Promise<string> {
   const response = await client(ctx).post('/api/auth/password-reset').send({ email });
   expect(response.status).toBe(202);
+  await ctx.background.settled();
   const mail = ctx.smtp.mailbox.latestTo(email);
   const link = mail?.links.find((l) => l.startsWith(`${TEST_APP_URL}/reset-password?token=`));
   if (!link) throw new Error(`No reset link was mailed to ${email}`);
@@ -32,6 +33,7 @@ describe('password reset', () => {
     const email = uniqueEmail('ghost');
     const response = await client(ctx).post('/api/auth/password-reset').send({ email });
     expect(response.status).toBe(202);
+    await ctx.background.settled();
     expect(ctx.smtp.mailbox.latestTo(email)).toBeUndefined();
   });
 

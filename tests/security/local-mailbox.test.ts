@@ -17,6 +17,7 @@ afterAll(() => ctx.close());
 async function requestReset(): Promise<void> {
   const user = await makeUser(ctx);
   await client(ctx).post('/api/auth/password-reset').send({ email: user.email });
+  await ctx.background.settled();
 }
 
 describe('the local mailbox', () => {

@@ -23,8 +23,19 @@ export function updatePasswordHash(db: Db, userId: string, passwordHash: string)
   db.update(users).set({ passwordHash }).where(eq(users.id, userId)).run();
 }
 
-export function insertResetToken(db: Db, input: { tokenHash: string; userId: string; expiresAt: Date }): void {
-  db.insert(passwordResetTokens).values(input).run();
+/** Removes the person's unused reset links (after a reset, none of them should work any more). */
+export function deleteUnusedResetTokens(db: Db, userId: string): void {
+  db.delete(passwordResetTokens)
+    .where(and(eq(passwordResetTokens.userId, userId), isNull(passwordResetTokens.usedAt)))
+    .run();
+}
+
+/** Stores a new reset link's hash and removes the person's older unused links: only the newest works. */
+export function replaceResetToken(db: Db, input: { tokenHash: string; userId: string; expiresAt: Date }): void {
+  db.transaction((tx) => {
+    deleteUnusedResetTokens(tx, input.userId);
+    tx.insert(passwordResetTokens).values(input).run();
+  });
 }
 
 /** Marks an unused token used and returns it; undefined when unknown or already used. */

@@ -9,7 +9,7 @@ import {
   SignInInputSchema,
   SignUpInputSchema,
 } from '@shared/schemas/auth';
-import { requestPasswordReset, resetPassword, signIn, signUp } from './auth.service';
+import { resetPassword, sendPasswordResetLink, signIn, signUp } from './auth.service';
 
 export function authRoutes(ctx: AppContext): Router {
   const router = Router();
@@ -58,9 +58,10 @@ export function authRoutes(ctx: AppContext): Router {
     '/auth/password-reset',
     resetLimit,
     validateBody(PasswordResetRequestSchema, BODY_LIMITS.account),
-    async (req, res) => {
-      await requestPasswordReset(ctx, req.body.email);
+    (req, res) => {
       res.status(202).json({ message: 'If that e-mail has an account, a reset link is on its way' });
+      const email: string = req.body.email;
+      ctx.background.run('Password reset e-mail', () => sendPasswordResetLink(ctx, email));
     },
   );
 

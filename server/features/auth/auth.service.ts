@@ -6,10 +6,11 @@ import { hashPassword, verifyPassword } from '@server/lib/password';
 import type { CurrentUser, PasswordResetInput, SignInInput, SignUpInput } from '@shared/schemas/auth';
 import {
   consumeResetToken,
+  deleteUnusedResetTokens,
   findUserByEmail,
   findUserById,
-  insertResetToken,
   insertUser,
+  replaceResetToken,
   updatePasswordHash,
 } from './auth.repository';
 
@@ -52,33 +53,32 @@ export async function signIn(ctx: AppContext, input: SignInInput): Promise<Curre
   return toCurrentUser(user);
 }
 
-/** Sends a one-time link when the e-mail has an account; says nothing either way. */
-export async function requestPasswordReset(ctx: AppContext, email: string): Promise<void> {
+/**
+ * Sends a one-time link when the e-mail has an account, replacing any older link. The route
+ * answers first and runs this afterwards, so the answer takes as long for an unknown e-mail as
+ * for a known one and says nothing either way.
+ */
+export async function sendPasswordResetLink(ctx: AppContext, email: string): Promise<void> {
   const user = findUserByEmail(ctx.db, email);
   if (!user) return;
   const token = newToken();
   const expiresAt = new Date(Date.now() + ctx.config.passwordResetMinutes * 60_000);
-  insertResetToken(ctx.db, { tokenHash: hashToken(token), userId: user.id, expiresAt });
+  replaceResetToken(ctx.db, { tokenHash: hashToken(token), userId: user.id, expiresAt });
   const link = `${ctx.config.appUrl}/reset-password?token=${token}`;
-  try {
-    await ctx.mailer.send({
-      to: user.email,
-      subject: 'Reset your Mixwright password',
-      text: [
-        `Hello ${user.name},`,
-        '',
-        'Someone (hopefully you) asked to reset the password of your Mixwright account.',
-        `Open this link within ${ctx.config.passwordResetMinutes} minutes to choose a new one:`,
-        '',
-        link,
-        '',
-        'The link works once. If you did not ask for it, ignore this e-mail; your password stays as it is.',
-      ].join('\n'),
-    });
-  } catch (error) {
-    // Do not tell the requester whether mail went out: that would reveal the account.
-    console.error('Password reset e-mail could not be sent:', error);
-  }
+  await ctx.mailer.send({
+    to: user.email,
+    subject: 'Reset your Mixwright password',
+    text: [
+      `Hello ${user.name},`,
+      '',
+      'Someone (hopefully you) asked to reset the password of your Mixwright account.',
+      `Open this link within ${ctx.config.passwordResetMinutes} minutes to choose a new one:`,
+      '',
+      link,
+      '',
+      'The link works once, and only until you ask for another. If you did not ask for it, ignore this e-mail; your password stays as it is.',
+    ].join('\n'),
+  });
 }
 
 export async function resetPassword(ctx: AppContext, input: PasswordResetInput): Promise<CurrentUser> {
@@ -92,6 +92,7 @@ export async function resetPassword(ctx: AppContext, input: PasswordResetInput):
   const user = findUserById(ctx.db, token.userId);
   if (!user) throw new HttpError(400, 'This reset link has expired or was already used; ask for a new one');
   updatePasswordHash(ctx.db, user.id, await hashPassword(input.password, ctx.config.passwordCost));
+  deleteUnusedResetTokens(ctx.db, user.id);
   // Anyone signed in with the old password is signed out.
   await ctx.auth.endAllSessions(user.id);
   recordEvent(ctx.db, { teamId: null, actorId: user.id, action: 'user.password_reset', target: `user:${user.id}` });

@@ -8,6 +8,7 @@ import type { AppConfig, AppContext } from '@server/config';
 import { openDatabase, type DatabaseHandle } from '@server/db/client';
 import { runMigrations } from '@server/db/migrate';
 import { createAuth } from '@server/lib/auth';
+import { createBackgroundTasks, type BackgroundTasks } from '@server/lib/background-tasks';
 import { startFakeSmtp, type FakeSmtp } from '@server/lib/mail/fake-smtp';
 import { createSmtpMailer, type Mailer } from '@server/lib/mail/mailer';
 
@@ -44,6 +45,8 @@ export interface TestContext {
   mailer: Mailer;
   /** What services are handed, for factories that go through a service. */
   appContext: AppContext;
+  /** Work the app does after answering (e-mails); `await ctx.background.settled()` waits for it. */
+  background: BackgroundTasks;
   /** A session for a user without going through the sign-in form; returns the Cookie header value. */
   sessionCookie: (userId: string) => Promise<string>;
   close: () => Promise<void>;
@@ -58,7 +61,8 @@ export async function createTestContext(overrides: Partial<AppConfig> = {}): Pro
   const mailer = createSmtpMailer({ port: smtp.port, from: 'Mixwright <no-reply@mixwright.invalid>' });
   // Files the app writes (photos) go in this context's own folder, removed on close.
   const config = testConfig({ dataDir: dir, ...overrides });
-  const app = createApp({ db: database.db, mailer, config, mailbox: smtp.mailbox });
+  const background = createBackgroundTasks();
+  const app = createApp({ db: database.db, mailer, config, mailbox: smtp.mailbox, background });
   const auth = createAuth(database.db, { secure: false, sessionDays: config.sessionDays });
   return {
     app,
@@ -67,9 +71,11 @@ export async function createTestContext(overrides: Partial<AppConfig> = {}): Pro
     config,
     smtp,
     mailer,
-    appContext: { db: database.db, mailer, config, auth },
+    appContext: { db: database.db, mailer, config, auth, background },
+    background,
     sessionCookie: async (userId) => (await auth.startSession(userId)).split(';')[0],
     close: async () => {
+      await background.settled();
       await smtp.close();
       database.close();
       rmSync(dir, { recursive: true, force: true });
