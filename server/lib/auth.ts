@@ -2,16 +2,19 @@ import { DrizzleSQLiteAdapter } from '@lucia-auth/adapter-drizzle';
 import { Lucia, TimeSpan } from 'lucia';
 import type { Db } from '@server/db/client';
 import { sessions, users } from '@server/db/schema';
+import { hashToken, newToken } from '@server/lib/ids';
 import type { CurrentUser } from '@shared/schemas/auth';
 
 /**
  * Sessions, kept behind this one module so the session library could be swapped without
- * touching routes: an opaque random id in an httpOnly, SameSite=Lax cookie (Secure in
- * production) and a row in `sessions` with an expiry. A session used in the second half of
- * its life is extended, and the cookie renewed.
+ * touching routes: an opaque random token (256 bits) in an httpOnly, SameSite=Lax cookie
+ * (Secure in production) and a row in `sessions` with an expiry. The row's id is the token's
+ * SHA-256, never the token: a copied database holds no working session. A session used in the
+ * second half of its life is extended, and the cookie renewed.
  */
 export interface SessionCheck {
   user: CurrentUser | null;
+  /** The session's stored id (the token's hash), for ending it. */
   sessionId: string | null;
   /** A Set-Cookie value to send back when the session was extended or is no longer valid. */
   setCookie: string | null;
@@ -48,18 +51,19 @@ export function createAuth(db: Db, options: { secure: boolean; sessionDays: numb
   return {
     cookieName: lucia.sessionCookieName,
     async startSession(userId) {
-      const session = await lucia.createSession(userId, {});
-      return lucia.createSessionCookie(session.id).serialize();
+      const token = newToken();
+      await lucia.createSession(userId, {}, { sessionId: hashToken(token) });
+      return lucia.createSessionCookie(token).serialize();
     },
     async check(cookieHeader) {
-      const sessionId = lucia.readSessionCookie(cookieHeader ?? '');
-      if (!sessionId) return { user: null, sessionId: null, setCookie: null };
-      const { session, user } = await lucia.validateSession(sessionId);
+      const token = lucia.readSessionCookie(cookieHeader ?? '');
+      if (!token) return { user: null, sessionId: null, setCookie: null };
+      const { session, user } = await lucia.validateSession(hashToken(token));
       if (!session) return { user: null, sessionId: null, setCookie: lucia.createBlankSessionCookie().serialize() };
       return {
         user: { id: user.id, email: user.email, name: user.name },
         sessionId: session.id,
-        setCookie: session.fresh ? lucia.createSessionCookie(session.id).serialize() : null,
+        setCookie: session.fresh ? lucia.createSessionCookie(token).serialize() : null,
       };
     },
     async endSession(sessionId) {
