@@ -4,7 +4,7 @@ import request, { type Response } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { verifyRevision } from '@server/features/firmware/firmware.service';
 import { configHash } from '@server/features/firmware/model/config-hash';
-import { createSerialQueue } from '@server/features/firmware/verify-queue';
+import { createCompileQueue } from '@server/features/firmware/verify-queue';
 import type { FirmwareFiles, VerifyResult } from '@shared/schemas/firmware';
 import { wiredConfig } from '../factories/wired-config';
 import { makeTeamScenario } from './support/factories';
@@ -138,6 +138,11 @@ describe('the bundle download', () => {
   });
 });
 
+const requesterOf = (s: { viewer: { id: string }; team: { id: string } }) => ({
+  userId: s.viewer.id,
+  teamId: s.team.id,
+});
+
 describe('the compile check', { timeout: 180_000 }, () => {
   it('reports flash and RAM use of an Uno build against the board limits', async () => {
     const { s, viewer } = await viewerOf();
@@ -155,9 +160,9 @@ describe('the compile check', { timeout: 180_000 }, () => {
     const second = await viewerOf();
     const a = await first.viewer.post(`/api/robots/${first.s.robot.id}/revisions/2/verify`);
     // A full queue would refuse a new compile, so this answer can only come from the cache.
-    const cached = await verifyRevision(ctx.appContext, second.s.robot.id, 2, {
+    const cached = await verifyRevision(ctx.appContext, requesterOf(second.s), second.s.robot.id, 2, {
       stepTimeoutMs: 60_000,
-      queue: createSerialQueue(0),
+      queue: createCompileQueue({ maxPending: 0, perPerson: 0, perTeam: 0 }),
     });
     expect(cached).toEqual(a.body);
   });
@@ -181,9 +186,9 @@ describe('the compile check', { timeout: 180_000 }, () => {
   it('stops a compile at its time limit, says so, and does not keep that answer', async () => {
     const s = await makeTeamScenario(ctx);
     saveWiredRevision(ctx, s, { name: 'Slow Compile Cart' });
-    const limited = await verifyRevision(ctx.appContext, s.robot.id, 2, {
+    const limited = await verifyRevision(ctx.appContext, requesterOf(s), s.robot.id, 2, {
       stepTimeoutMs: 1,
-      queue: createSerialQueue(1),
+      queue: createCompileQueue({ maxPending: 1, perPerson: 1, perTeam: 1 }),
     });
     expect(limited.sketches[0]).toMatchObject({
       ok: false,
@@ -197,7 +202,10 @@ describe('the compile check', { timeout: 180_000 }, () => {
   it('answers 503 when the queue of compiles is full', async () => {
     const s = await makeTeamScenario(ctx);
     saveWiredRevision(ctx, s, { name: 'Queued Cart' });
-    const full = verifyRevision(ctx.appContext, s.robot.id, 2, { stepTimeoutMs: 60_000, queue: createSerialQueue(0) });
+    const full = verifyRevision(ctx.appContext, requesterOf(s), s.robot.id, 2, {
+      stepTimeoutMs: 60_000,
+      queue: createCompileQueue({ maxPending: 0, perPerson: 1, perTeam: 1 }),
+    });
     await expect(full).rejects.toMatchObject({ status: 503, code: 'verify_busy' });
   });
 

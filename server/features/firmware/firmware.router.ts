@@ -1,8 +1,8 @@
 import { Router, type Request } from 'express';
 import { z } from 'zod';
 import type { AppContext } from '@server/config';
-import { requireUser } from '@server/middleware/session';
-import { requireRobotRole } from '@server/middleware/team-access';
+import { currentUser, requireUser } from '@server/middleware/session';
+import { grantedAccess, requireRobotRole } from '@server/middleware/team-access';
 import { BODY_LIMITS, validateBody } from '@server/middleware/validate';
 import { PreviewFilesInputSchema } from '@shared/schemas/firmware';
 import {
@@ -44,7 +44,8 @@ export function firmwareRoutes(ctx: AppContext, verify: VerifySettings = default
   });
 
   router.post('/robots/:robotId/revisions/:revision/verify', ...viewer, async (req, res) => {
-    res.json(await verifyRevision(ctx, robotOf(req), revisionOf(req), verify));
+    const requester = { userId: currentUser(req).id, teamId: grantedAccess(req).teamId };
+    res.json(await verifyRevision(ctx, requester, robotOf(req), revisionOf(req), verify));
   });
 
   router.post(

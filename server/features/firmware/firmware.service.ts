@@ -9,18 +9,27 @@ import { FirmwareConfigError } from './model/firmware-config-error';
 import { configHash } from './model/config-hash';
 import { renderBundle, type BundleFile } from './render-bundle';
 import { remoteFolderName, sketchFolderName } from './sketch-name';
-import { cachedVerifyResult, verifyBundle } from './verify-bundle';
-import { createSerialQueue, QueueFullError, type SerialQueue } from './verify-queue';
+import { bundleHash, cachedVerifyResult, verifyBundle } from './verify-bundle';
+import { createCompileQueue, QueueFullError, QueueShareError, type CompileQueue } from './verify-queue';
 import { bundleFileName, zipBundle } from './zip-bundle';
 
 export interface VerifySettings {
   /** Time limit for each compiler, linker or size step. */
   stepTimeoutMs: number;
-  queue: SerialQueue;
+  queue: CompileQueue;
 }
 
-/** One compile at a time in this process; a few more may wait. */
-export const defaultVerifySettings: VerifySettings = { stepTimeoutMs: 60_000, queue: createSerialQueue(6) };
+/** One compile at a time in this process; six may wait, two per person and four per team. */
+export const defaultVerifySettings: VerifySettings = {
+  stepTimeoutMs: 60_000,
+  queue: createCompileQueue({ maxPending: 6, perPerson: 2, perTeam: 4 }),
+};
+
+/** Who asks for a compile check: places in the queue are shared out per person and per team. */
+export interface VerifyRequester {
+  userId: string;
+  teamId: string;
+}
 
 function languageOf(path: string): FirmwareFileLanguage {
   if (/\.(ino|h|c|cpp)$/.test(path)) return 'cpp';
@@ -95,10 +104,12 @@ export async function revisionZip(
 
 /**
  * Compiles the saved revision's generated sketches where this server has a compiler. A bundle
- * checked before answers at once from the cache; a new one waits its turn in the queue.
+ * checked before (or being checked) answers from the cache; a new one waits its turn in the
+ * queue, where an equal bundle already waiting is joined rather than queued twice.
  */
 export async function verifyRevision(
   ctx: AppContext,
+  requester: VerifyRequester,
   robotId: string,
   number: number,
   settings: VerifySettings = defaultVerifySettings,
@@ -107,11 +118,22 @@ export async function verifyRevision(
   const cached = cachedVerifyResult(files);
   if (cached) return cached;
   try {
-    return await settings.queue.run(() => verifyBundle(files, { timeoutMs: settings.stepTimeoutMs }));
+    return await settings.queue.run({
+      key: bundleHash(files),
+      person: requester.userId,
+      team: requester.teamId,
+      job: () => verifyBundle(files, { timeoutMs: settings.stepTimeoutMs }),
+    });
   } catch (error) {
     if (error instanceof QueueFullError) {
       throw new HttpError(503, 'The compile check is busy with other bundles; try again in a minute', {
         code: 'verify_busy',
+      });
+    }
+    if (error instanceof QueueShareError) {
+      const whose = error.who === 'person' ? 'You already have' : 'Your team already has';
+      throw new HttpError(429, `${whose} ${error.limit} compile checks waiting; try again when one has finished`, {
+        code: 'verify_share_used',
       });
     }
     throw error;
