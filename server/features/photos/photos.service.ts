@@ -5,7 +5,7 @@ import { findLiveRobot, robotSummary } from '@server/features/robots/robots.repo
 import { HttpError } from '@server/lib/http-error';
 import type { CurrentUser } from '@shared/schemas/auth';
 import type { RobotSummary } from '@shared/schemas/robots';
-import { photosFolder, photoType, removePhotoFile, storePhoto } from './photo-store';
+import { photosFolder, preparePhoto, removePhotoFile, storePhoto } from './photo-store';
 import { deletePhoto, findPhoto, upsertPhoto } from './photos.repository';
 
 function liveRobot(ctx: AppContext, robotId: string) {
@@ -14,7 +14,7 @@ function liveRobot(ctx: AppContext, robotId: string) {
   return robot;
 }
 
-/** Stores a new photo for the robot, replacing the old one; the type is checked by content first. */
+/** Stores a new photo for the robot, replacing the old one: only the re-encoded picture is kept. */
 export async function uploadPhoto(
   ctx: AppContext,
   user: CurrentUser,
@@ -22,12 +22,12 @@ export async function uploadPhoto(
   data: Buffer,
 ): Promise<RobotSummary> {
   const robot = liveRobot(ctx, robotId);
-  const type = await photoType(data);
+  const photo = await preparePhoto(data);
   const previous = findPhoto(ctx.db, robotId);
-  const fileName = await storePhoto(ctx.config.dataDir, data, type);
+  const fileName = await storePhoto(ctx.config.dataDir, photo.data, photo.type);
   try {
     ctx.db.transaction((tx) => {
-      upsertPhoto(tx, { robotId, fileName, mimeType: type, bytes: data.length, uploadedBy: user.id });
+      upsertPhoto(tx, { robotId, fileName, mimeType: photo.type, bytes: photo.data.length, uploadedBy: user.id });
       recordEvent(tx, {
         teamId: robot.teamId,
         actorId: user.id,
