@@ -31,6 +31,10 @@ function translate(error: unknown): HttpError {
     const fields = zodFields(error);
     return new HttpError(400, zodMessage(fields), { fields });
   }
+  // Express cannot decode a parameter such as `%ZZ` in `/api/robots/%ZZ`.
+  if (error instanceof URIError) {
+    return new HttpError(400, 'The address has a malformed percent-encoding', { code: 'bad_address' });
+  }
   if (error instanceof GateFullError) {
     return new HttpError(503, 'The server is busy with other sign-ins; try again in a few seconds', { code: 'busy' });
   }

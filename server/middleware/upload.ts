@@ -28,7 +28,10 @@ export function singleUpload(field: string, options: { maxBytes: number; what: s
         }
         return next(new HttpError(400, `The upload could not be read: ${error.message}`));
       }
-      next(error);
+      // Anything else from the multipart reader is a body it could not parse (a missing
+      // boundary, a cut-off part): the sender's mistake, not the server's.
+      const reason = error instanceof Error ? error.message : 'malformed multipart body';
+      next(new HttpError(400, `The upload could not be read: ${reason}`, { code: 'bad_upload' }));
     });
   };
 }

@@ -1,12 +1,11 @@
 import { Router } from 'express';
 import type { AppContext } from '@server/config';
-import { listTeamEvents } from '@server/features/audit/audit.repository';
 import { currentUser, requireUser } from '@server/middleware/session';
 import { grantedAccess, requireTeamRole } from '@server/middleware/team-access';
 import { validateBody } from '@server/middleware/validate';
 import { ChangeRoleInputSchema, CreateTeamInputSchema } from '@shared/schemas/teams';
 import { listMembers, listTeamsOf } from './teams.repository';
-import { changeRole, createTeam, removeMember, teamDetail } from './teams.service';
+import { changeRole, createTeam, removeMember, teamActivity, teamDetail } from './teams.service';
 
 export function teamsRoutes(ctx: AppContext): Router {
   const router = Router();
@@ -49,7 +48,8 @@ export function teamsRoutes(ctx: AppContext): Router {
   });
 
   router.get('/teams/:teamId/activity', requireUser, viewer, (req, res) => {
-    res.json({ events: listTeamEvents(ctx.db, grantedAccess(req).teamId, 50) });
+    const { teamId, role } = grantedAccess(req);
+    res.json({ events: teamActivity(ctx, teamId, role) });
   });
 
   return router;

@@ -12,11 +12,12 @@ export function describeActivity(event: TeamActivity): string {
     case 'team.created':
       return `created the team`;
     case 'invitation.sent':
-      return `invited ${text(d.email)} as ${text(d.role)}`;
+      // Only owners are shown whom an invitation went to.
+      return `invited ${text(d.email) || 'someone'} as ${text(d.role)}`;
     case 'invitation.accepted':
       return `joined as ${text(d.role)}`;
     case 'invitation.revoked':
-      return `withdrew the invitation to ${text(d.email)}`;
+      return d.email ? `withdrew the invitation to ${text(d.email)}` : 'withdrew an invitation';
     case 'member.role_changed':
       return `changed ${text(d.name) || 'a member'} from ${text(d.from)} to ${text(d.to)}`;
     case 'member.removed':
