@@ -43,6 +43,7 @@ export type PasswordResetRequest = z.input<typeof PasswordResetRequestSchema>;
 
 export const LinkTokenSchema = z
   .string({ error: 'The link is incomplete' })
+  .max(100, 'The link is incomplete or damaged; open it again from the e-mail')
   .regex(/^[A-Za-z0-9_-]{20,100}$/, 'The link is incomplete or damaged; open it again from the e-mail');
 
 export const PasswordResetInputSchema = z.object({

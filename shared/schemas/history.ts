@@ -26,6 +26,7 @@ export const RecordFlashInputSchema = z.object({
   /** When it was flashed (ISO date-time); now when left out. */
   flashedAt: z.iso
     .datetime({ offset: true, error: 'flashedAt must be a date and time, e.g. 2026-03-14T16:05:00Z' })
+    .max(40, 'flashedAt must be a date and time, e.g. 2026-03-14T16:05:00Z')
     .optional(),
   note: NoteSchema.default(''),
 });

@@ -53,8 +53,20 @@ export const MotorSchema = z.object({
 });
 export type Motor = z.infer<typeof MotorSchema>;
 
+/**
+ * A map from short keys (pin roles, parameter names) to values, with at most `maxEntries`
+ * entries: every text in a configuration has a limit, keys included.
+ */
+function boundedRecord<Value extends z.ZodType>(value: Value, maxEntries = 32) {
+  return z
+    .record(z.string().max(40, 'Keys are at most 40 characters'), value)
+    .refine((record) => Object.keys(record).length <= maxEntries, `At most ${maxEntries} entries`);
+}
+
 /** The preset parameters a starter layout was built from; the wheel table is what counts. */
-export const LayoutParamsSchema = z.record(z.string(), z.union([z.number(), z.string(), z.boolean()]));
+export const LayoutParamsSchema = boundedRecord(
+  z.union([z.number(), z.string().max(100, 'At most 100 characters'), z.boolean()]),
+);
 
 export const ChassisSchema = z.object({
   layout: ChassisLayoutSchema,
@@ -125,11 +137,12 @@ export const LinkSchema = z.object({
   /** Five-byte pipe address, hex; unique per robot. */
   address: z
     .string()
+    .max(10, 'Address must be 10 hexadecimal digits (5 bytes)')
     .regex(/^[0-9A-Fa-f]{10}$/, 'Address must be 10 hexadecimal digits (5 bytes)')
     .default('4D57520001'),
   sendRateHz: z.number().int().min(10).max(200).default(50),
   remoteBoard: BoardIdSchema.default('nano'),
-  remotePins: z.record(z.string(), PinAssignmentSchema).default({}),
+  remotePins: boundedRecord(PinAssignmentSchema).default({}),
 });
 
 export const ControlsSchema = z.object({
@@ -154,7 +167,7 @@ export const DriverSchema = z.object({
   /** Motors on this driver's channels, in channel order (A, then B). */
   motors: z.array(PartNameSchema).min(1).max(2),
   /** Pin role id (from the driver kind) → pin. */
-  pins: z.record(z.string(), PinAssignmentSchema).default({}),
+  pins: boundedRecord(PinAssignmentSchema).default({}),
   /** null = the board's default PWM frequency. */
   pwmFrequencyHz: z.number().int().min(50).max(100000).nullable().default(null),
   stopMode: z.enum(['brake', 'coast']).default('brake'),
@@ -168,7 +181,7 @@ export const WiringSchema = z.object({
   board: BoardIdSchema,
   drivers: z.array(DriverSchema).max(8),
   /** Pin role id (from the input source) → pin. */
-  inputPins: z.record(z.string(), PinAssignmentSchema).default({}),
+  inputPins: boundedRecord(PinAssignmentSchema).default({}),
   statusLed: PinAssignmentSchema.prefault({}),
   /** Optional: a pin held low at boot starts the bench test. */
   benchTestPin: PinAssignmentSchema.prefault({}),
@@ -203,6 +216,7 @@ export const FirmwareSchema = z.object({
   /** Arduino sketch folder name; null = derived from the robot name. */
   sketchName: z
     .string()
+    .max(63, 'Letters, digits, _ . - only, starting with a letter or digit, up to 63')
     .regex(
       /^[A-Za-z0-9][A-Za-z0-9_.-]{0,62}$/,
       'Letters, digits, _ . - only, starting with a letter or digit, up to 63',

@@ -70,10 +70,22 @@ export function cString(text: string): string {
   return `"${cStringBody(text)}"`;
 }
 
-/** Text for Markdown table cells and prose: no line breaks, no table bars, no HTML or code spans. */
+/**
+ * Control characters (C0, DEL, C1) and the bidirectional formatting characters of Unicode
+ * Standard Annex #9 ("Unicode Bidirectional Algorithm", §2: LRE, RLE, PDF, LRO, RLO, LRI, RLI,
+ * FSI, PDI, and the marks LRM, RLM, ALM), which can make a README show text in an order other
+ * than the bytes say.
+ */
+const INVISIBLE_CONTROLS = /[\u0000-\u001f\u007f-\u009f\u061c\u200e\u200f\u202a-\u202e\u2066-\u2069]/g;
+
+/**
+ * Text for Markdown table cells and prose: no line breaks, no control or direction-changing
+ * characters, no table bars, no HTML or code spans.
+ */
 export function markdownText(text: string): string {
   return text
     .replace(/[\r\n\t\u2028\u2029]+/g, ' ')
+    .replace(INVISIBLE_CONTROLS, '')
     .replace(/[\\`*_[\]<>|#]/g, (c) => `\\${c}`)
     .trim();
 }
