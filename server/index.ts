@@ -3,11 +3,13 @@
 // on one port. `--dev` serves the client through Vite with hot reload instead of the build.
 import { mkdirSync } from 'node:fs';
 import { createServer } from 'node:http';
+import { dirname } from 'node:path';
 import { createApp } from './app';
 import { ensureClientBuild } from './client-build';
 import { staticClient, viteClient, type ClientHandlers } from './client';
 import { configFromEnv } from './config';
 import { openDatabase } from './db/client';
+import { acquireDatabaseLock, DatabaseInUseError } from './db/database-lock';
 import { runMigrations } from './db/migrate';
 import { describeSeededAccounts, isDatabaseEmpty, seedDemo } from './db/seed/seed-demo';
 import { readEnv } from './env';
@@ -24,6 +26,17 @@ if (viteDevServer && env.NODE_ENV === 'production') {
   process.exit(1);
 }
 mkdirSync(env.DATA_DIR, { recursive: true });
+mkdirSync(dirname(env.DATABASE_PATH), { recursive: true });
+
+let databaseLock: { release: () => void };
+try {
+  databaseLock = acquireDatabaseLock(env.DATABASE_PATH);
+} catch (error) {
+  if (!(error instanceof DatabaseInUseError)) throw error;
+  console.error(error.message);
+  process.exit(1);
+}
+process.once('exit', () => databaseLock.release());
 
 const database = openDatabase(env.DATABASE_PATH);
 runMigrations(database.db);
