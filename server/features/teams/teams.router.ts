@@ -1,6 +1,5 @@
 import { Router } from 'express';
 import type { AppContext } from '@server/config';
-import { listTeamEvents } from '@server/features/audit/audit.repository';
 import { currentUser, requireUser } from '@server/middleware/session';
 import { grantedAccess, requireTeamRole } from '@server/middleware/team-access';
 import { validateBody } from '@server/middleware/validate';
@@ -46,10 +45,6 @@ export function teamsRoutes(ctx: AppContext): Router {
     const { teamId, role } = grantedAccess(req);
     removeMember(ctx, currentUser(req), role, teamId, String(req.params.userId));
     res.status(204).end();
-  });
-
-  router.get('/teams/:teamId/activity', requireUser, viewer, (req, res) => {
-    res.json({ events: listTeamEvents(ctx.db, grantedAccess(req).teamId, 50) });
   });
 
   return router;
