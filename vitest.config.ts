@@ -30,7 +30,7 @@ export default defineConfig({
         test: {
           name: 'api',
           environment: 'node',
-          include: ['tests/api/**/*.test.ts'],
+          include: ['tests/api/**/*.test.ts', 'tests/security/**/*.test.ts'],
         },
       },
       {

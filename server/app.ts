@@ -28,18 +28,19 @@ export interface AppDeps {
   config: AppConfig;
   /** The fake receiver's mailbox; shown at /dev/mailbox outside production. */
   mailbox?: Mailbox;
-  /** Serves the web client after the API: Vite middleware in development, the build otherwise. */
+  /** Serves the web client after the API: the build, or Vite middleware (`npm run dev`). */
   client?: RequestHandler[];
+  /** Vite's development client injects inline scripts, which a content security policy forbids. */
+  clientHasInlineScripts?: boolean;
 }
 
-function securityHeaders(config: AppConfig): RequestHandler {
+function securityHeaders(config: AppConfig, inlineScripts: boolean): RequestHandler {
   const https = config.appUrl.startsWith('https:');
   return helmet({
-    // Vite's development client injects inline scripts; the built client needs none.
-    contentSecurityPolicy:
-      config.nodeEnv === 'development'
-        ? false
-        : { directives: { upgradeInsecureRequests: https ? [] : null, 'connect-src': ["'self'"] } },
+    // The built client needs no inline script, so it gets the policy; Vite's development client does.
+    contentSecurityPolicy: inlineScripts
+      ? false
+      : { directives: { upgradeInsecureRequests: https ? [] : null, 'connect-src': ["'self'"] } },
     // Only ask browsers to insist on HTTPS when the app is actually served over it.
     strictTransportSecurity: https,
   });
@@ -74,7 +75,7 @@ export function createApp(deps: AppDeps): Express {
   const app = express();
   // Express reads the client address from X-Forwarded-For only through this many proxies.
   app.set('trust proxy', config.trustProxyHops);
-  app.use(securityHeaders(config));
+  app.use(securityHeaders(config, deps.clientHasInlineScripts ?? false));
   app.use('/api', api);
   if (showMailbox) app.use(devMailboxPage(deps.mailbox!));
   for (const handler of deps.client ?? []) app.use(handler);

@@ -16,6 +16,11 @@ export interface AppConfig {
   appUrl: string;
   /** Folder for files the app writes besides the database (build outputs, uploads). */
   dataDir: string;
+  /**
+   * Whether an outgoing mail server (SMTP_URL) delivers e-mail. Without one, mail is only caught
+   * locally, so owners are shown each invitation link to pass on by hand.
+   */
+  outgoingMail: boolean;
   passwordCost: PasswordCost;
   sessionDays: number;
   invitationDays: number;
@@ -42,6 +47,7 @@ export function configFromEnv(env: Env): AppConfig {
     nodeEnv: env.NODE_ENV,
     appUrl: env.APP_URL,
     dataDir: env.DATA_DIR,
+    outgoingMail: Boolean(env.SMTP_URL),
     passwordCost: DEFAULT_PASSWORD_COST,
     sessionDays: 30,
     invitationDays: 7,

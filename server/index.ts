@@ -1,8 +1,10 @@
 // Starts Mixwright: reads the environment, opens and migrates the database, seeds the demo on
-// an empty database, starts the development mail receiver, and listens on one port.
+// an empty database, starts the local mail receiver when there is no mail server, and listens
+// on one port. `--dev` serves the client through Vite with hot reload instead of the build.
 import { mkdirSync } from 'node:fs';
 import { createServer } from 'node:http';
 import { createApp } from './app';
+import { ensureClientBuild } from './client-build';
 import { staticClient, viteClient, type ClientHandlers } from './client';
 import { configFromEnv } from './config';
 import { openDatabase } from './db/client';
@@ -12,9 +14,15 @@ import { readEnv } from './env';
 import { BIN_DAYS, purgeExpiredRobots } from './features/robot-bin/robot-bin.service';
 import { startFakeSmtp, type FakeSmtp } from './lib/mail/fake-smtp';
 import { createSmtpMailer } from './lib/mail/mailer';
+import { isLoopbackHost } from './middleware/loopback-only';
 
 const env = readEnv();
 const config = configFromEnv(env);
+const viteDevServer = process.argv.includes('--dev');
+if (viteDevServer && env.NODE_ENV === 'production') {
+  console.error('The development server (--dev) does not run in production; use `npm run start:prod`.');
+  process.exit(1);
+}
 mkdirSync(env.DATA_DIR, { recursive: true });
 
 const database = openDatabase(env.DATABASE_PATH);
@@ -46,18 +54,36 @@ if (!env.SMTP_URL) {
 const mailer = createSmtpMailer({ url: env.SMTP_URL, port: fakeSmtp?.port, from: env.MAIL_FROM });
 
 const httpServer = createServer();
-const client: ClientHandlers =
-  env.NODE_ENV === 'production' ? staticClient('dist/client') : await viteClient(httpServer);
-const app = createApp({ db: database.db, mailer, config, mailbox: fakeSmtp?.mailbox, client: client.handlers });
+let client: ClientHandlers;
+if (viteDevServer) {
+  client = await viteClient(httpServer, { dataDir: env.DATA_DIR, databasePath: env.DATABASE_PATH });
+} else {
+  await ensureClientBuild({ root: process.cwd(), outDir: 'dist/client', log: (line) => console.log(line) });
+  client = staticClient('dist/client');
+}
+const app = createApp({
+  db: database.db,
+  mailer,
+  config,
+  mailbox: fakeSmtp?.mailbox,
+  client: client.handlers,
+  clientHasInlineScripts: viteDevServer,
+});
 httpServer.on('request', app);
 
 httpServer.once('error', (error: NodeJS.ErrnoException) => {
   console.error(error.code === 'EADDRINUSE' ? `Port ${env.PORT} is in use; stop the other server or set PORT` : error);
   process.exit(1);
 });
-httpServer.listen(env.PORT, () => {
-  console.log(`Mixwright (${env.NODE_ENV}) is at ${config.appUrl}`);
-  if (fakeSmtp) console.log(`E-mail is caught locally; read it at ${config.appUrl}/dev/mailbox`);
+httpServer.listen(env.PORT, env.HOST, () => {
+  const how = viteDevServer ? 'development server, client from Vite' : 'built client';
+  console.log(`Mixwright (${env.NODE_ENV}, ${how}) is at ${config.appUrl}`);
+  if (!isLoopbackHost(env.HOST)) {
+    console.log(`Listening on ${env.HOST}: other machines on the network can reach this server.`);
+  }
+  if (fakeSmtp) {
+    console.log(`No SMTP_URL: e-mail is caught locally; read it on this machine at ${config.appUrl}/dev/mailbox`);
+  }
 });
 
 let stopping = false;

@@ -66,6 +66,12 @@ export interface PendingInvitation {
   expiresAt: string;
 }
 
+/**
+ * How invitation links reach people: by e-mail, or, when the server has no outgoing mail
+ * server, handed to the owner to pass on themselves.
+ */
+export type InvitationDelivery = 'email' | 'by-hand';
+
 export interface InvitationPreview {
   teamName: string;
   email: string;

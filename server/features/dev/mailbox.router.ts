@@ -1,11 +1,14 @@
 import { Router } from 'express';
 import type { Mailbox, MailboxMessage } from '@server/lib/mail/fake-smtp';
+import { localRequestsOnly } from '@server/middleware/loopback-only';
 
-// The development mailbox: what the local fake SMTP receiver caught. Never mounted in production.
+// The local mailbox: what the fake SMTP receiver caught. It holds password-reset and invitation
+// links, so it answers only requests made on this machine. Never mounted in production.
+const onThisMachine = localRequestsOnly('local mailbox');
 
 export function devMailboxApiRoutes(mailbox: Mailbox): Router {
   const router = Router();
-  router.get('/dev/mailbox', (_req, res) => {
+  router.get('/dev/mailbox', onThisMachine, (_req, res) => {
     res.json({ messages: mailbox.list() });
   });
   return router;
@@ -27,14 +30,14 @@ function renderMessage(m: MailboxMessage): string {
 /** A plain server-rendered page, so it works before the client is built and cannot ship by accident. */
 export function devMailboxPage(mailbox: Mailbox): Router {
   const router = Router();
-  router.get('/dev/mailbox', (_req, res) => {
+  router.get('/dev/mailbox', onThisMachine, (_req, res) => {
     const messages = mailbox.list();
     const body = messages.length
       ? messages.map(renderMessage).join('\n')
       : '<p class="empty">No e-mail yet. Invitations and password resets sent while the app runs land here.</p>';
     res.type('html').send(`<!doctype html>
 <html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1">
-<title>Development mailbox · Mixwright</title>
+<title>Local mailbox · Mixwright</title>
 <style>
   body { margin: 0; background: #f7f4ec; color: #1d2a44; font: 16px/1.5 system-ui, sans-serif; }
   main { max-width: 56rem; margin: 0 auto; padding: 2rem 1.25rem; }
@@ -46,8 +49,10 @@ export function devMailboxPage(mailbox: Mailbox): Router {
   .links { padding-left: 1.25rem; margin: 0 0 .75rem; } .empty { color: #56607a; }
 </style></head>
 <body><main>
-<h1>Development mailbox</h1>
-<p class="note">E-mail caught by the local receiver (development and tests only), newest first. <a href="/">Back to Mixwright</a></p>
+<h1>Local mailbox</h1>
+<p class="note">This Mixwright has no outgoing mail server, so the e-mail it sends is caught here, newest first.
+It can be read only on this computer (at a localhost address), because reset and invitation links let anyone
+who holds them in. <a href="/">Back to Mixwright</a></p>
 ${body}
 </main></body></html>`);
   });

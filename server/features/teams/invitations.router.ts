@@ -7,6 +7,7 @@ import { LinkTokenSchema } from '@shared/schemas/auth';
 import { InviteMemberInputSchema } from '@shared/schemas/teams';
 import {
   acceptInvitation,
+  invitationDelivery,
   inviteMember,
   listInvitations,
   previewInvitation,
@@ -18,7 +19,7 @@ export function invitationsRoutes(ctx: AppContext): Router {
   const owner = requireTeamRole(ctx, 'owner');
 
   router.get('/teams/:teamId/invitations', requireUser, owner, (req, res) => {
-    res.json({ invitations: listInvitations(ctx, grantedAccess(req).teamId) });
+    res.json({ invitations: listInvitations(ctx, grantedAccess(req).teamId), delivery: invitationDelivery(ctx) });
   });
 
   router.post(
@@ -27,8 +28,7 @@ export function invitationsRoutes(ctx: AppContext): Router {
     owner,
     validateBody(InviteMemberInputSchema),
     async (req, res) => {
-      const invitation = await inviteMember(ctx, currentUser(req), grantedAccess(req).teamId, req.body);
-      res.status(201).json({ invitation });
+      res.status(201).json(await inviteMember(ctx, currentUser(req), grantedAccess(req).teamId, req.body));
     },
   );
 

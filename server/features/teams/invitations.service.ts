@@ -4,7 +4,7 @@ import { findUserByEmail } from '@server/features/auth/auth.repository';
 import { HttpError } from '@server/lib/http-error';
 import { hashToken, newToken } from '@server/lib/ids';
 import type { CurrentUser } from '@shared/schemas/auth';
-import type { InvitationPreview, PendingInvitation, Role } from '@shared/schemas/teams';
+import type { InvitationDelivery, InvitationPreview, PendingInvitation, Role } from '@shared/schemas/teams';
 import {
   deleteInvitation,
   findInvitationByTokenHash,
@@ -23,16 +23,30 @@ const ROLE_WORDS: Record<Role, string> = {
   viewer: 'a viewer (reads and downloads)',
 };
 
+/** E-mailed when the server has an outgoing mail server; otherwise passed on by the owner. */
+export function invitationDelivery(ctx: AppContext): InvitationDelivery {
+  return ctx.config.outgoingMail ? 'email' : 'by-hand';
+}
+
+export interface CreatedInvitation {
+  invitation: PendingInvitation;
+  delivery: InvitationDelivery;
+  /** The one-time link, given to the owner only when it must be passed on by hand. */
+  link: string | null;
+}
+
 /**
  * Invites by e-mail with a one-time link. A new invitation to the same address replaces the
  * open one. If the e-mail cannot be sent, the invitation is dropped and the owner is told.
+ * Without an outgoing mail server the mail only reaches the local mailbox, so the owner gets
+ * the link to pass on and a failed local delivery does not matter.
  */
 export async function inviteMember(
   ctx: AppContext,
   actor: CurrentUser,
   teamId: string,
   input: { email: string; role: Role },
-): Promise<PendingInvitation> {
+): Promise<CreatedInvitation> {
   const team = findTeam(ctx.db, teamId);
   if (!team) throw new HttpError(404, 'Team not found');
   const existing = findUserByEmail(ctx.db, input.email);
@@ -56,14 +70,17 @@ export async function inviteMember(
       expiresAt,
     });
   });
+  const delivery = invitationDelivery(ctx);
   try {
     await ctx.mailer.send(
       invitationMail(ctx, { to: input.email, teamName: team.name, inviter: actor.name, role: input.role, token }),
     );
   } catch (error) {
-    deleteInvitation(ctx.db, invitation.id);
     console.error('Invitation e-mail could not be sent:', error);
-    throw new HttpError(502, 'The invitation e-mail could not be sent; try again later', { code: 'mail_failed' });
+    if (delivery === 'email') {
+      deleteInvitation(ctx.db, invitation.id);
+      throw new HttpError(502, 'The invitation e-mail could not be sent; try again later', { code: 'mail_failed' });
+    }
   }
   recordEvent(ctx.db, {
     teamId,
@@ -73,14 +90,20 @@ export async function inviteMember(
     detail: { email: input.email, role: input.role },
   });
   return {
-    id: invitation.id,
-    email: invitation.email,
-    role: invitation.role,
-    invitedByName: actor.name,
-    createdAt: invitation.createdAt.toISOString(),
-    expiresAt: invitation.expiresAt.toISOString(),
+    invitation: {
+      id: invitation.id,
+      email: invitation.email,
+      role: invitation.role,
+      invitedByName: actor.name,
+      createdAt: invitation.createdAt.toISOString(),
+      expiresAt: invitation.expiresAt.toISOString(),
+    },
+    delivery,
+    link: delivery === 'by-hand' ? invitationLink(ctx, token) : null,
   };
 }
+
+const invitationLink = (ctx: AppContext, token: string) => `${ctx.config.appUrl}/invitations/${token}`;
 
 function invitationMail(
   ctx: AppContext,
@@ -95,7 +118,7 @@ function invitationMail(
       `${m.inviter} invited you to join the team "${m.teamName}" on Mixwright as ${ROLE_WORDS[m.role]}.`,
       `Open this link within ${ctx.config.invitationDays} days to accept. Sign up or sign in with this e-mail address (${m.to}):`,
       '',
-      `${ctx.config.appUrl}/invitations/${m.token}`,
+      invitationLink(ctx, m.token),
       '',
       'The link works once. If you were not expecting it, you can ignore this e-mail.',
     ].join('\n'),

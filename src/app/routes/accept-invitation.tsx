@@ -4,12 +4,12 @@ import { Button, ButtonLink } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { ErrorState, LoadingState } from '@/components/ui/states';
 import { useMe } from '@/features/auth/api/get-me';
-import { useSignOut } from '@/features/auth/api/sign-out';
 import { useAcceptInvitation } from '@/features/teams/api/accept-invitation';
 import { useInvitationPreview } from '@/features/teams/api/get-invitation-preview';
 import { errorMessage } from '@/lib/api-client';
 import { formatDate } from '@/lib/format';
 import { ROLE_SUMMARIES } from '@shared/schemas/teams';
+import { SignOutButton } from '../sign-out-button';
 import { AuthHeading } from './auth-layout';
 
 export function AcceptInvitationRoute() {
@@ -18,7 +18,6 @@ export function AcceptInvitationRoute() {
   const preview = useInvitationPreview(token);
   const me = useMe();
   const accept = useAcceptInvitation();
-  const signOut = useSignOut();
 
   if (preview.isPending || me.isPending) return <LoadingState label="Opening the invitation…" />;
   if (preview.isError) {
@@ -77,13 +76,9 @@ export function AcceptInvitationRoute() {
             You are signed in as <span className="font-mono">{user.email}</span>. This invitation is for another
             address; sign in with that one to accept it.
           </p>
-          <Button
-            variant="secondary"
-            busy={signOut.isPending}
-            onClick={() => signOut.mutate(undefined, { onSuccess: () => navigate(`/sign-in?${query}`) })}
-          >
+          <SignOutButton variant="secondary" to={`/sign-in?${query}`}>
             Sign out and switch account
-          </Button>
+          </SignOutButton>
         </div>
       )}
     </>

@@ -1,15 +1,12 @@
-import { Link, NavLink, Outlet, useMatches, useNavigate } from 'react-router';
-import { Button } from '@/components/ui/button';
+import { Link, NavLink, Outlet, useMatches } from 'react-router';
 import { cx } from '@/components/ui/cx';
 import { Wordmark } from '@/components/ui/wordmark';
 import { useMe } from '@/features/auth/api/get-me';
-import { useSignOut } from '@/features/auth/api/sign-out';
+import { SignOutButton } from '../sign-out-button';
 
 /** Signed-in pages: a quiet top bar and the page below. */
 export function AppLayout() {
   const me = useMe();
-  const signOut = useSignOut();
-  const navigate = useNavigate();
   // Working screens (the robot editor) use the whole width; reading pages keep a measure.
   const wide = useMatches().some((m) => (m.handle as { wide?: boolean } | undefined)?.wide);
   const width = wide ? 'max-w-[100rem]' : 'max-w-6xl';
@@ -47,14 +44,7 @@ export function AppLayout() {
                 {me.data.name}
               </span>
             )}
-            <Button
-              variant="secondary"
-              size="sm"
-              busy={signOut.isPending}
-              onClick={() => signOut.mutate(undefined, { onSuccess: () => navigate('/sign-in', { replace: true }) })}
-            >
-              Sign out
-            </Button>
+            <SignOutButton variant="secondary" size="sm" />
           </div>
         </div>
       </header>

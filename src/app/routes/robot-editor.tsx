@@ -2,6 +2,7 @@ import { Navigate, useParams } from 'react-router';
 import { ButtonLink } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
 import { ErrorState, LoadingState } from '@/components/ui/states';
+import { useMe } from '@/features/auth/api/get-me';
 import { RobotEditor } from '@/features/robot-editor/components/shell/robot-editor';
 import { isSectionId } from '@/lib/editor-sections';
 import { getRevision } from '@/features/robots/api/get-revision';
@@ -15,12 +16,13 @@ import { EDITOR_SECTIONS } from '../editor-sections';
 export function RobotEditorRoute() {
   const { teamId = '', robotId = '', section } = useParams();
   const robot = useRobot(robotId);
+  const me = useMe();
   const save = useSaveRevision(robotId);
   const basePath = `/teams/${teamId}/robots/${robotId}`;
 
   const known = section === 'problems' || (isSectionId(section) && EDITOR_SECTIONS[section]);
   if (!known) return <Navigate to={`${basePath}/chassis`} replace />;
-  if (robot.isPending) return <LoadingState label="Loading the robot…" />;
+  if (robot.isPending || !me.data) return <LoadingState label="Loading the robot…" />;
   if (robot.isError) {
     if (isApiError(robot.error, 404)) {
       return (
@@ -41,6 +43,7 @@ export function RobotEditorRoute() {
     <RobotEditor
       key={robotId}
       detail={robot.data}
+      userId={me.data.id}
       section={section as Parameters<typeof RobotEditor>[0]['section']}
       sections={EDITOR_SECTIONS}
       basePath={basePath}

@@ -2,6 +2,7 @@ import { useOutletContext } from 'react-router';
 import { Panel } from '@/components/ui/panel';
 import { ErrorState, LoadingState } from '@/components/ui/states';
 import { useMe } from '@/features/auth/api/get-me';
+import { useInvitations } from '@/features/teams/api/get-invitations';
 import { useMembers } from '@/features/teams/api/get-members';
 import { InvitationsList } from '@/features/teams/components/invitations-list';
 import { InviteForm } from '@/features/teams/components/invite-form';
@@ -14,6 +15,7 @@ export function TeamPeopleRoute() {
   const members = useMembers(team.id);
   const me = useMe();
   const isOwner = team.role === 'owner';
+  const delivery = useInvitations(team.id, isOwner).data?.delivery;
 
   return (
     <div className="grid items-start gap-6 lg:grid-cols-[1fr_20rem]">
@@ -35,9 +37,13 @@ export function TeamPeopleRoute() {
           <Panel
             title="Invite someone"
             titleId="invite-title"
-            description="They get an e-mail with a one-time link that works for 7 days."
+            description={
+              delivery === 'by-hand'
+                ? 'You get a one-time link that works for 7 days, to pass on yourself.'
+                : 'They get an e-mail with a one-time link that works for 7 days.'
+            }
           >
-            <InviteForm teamId={team.id} />
+            <InviteForm teamId={team.id} delivery={delivery} />
           </Panel>
         )}
         {isOwner && (

@@ -19,6 +19,7 @@ export function testConfig(overrides: Partial<AppConfig> = {}): AppConfig {
     nodeEnv: 'test',
     appUrl: TEST_APP_URL,
     dataDir: tmpdir(),
+    outgoingMail: false,
     passwordCost: { log2N: 10, r: 8, p: 1 },
     sessionDays: 30,
     invitationDays: 7,

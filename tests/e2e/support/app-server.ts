@@ -49,7 +49,10 @@ export async function startApp(options: StartOptions): Promise<RunningApp> {
   const server = createServer();
   const port = await listen(server);
   const url = `http://127.0.0.1:${port}`;
-  const client: ClientHandlers = options.client === 'vite' ? await viteClient(server) : staticClient(options.client);
+  const vite = options.client === 'vite';
+  const client: ClientHandlers = vite
+    ? await viteClient(server, { dataDir: dir, databasePath: join(dir, 'app.sqlite') })
+    : staticClient(options.client);
   const mailer = createSmtpMailer({ port: smtp.port, from: 'Mixwright <no-reply@mixwright.invalid>' });
   server.on(
     'request',
@@ -59,6 +62,7 @@ export async function startApp(options: StartOptions): Promise<RunningApp> {
       config: { ...config, appUrl: url, dataDir: dir },
       mailbox: smtp.mailbox,
       client: client.handlers,
+      clientHasInlineScripts: vite,
     }),
   );
   return {

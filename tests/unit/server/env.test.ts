@@ -12,6 +12,11 @@ describe('reading the environment', () => {
     });
   });
 
+  it('listens on this machine only unless HOST says otherwise', () => {
+    expect(readEnv({}).HOST).toBe('127.0.0.1');
+    expect(readEnv({ HOST: '0.0.0.0' }).HOST).toBe('0.0.0.0');
+  });
+
   it('derives the app address from PORT and drops a trailing slash from APP_URL', () => {
     expect(readEnv({ PORT: '4100' }).APP_URL).toBe('http://localhost:4100');
     expect(readEnv({ APP_URL: 'https://robots.example.org/' }).APP_URL).toBe('https://robots.example.org');

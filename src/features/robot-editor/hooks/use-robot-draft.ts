@@ -2,7 +2,13 @@ import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { deepEqual } from '@shared/history/field-path';
 import type { RobotConfig } from '@shared/schemas/robot-config';
 import type { RevisionDetail } from '@shared/schemas/robots';
-import { clearDraft, readDraft, writeDraft } from '../lib/draft-storage';
+import { browserDraftStorage, clearDraft, readDraft, writeDraft, type DraftOwner } from '../lib/draft-storage';
+
+/** Whose draft of which robot, and whether they may change it at all. */
+export interface DraftScope extends DraftOwner {
+  /** Someone who cannot edit works on the head only: no draft is read for them or kept. */
+  canEdit: boolean;
+}
 
 interface DraftState {
   baseRevision: number;
@@ -25,8 +31,8 @@ export interface RobotDraft extends DraftState {
   rebase: (revision: Pick<RevisionDetail, 'number' | 'config'>, config?: RobotConfig) => void;
 }
 
-function initial(robotId: string, head: RevisionDetail, storage: Storage | null): DraftState {
-  const stored = storage ? readDraft(storage, robotId) : null;
+function initial(owner: DraftOwner, head: RevisionDetail, storage: Storage | null): DraftState {
+  const stored = storage ? readDraft(storage, owner) : null;
   if (stored && stored.baseRevision <= head.number) {
     return {
       baseRevision: stored.baseRevision,
@@ -37,26 +43,22 @@ function initial(robotId: string, head: RevisionDetail, storage: Storage | null)
   return { baseRevision: head.number, config: head.config, baseConfig: head.config };
 }
 
-function browserStorage(): Storage | null {
-  try {
-    return typeof localStorage === 'undefined' ? null : localStorage;
-  } catch {
-    return null;
-  }
-}
-
 /**
- * The robot's draft: what the editor shows and changes. It is kept in localStorage while it
- * differs from its base revision; a clean draft follows the head when someone else saves.
+ * The person's draft of the robot: what the editor shows and changes. It is kept in
+ * localStorage under their id while it differs from its base revision; a clean draft follows
+ * the head when someone else saves. Nothing is read or kept for someone who cannot edit.
  */
 export function useRobotDraft(
-  robotId: string,
+  scope: DraftScope,
   head: RevisionDetail,
-  storage: Storage | null = browserStorage(),
+  browser: Storage | null = browserDraftStorage(),
 ): RobotDraft {
-  const [state, setState] = useState<DraftState>(() => initial(robotId, head, storage));
+  const storage = scope.canEdit ? browser : null;
+  const { userId, robotId } = scope;
+  const [state, setState] = useState<DraftState>(() => initial({ userId, robotId }, head, storage));
   const [storageFailed, setStorageFailed] = useState(false);
   const storageRef = useRef(storage);
+  storageRef.current = storage;
   const dirty = state.baseConfig === null || !deepEqual(state.config, state.baseConfig);
 
   // Someone saved a newer head while this draft had no changes: follow it.
@@ -70,13 +72,13 @@ export function useRobotDraft(
       const s = storageRef.current;
       if (!s) return;
       if (next.baseConfig !== null && deepEqual(next.config, next.baseConfig)) {
-        clearDraft(s, robotId);
+        clearDraft(s, { userId, robotId });
         setStorageFailed(false);
       } else {
-        setStorageFailed(!writeDraft(s, { robotId, baseRevision: next.baseRevision, config: next.config }));
+        setStorageFailed(!writeDraft(s, { userId, robotId, baseRevision: next.baseRevision, config: next.config }));
       }
     },
-    [robotId],
+    [userId, robotId],
   );
 
   // Edits arrive one event at a time; the ref lets two edits in one event build on each other.
@@ -93,9 +95,9 @@ export function useRobotDraft(
   );
 
   const discard = useCallback(() => {
-    if (storageRef.current) clearDraft(storageRef.current, robotId);
+    if (storageRef.current) clearDraft(storageRef.current, { userId, robotId });
     setState({ baseRevision: head.number, config: head.config, baseConfig: head.config });
-  }, [head, robotId]);
+  }, [head, userId, robotId]);
 
   const rebase = useCallback(
     (revision: Pick<RevisionDetail, 'number' | 'config'>, config?: RobotConfig) => {

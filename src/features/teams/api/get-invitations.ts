@@ -1,11 +1,16 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
-import type { PendingInvitation } from '@shared/schemas/teams';
+import type { InvitationDelivery, PendingInvitation } from '@shared/schemas/teams';
 import { teamKeys } from './team-keys';
 
-export async function getInvitations(teamId: string): Promise<PendingInvitation[]> {
-  return (await apiRequest<{ invitations: PendingInvitation[] }>(`/teams/${encodeURIComponent(teamId)}/invitations`))
-    .invitations;
+export interface TeamInvitations {
+  invitations: PendingInvitation[];
+  /** `by-hand` when the server has no outgoing mail server and the owner passes links on. */
+  delivery: InvitationDelivery;
+}
+
+export async function getInvitations(teamId: string): Promise<TeamInvitations> {
+  return apiRequest<TeamInvitations>(`/teams/${encodeURIComponent(teamId)}/invitations`);
 }
 
 export const invitationsQueryOptions = (teamId: string) =>

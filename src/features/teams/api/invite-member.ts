@@ -1,11 +1,18 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
-import type { InviteMemberInput, PendingInvitation } from '@shared/schemas/teams';
+import type { InvitationDelivery, InviteMemberInput, PendingInvitation } from '@shared/schemas/teams';
 import { teamKeys } from './team-keys';
 
-export async function inviteMember(teamId: string, input: InviteMemberInput): Promise<PendingInvitation> {
+export interface CreatedInvitation {
+  invitation: PendingInvitation;
+  delivery: InvitationDelivery;
+  /** The one-time link, when the owner must pass it on by hand (no outgoing mail server). */
+  link: string | null;
+}
+
+export async function inviteMember(teamId: string, input: InviteMemberInput): Promise<CreatedInvitation> {
   const path = `/teams/${encodeURIComponent(teamId)}/invitations`;
-  return (await apiRequest<{ invitation: PendingInvitation }>(path, { method: 'POST', body: input })).invitation;
+  return apiRequest<CreatedInvitation>(path, { method: 'POST', body: input });
 }
 
 export function useInviteMember(teamId: string) {

@@ -15,7 +15,7 @@ export function InvitationsList({ teamId }: { teamId: string }) {
   if (invitations.isPending) return <LoadingState label="Loading invitations…" />;
   if (invitations.isError)
     return <ErrorState message={errorMessage(invitations.error)} onRetry={() => invitations.refetch()} />;
-  if (invitations.data.length === 0) return <p className="text-sm text-ink-muted">No open invitations.</p>;
+  if (invitations.data.invitations.length === 0) return <p className="text-sm text-ink-muted">No open invitations.</p>;
 
   return (
     <div className="flex flex-col gap-3">
@@ -33,7 +33,7 @@ export function InvitationsList({ teamId }: { teamId: string }) {
           </tr>
         </THead>
         <TBody>
-          {invitations.data.map((invitation) => (
+          {invitations.data.invitations.map((invitation) => (
             <Tr key={invitation.id}>
               <Td className="font-mono text-sm">{invitation.email}</Td>
               <Td>

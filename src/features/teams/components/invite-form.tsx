@@ -7,8 +7,9 @@ import { FormError, FormNotice } from '@/components/ui/form-error';
 import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
 import { submitWithServerErrors } from '@/lib/form-errors';
-import { InviteMemberInputSchema, ROLES, ROLE_SUMMARIES } from '@shared/schemas/teams';
-import { useInviteMember } from '../api/invite-member';
+import { InviteMemberInputSchema, ROLES, ROLE_SUMMARIES, type InvitationDelivery } from '@shared/schemas/teams';
+import { useInviteMember, type CreatedInvitation } from '../api/invite-member';
+import { HandDeliveryNotice, InvitationLink } from './hand-delivery';
 
 type Values = z.input<typeof InviteMemberInputSchema>;
 
@@ -17,9 +18,9 @@ const roleOptions = ROLES.map((role) => ({
   label: `${role[0].toUpperCase()}${role.slice(1)} — ${ROLE_SUMMARIES[role].toLowerCase()}`,
 }));
 
-export function InviteForm({ teamId }: { teamId: string }) {
+export function InviteForm({ teamId, delivery }: { teamId: string; delivery: InvitationDelivery | undefined }) {
   const invite = useInviteMember(teamId);
-  const [sentTo, setSentTo] = useState<string | null>(null);
+  const [created, setCreated] = useState<CreatedInvitation | null>(null);
   const form = useForm<Values, unknown, z.output<typeof InviteMemberInputSchema>>({
     resolver: zodResolver(InviteMemberInputSchema),
     defaultValues: { email: '', role: 'viewer' },
@@ -27,16 +28,21 @@ export function InviteForm({ teamId }: { teamId: string }) {
   const { errors } = form.formState;
 
   const onSubmit = submitWithServerErrors(form, ['email', 'role'], async (values) => {
-    setSentTo(null);
-    const invitation = await invite.mutateAsync(values);
-    setSentTo(invitation.email);
+    setCreated(null);
+    setCreated(await invite.mutateAsync(values));
     form.reset({ email: '', role: values.role });
   });
+  const sentNotice =
+    created && !created.link
+      ? `Invitation sent to ${created.invitation.email}. The link works once, for 7 days.`
+      : undefined;
 
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-3">
+      {delivery === 'by-hand' && <HandDeliveryNotice />}
       <FormError message={errors.root?.server?.message} />
-      <FormNotice message={sentTo ? `Invitation sent to ${sentTo}. The link works once, for 7 days.` : undefined} />
+      <FormNotice message={sentNotice} />
+      {created?.link && <InvitationLink email={created.invitation.email} link={created.link} />}
       <div className="grid gap-3 sm:grid-cols-[1fr_minmax(0,18rem)]">
         <TextField
           label="E-mail address"
@@ -48,7 +54,7 @@ export function InviteForm({ teamId }: { teamId: string }) {
         <SelectField label="Role" options={roleOptions} error={errors.role?.message} {...form.register('role')} />
       </div>
       <Button type="submit" busy={form.formState.isSubmitting} className="self-start">
-        Send invitation
+        {delivery === 'by-hand' ? 'Create invitation link' : 'Send invitation'}
       </Button>
     </form>
   );

@@ -2,11 +2,13 @@ import { useEffect } from 'react';
 import { useBlocker } from 'react-router';
 import { Button } from '@/components/ui/button';
 import { Dialog } from '@/components/ui/dialog';
+import { isSignOutNavigation } from '@/lib/sign-out-navigation';
 
 /**
  * Asks before leaving the robot with unsaved changes: inside the app with a dialog, and when
  * the tab closes or reloads with the browser's own question. Moving between the robot's
- * sections (paths under `basePath`) never asks.
+ * sections (paths under `basePath`) never asks, and neither does signing out, which warns
+ * about unsaved drafts itself.
  */
 export function LeaveGuard({
   dirty,
@@ -19,7 +21,10 @@ export function LeaveGuard({
 }) {
   const blocker = useBlocker(
     ({ nextLocation }) =>
-      dirty && !nextLocation.pathname.startsWith(`${basePath}/`) && nextLocation.pathname !== basePath,
+      dirty &&
+      !isSignOutNavigation(nextLocation.state) &&
+      !nextLocation.pathname.startsWith(`${basePath}/`) &&
+      nextLocation.pathname !== basePath,
   );
 
   useEffect(() => {

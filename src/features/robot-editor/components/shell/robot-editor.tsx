@@ -30,6 +30,8 @@ import { SectionProblems } from './section-problems';
 
 export interface RobotEditorProps {
   detail: RobotDetail;
+  /** The signed-in person: drafts are kept per person, so a shared computer does not mix them. */
+  userId: string;
   /** The section shown, or the list of every problem. */
   section: SectionId | 'problems';
   sections: SectionRegistry;
@@ -54,10 +56,19 @@ const CLOSED: SaveState = { open: false, message: '', saving: false, error: null
  * The robot editor: header with save, sections with live problem counts, the draft kept per
  * robot, conflicts resolved field by field, and a question before leaving unsaved work.
  */
-export function RobotEditor({ detail, section, sections, basePath, save, revisionQuery, onStale }: RobotEditorProps) {
+export function RobotEditor({
+  detail,
+  userId,
+  section,
+  sections,
+  basePath,
+  save,
+  revisionQuery,
+  onStale,
+}: RobotEditorProps) {
   const { robot, head } = detail;
   const canEdit = robot.role !== 'viewer';
-  const draft = useRobotDraft(robot.id, head);
+  const draft = useRobotDraft({ userId, robotId: robot.id, canEdit }, head);
   const { valid, validConfig, fieldErrors } = useDraftValidation(draft.config, head.config);
   const engineConfig = useDeferredValue(validConfig);
   const problems = useMemo<EditorProblem[]>(() => {

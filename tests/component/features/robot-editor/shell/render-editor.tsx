@@ -56,6 +56,7 @@ export function renderEditor(
     return (
       <RobotEditor
         detail={detail}
+        userId="user-1"
         section={section as RobotEditorProps['section']}
         sections={options.sections ?? { safety: SafetySection }}
         basePath="/teams/team-1/robots/robot-1"

@@ -16,7 +16,7 @@ describe('the robot editor', () => {
     await user.clear(failsafe);
     await user.type(failsafe, '150');
     expect(screen.getByText(/Unsaved changes on r3/)).toBeTruthy();
-    expect(localStorage.getItem('mixwright:draft:robot-1')).toContain('"failsafeTimeoutMs":150');
+    expect(localStorage.getItem('mixwright:draft:user-1:robot-1')).toContain('"failsafeTimeoutMs":150');
   });
 
   it('shows the schema’s reason beside a field and will not save until it is fixed', async () => {
@@ -53,7 +53,7 @@ describe('the robot editor', () => {
       config: { safety: { rampPerSecond: 6 } },
     });
     expect(await screen.findByText('Saved as r4.')).toBeTruthy();
-    expect(localStorage.getItem('mixwright:draft:robot-1')).toBeNull();
+    expect(localStorage.getItem('mixwright:draft:user-1:robot-1')).toBeNull();
   });
 
   it('shows both versions when someone saved first, and rebases the draft field by field', async () => {
@@ -89,8 +89,8 @@ describe('the robot editor', () => {
       'Gentler ramp',
     );
     expect(save).toHaveBeenCalledTimes(1);
-    expect(localStorage.getItem('mixwright:draft:robot-1')).toContain('"baseRevision":4');
-    expect(localStorage.getItem('mixwright:draft:robot-1')).toContain('"failsafeTimeoutMs":180');
+    expect(localStorage.getItem('mixwright:draft:user-1:robot-1')).toContain('"baseRevision":4');
+    expect(localStorage.getItem('mixwright:draft:user-1:robot-1')).toContain('"failsafeTimeoutMs":180');
   });
 
   it('shows a viewer everything read-only, with no save', () => {
@@ -122,7 +122,7 @@ describe('the robot editor', () => {
       }),
     );
     expect(await screen.findByText('Team page')).toBeTruthy();
-    expect(localStorage.getItem('mixwright:draft:robot-1')).toContain('"rampPerSecond":6');
+    expect(localStorage.getItem('mixwright:draft:user-1:robot-1')).toContain('"rampPerSecond":6');
   });
 });
 
@@ -138,6 +138,6 @@ describe('discarding the draft', () => {
     await user.click(within(dialog).getByRole('button', { name: 'Discard the draft' }));
     expect((screen.getByLabelText('Ramp limit') as HTMLInputElement).value).toBe('4');
     expect(screen.getByText('No unsaved changes')).toBeTruthy();
-    expect(localStorage.getItem('mixwright:draft:robot-1')).toBeNull();
+    expect(localStorage.getItem('mixwright:draft:user-1:robot-1')).toBeNull();
   });
 });
