@@ -79,12 +79,3 @@ export interface InvitationPreview {
   invitedByName: string;
   expiresAt: string;
 }
-
-export interface TeamActivity {
-  id: number;
-  action: string;
-  actorName: string | null;
-  target: string | null;
-  detail: Record<string, unknown>;
-  createdAt: string;
-}

@@ -1,5 +1,5 @@
 import { lazy } from 'react';
-import type { SectionRegistry } from '@/features/robot-editor/lib/editor-sections';
+import type { SectionRegistry } from '@/lib/editor-sections';
 
 /**
  * The robot editor's sections in this build, each loaded when first opened. The navigation
@@ -14,7 +14,7 @@ export const EDITOR_SECTIONS: SectionRegistry = {
     default: (await import('@/features/robot-editor/sections/controls-section')).ControlsSection,
   })),
   wiring: lazy(async () => ({
-    default: (await import('@/features/robot-editor/sections/wiring-section')).WiringSection,
+    default: (await import('@/features/wiring/components/wiring-section')).WiringSection,
   })),
   safety: lazy(async () => ({
     default: (await import('@/features/robot-editor/sections/safety-section')).SafetySection,
@@ -26,6 +26,6 @@ export const EDITOR_SECTIONS: SectionRegistry = {
     default: (await import('@/features/firmware/components/firmware-section')).FirmwareSection,
   })),
   history: lazy(async () => ({
-    default: (await import('@/features/history/components/history-section')).HistorySection,
+    default: (await import('./sections/history-section')).HistorySection,
   })),
 };

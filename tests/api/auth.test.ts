@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { listUserEvents } from '@server/features/audit/audit.repository';
+import { listUserEvents } from '@server/features/activity/activity.repository';
 import { makeUser, uniqueEmail } from './support/factories';
 import { client, createTestContext, type TestContext } from './support/test-app';
 

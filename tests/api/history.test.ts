@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { listTeamEvents } from '@server/features/audit/audit.repository';
+import { listTeamActivity } from '@server/features/activity/activity.repository';
 import { revisionDiff } from '@server/features/history/history.service';
 import { findLiveRobot } from '@server/features/robots/robots.repository';
 import { saveRevision } from '@server/features/robots/robots.service';
@@ -243,7 +243,7 @@ describe('restoring a revision', () => {
     });
     const [first, third] = await Promise.all([1, 3].map((n) => editor.get(`/api/robots/${s.robot.id}/revisions/${n}`)));
     expect(third.body.revision.config).toEqual(first.body.revision.config);
-    expect(listTeamEvents(ctx.db, s.team.id, 1)[0]).toMatchObject({
+    expect(listTeamActivity(ctx.db, s.team.id, { limit: 1 })[0]).toMatchObject({
       action: 'revision.restored',
       detail: { number: 3, from: 1 },
     });

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { listTeamEvents } from '@server/features/audit/audit.repository';
+import { listTeamActivity } from '@server/features/activity/activity.repository';
 import { makeInvitation, makeTeamScenario, makeUser, uniqueEmail } from './support/factories';
 import { client, clientAs, createTestContext, TEST_APP_URL, type TestContext } from './support/test-app';
 
@@ -30,7 +30,7 @@ describe('inviting', () => {
     const token = mailedToken(email);
     const hashes = ctx.database.sqlite.prepare('select token_hash from invitations').all() as { token_hash: string }[];
     expect(hashes.map((h) => h.token_hash)).not.toContain(token);
-    expect(listTeamEvents(ctx.db, s.team.id, 5).map((e) => e.action)).toContain('invitation.sent');
+    expect(listTeamActivity(ctx.db, s.team.id, { limit: 5 }).map((e) => e.action)).toContain('invitation.sent');
   });
 
   it('expires after 7 days', async () => {

@@ -1,8 +1,8 @@
 import { existsSync, readdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { listTeamEvents } from '@server/features/audit/audit.repository';
 import sharp from 'sharp';
+import { listTeamActivity } from '@server/features/activity/activity.repository';
 import { gifImage, jpegWithLocation, pngImage, webpImage } from '../factories/images';
 import { makeTeamScenario, type TeamScenario } from './support/factories';
 import { rowCounts } from './support/row-counts';
@@ -37,7 +37,7 @@ describe('robot photos', () => {
     expect(response.body.robot.photoUrl).toMatch(new RegExp(`^/api/robots/${s.robot.id}/photo\\?v=\\d+$`));
     expect(storedFiles().some((f) => /^[0-9a-f]{32}\.png$/.test(f))).toBe(true);
     expect(storedFiles()).not.toContain('my robot.png');
-    expect(listTeamEvents(ctx.db, s.team.id, 1)[0]).toMatchObject({ action: 'photo.uploaded' });
+    expect(listTeamActivity(ctx.db, s.team.id, { limit: 1 })[0]).toMatchObject({ action: 'photo.uploaded' });
   });
 
   it('accepts JPEG and WebP, recognised by their content', async () => {

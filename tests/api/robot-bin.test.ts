@@ -1,7 +1,7 @@
 import { existsSync, readdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { listTeamEvents } from '@server/features/audit/audit.repository';
+import { listTeamActivity } from '@server/features/activity/activity.repository';
 import { purgeExpiredRobots } from '@server/features/robot-bin/robot-bin.service';
 import { pngImage } from '../factories/images';
 import { makeTeamScenario, type TeamScenario } from './support/factories';
@@ -35,7 +35,10 @@ describe('deleting a robot', () => {
     expect((await owner.get(`/api/teams/${s.team.id}/robots`)).body.robots).toEqual([]);
     expect((await owner.get(`/api/robots/${s.robot.id}`)).status).toBe(404);
     expect(rowCounts(ctx)).toMatchObject({ robots: before.robots, revisions: before.revisions });
-    expect(listTeamEvents(ctx.db, s.team.id, 1)[0]).toMatchObject({ action: 'robot.deleted', actorName: 'Owner' });
+    expect(listTeamActivity(ctx.db, s.team.id, { limit: 1 })[0]).toMatchObject({
+      action: 'robot.deleted',
+      actorName: 'Owner',
+    });
   });
 
   it('lists it in the bin with who deleted it and until when it can come back', async () => {
@@ -76,7 +79,7 @@ describe('restoring a deleted robot', () => {
       s.robot.id,
     ]);
     expect((await owner.get(`/api/teams/${s.team.id}/robot-bin`)).body.robots).toEqual([]);
-    expect(listTeamEvents(ctx.db, s.team.id, 1)[0]).toMatchObject({ action: 'robot.restored' });
+    expect(listTeamActivity(ctx.db, s.team.id, { limit: 1 })[0]).toMatchObject({ action: 'robot.restored' });
   });
 
   it('refuses after 30 days, and the bin no longer lists it', async () => {
@@ -137,7 +140,7 @@ describe('emptying the bin', () => {
     expect(count('select count(*) as n from revisions where robot_id = ?', s.robot.id)).toBe(0);
     expect(count('select count(*) as n from flashes where robot_id = ?', s.robot.id)).toBe(0);
     expect(photoFiles()).not.toContain(photo);
-    expect(listTeamEvents(ctx.db, s.team.id, 1)[0]).toMatchObject({
+    expect(listTeamActivity(ctx.db, s.team.id, { limit: 1 })[0]).toMatchObject({
       action: 'robot.purged',
       actorName: null,
       detail: { name: s.robot.name },

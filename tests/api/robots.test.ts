@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { listTeamEvents } from '@server/features/audit/audit.repository';
+import { listTeamActivity } from '@server/features/activity/activity.repository';
 import { assignPins } from '@shared/pins/assign-pins';
 import { robotProblems } from '@shared/problems/robot-problems';
 import { buildStarterConfig } from '@shared/starter';
@@ -26,7 +26,7 @@ describe('creating robots', () => {
     expect(detail.body.head).toMatchObject({ number: 1, authorName: 'Editor', message: 'First revision' });
     expect(detail.body.head.config.name).toBe('Porch Runner');
     expect(detail.body.head.config.safety.failsafeTimeoutMs).toBe(250);
-    expect(listTeamEvents(ctx.db, s.team.id, 5).map((e) => e.action)).toContain('robot.created');
+    expect(listTeamActivity(ctx.db, s.team.id, { limit: 5 }).map((e) => e.action)).toContain('robot.created');
   });
 
   it('refuses an invalid configuration, naming each field by its dotted path', async () => {
@@ -72,7 +72,10 @@ describe('revisions', () => {
     expect(list.body.revisions.map((r: { number: number }) => r.number)).toEqual([2, 1]);
     const first = await editor.get(`/api/robots/${s.robot.id}/revisions/1`);
     expect(first.body.revision.config.safety.failsafeTimeoutMs).toBe(250);
-    expect(listTeamEvents(ctx.db, s.team.id, 5)[0]).toMatchObject({ action: 'revision.saved', detail: { number: 2 } });
+    expect(listTeamActivity(ctx.db, s.team.id, { limit: 5 })[0]).toMatchObject({
+      action: 'revision.saved',
+      detail: { number: 2 },
+    });
   });
 
   it('answers 409 with the newer head when the edit started from an older revision', async () => {

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { listTeamEvents } from '@server/features/audit/audit.repository';
+import { listTeamActivity } from '@server/features/activity/activity.repository';
 import { addMember, makeTeam, makeTeamScenario, makeUser } from './support/factories';
 import { clientAs, createTestContext, type TestContext } from './support/test-app';
 
@@ -48,7 +48,7 @@ describe('roles', () => {
       .send({ role: 'editor' });
     expect(response.status).toBe(200);
     expect(response.body.members.find((m: { userId: string }) => m.userId === s.viewer.id).role).toBe('editor');
-    const event = listTeamEvents(ctx.db, s.team.id, 10).find((e) => e.action === 'member.role_changed');
+    const event = listTeamActivity(ctx.db, s.team.id, { limit: 10 }).find((e) => e.action === 'member.role_changed');
     expect(event).toMatchObject({ actorName: 'Owner', detail: { name: 'Viewer', from: 'viewer', to: 'editor' } });
   });
 
@@ -100,7 +100,7 @@ describe('removing members', () => {
       (await (await clientAs(ctx, s.owner.id)).delete(`/api/teams/${s.team.id}/members/${s.editor.id}`)).status,
     ).toBe(204);
     expect((await (await clientAs(ctx, s.editor.id)).get(`/api/teams/${s.team.id}`)).status).toBe(404);
-    expect(listTeamEvents(ctx.db, s.team.id, 10).map((e) => e.action)).toContain('member.removed');
+    expect(listTeamActivity(ctx.db, s.team.id, { limit: 10 }).map((e) => e.action)).toContain('member.removed');
   });
 
   it('lets any member leave', async () => {

@@ -7,13 +7,10 @@ import {
   SignInInputSchema,
   SignUpInputSchema,
 } from '@shared/schemas/auth';
-import {
-  BootLineInputSchema,
-  ImportRevisionFieldsSchema,
-  ImportRobotFieldsSchema,
-  RecordFlashInputSchema,
-  RestoreInputSchema,
-} from '@shared/schemas/history';
+import { BootLineInputSchema } from '@shared/schemas/boot-line';
+import { RecordFlashInputSchema } from '@shared/schemas/flash-log';
+import { RestoreInputSchema } from '@shared/schemas/history';
+import { ImportRevisionFieldsSchema, ImportRobotFieldsSchema } from '@shared/schemas/robot-files';
 import { RobotConfigSchema } from '@shared/schemas/robot-config';
 import { CreateRobotInputSchema, RenameRobotInputSchema, SaveRevisionInputSchema } from '@shared/schemas/robots';
 import { ChangeRoleInputSchema, CreateTeamInputSchema, InviteMemberInputSchema } from '@shared/schemas/teams';

@@ -4,7 +4,8 @@ import type { AppContext } from '@server/config';
 import { HttpError } from '@server/lib/http-error';
 import type { FirmwareFile, FirmwareFileLanguage, FirmwareFiles, VerifyResult } from '@shared/schemas/firmware';
 import type { RobotConfig } from '@shared/schemas/robot-config';
-import { bootLine } from './boot-line';
+import { formatBootLine } from '@shared/boot-line/boot-line';
+import { FIRMWARE_GENERATOR_VERSION } from './generator-version';
 import { FirmwareConfigError } from './model/firmware-config-error';
 import { configHash } from './model/config-hash';
 import { renderBundle, type BundleFile } from './render-bundle';
@@ -70,7 +71,7 @@ function filesView(config: RobotConfig, revision: number, draft: boolean): Firmw
     hash: configHash(config),
     sketchFolder,
     remoteFolder: files.some((f) => f.path.startsWith(`${remoteFolder}/`)) ? remoteFolder : null,
-    bootLine: bootLine(config, revision),
+    bootLine: formatBootLine(config, revision, FIRMWARE_GENERATOR_VERSION),
     files: files.map((f): FirmwareFile => ({
       ...f,
       size: Buffer.byteLength(f.content, 'utf8'),

@@ -1,7 +1,6 @@
 import { and, desc, eq } from 'drizzle-orm';
 import type { Db } from '@server/db/client';
-import { flashes, revisions, users } from '@server/db/schema';
-import type { FlashEntry } from '@shared/schemas/history';
+import { revisions, users } from '@server/db/schema';
 import type { RevisionSummary } from '@shared/schemas/robots';
 
 /** A stored revision as it is in the table: the configuration still as JSON text. */
@@ -50,23 +49,4 @@ export function findStoredRevision(db: Db, robotId: string, number: number): Sto
     .where(and(eq(revisions.robotId, robotId), eq(revisions.number, number)))
     .get();
   return row ? { ...row, createdAt: row.createdAt.toISOString() } : undefined;
-}
-
-/** The robot's flash log, newest first. */
-export function listFlashes(db: Db, robotId: string): FlashEntry[] {
-  return db
-    .select({
-      id: flashes.id,
-      revisionNumber: flashes.revisionNumber,
-      flashedAt: flashes.flashedAt,
-      flashedByName: users.name,
-      note: flashes.note,
-      createdAt: flashes.createdAt,
-    })
-    .from(flashes)
-    .leftJoin(users, eq(users.id, flashes.flashedBy))
-    .where(eq(flashes.robotId, robotId))
-    .orderBy(desc(flashes.flashedAt), desc(flashes.id))
-    .all()
-    .map((row) => ({ ...row, flashedAt: row.flashedAt.toISOString(), createdAt: row.createdAt.toISOString() }));
 }

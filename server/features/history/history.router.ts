@@ -1,19 +1,11 @@
 import { Router } from 'express';
-import { z } from 'zod';
 import type { AppContext } from '@server/config';
 import { currentUser, requireUser } from '@server/middleware/session';
 import { requireRobotRole } from '@server/middleware/team-access';
 import { validateBody } from '@server/middleware/validate';
-import { DiffQuerySchema, RestoreInputSchema } from '@shared/schemas/history';
+import { DiffQuerySchema, RestoreInputSchema, RevisionParamSchema } from '@shared/schemas/history';
 import { bundleRenderer, type BundleRenderer } from './bundle-renderer';
 import { restoreRevision, revisionDiff, robotHistory } from './history.service';
-
-export const RevisionParamSchema = z.object({
-  revision: z.coerce
-    .number({ error: 'Revision must be a number' })
-    .int('Revision must be a whole number')
-    .min(1, 'Revisions start at 1'),
-});
 
 export function historyRoutes(ctx: AppContext, render: BundleRenderer | null = bundleRenderer): Router {
   const router = Router();

@@ -1,4 +1,5 @@
 import type { AppContext } from '@server/config';
+import { flashLog } from '@server/features/flash-log/flash-log.service';
 import { findLiveRobot } from '@server/features/robots/robots.repository';
 import { appendRevision, getRevision } from '@server/features/robots/robots.service';
 import { HttpError } from '@server/lib/http-error';
@@ -8,13 +9,7 @@ import type { CurrentUser } from '@shared/schemas/auth';
 import type { RevisionDiff, RobotHistory } from '@shared/schemas/history';
 import type { RevisionDetail } from '@shared/schemas/robots';
 import type { BundleRenderer } from './bundle-renderer';
-import {
-  findStoredRevision,
-  listFlashes,
-  listStoredRevisions,
-  revisionSummary,
-  type StoredRevision,
-} from './history.repository';
+import { findStoredRevision, listStoredRevisions, revisionSummary, type StoredRevision } from './history.repository';
 import { revisionFacts } from './revision-facts';
 
 function liveRobot(ctx: AppContext, robotId: string) {
@@ -26,15 +21,15 @@ function liveRobot(ctx: AppContext, robotId: string) {
 /** Every revision, newest first, with its problem count and the times it was flashed. */
 export function robotHistory(ctx: AppContext, robotId: string): RobotHistory {
   const robot = liveRobot(ctx, robotId);
-  const flashLog = listFlashes(ctx.db, robotId);
+  const flashes = flashLog(ctx, robotId);
   const revisions = listStoredRevisions(ctx.db, robotId).map((revision) => ({
     ...revisionSummary(revision),
     problems: revisionFacts(revision).problems,
-    flashes: flashLog
+    flashes: flashes
       .filter((f) => f.revisionNumber === revision.number)
       .map(({ flashedAt, flashedByName }) => ({ flashedAt, flashedByName })),
   }));
-  return { headRevision: robot.headRevision, revisions, lastFlash: flashLog[0] ?? null };
+  return { headRevision: robot.headRevision, revisions, lastFlash: flashes[0] ?? null };
 }
 
 function storedOrNotFound(ctx: AppContext, robotId: string, number: number): StoredRevision {

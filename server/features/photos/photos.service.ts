@@ -1,6 +1,6 @@
 import { join } from 'node:path';
 import type { AppContext } from '@server/config';
-import { recordEvent } from '@server/features/audit/audit.repository';
+import { recordEvent } from '@server/features/activity/activity.repository';
 import { findLiveRobot, robotSummary } from '@server/features/robots/robots.repository';
 import { HttpError } from '@server/lib/http-error';
 import type { CurrentUser } from '@shared/schemas/auth';

@@ -1,11 +1,11 @@
 import type { AppContext } from '@server/config';
 import type { Db } from '@server/db/client';
-import { recordEvent } from '@server/features/audit/audit.repository';
+import { recordEvent } from '@server/features/activity/activity.repository';
 import { removePhotoFile } from '@server/features/photos/photo-store';
 import { findLiveRobot, robotSummary } from '@server/features/robots/robots.repository';
 import { HttpError } from '@server/lib/http-error';
 import type { CurrentUser } from '@shared/schemas/auth';
-import type { BinnedRobot } from '@shared/schemas/history';
+import type { BinnedRobot } from '@shared/schemas/robot-bin';
 import type { RobotSummary } from '@shared/schemas/robots';
 import {
   clearDeleted,
@@ -77,7 +77,7 @@ export function restoreRobot(
 
 /**
  * Empties the bin of robots whose 30 days have passed: the robot, its revisions, flash log and
- * photo are removed for good, and the team's audit log keeps a line saying so. Returns how many.
+ * photo are removed for good, and the team's activity log keeps a line saying so. Returns how many.
  */
 export async function purgeExpiredRobots(db: Db, dataDir: string, now = new Date()): Promise<number> {
   const expired = listDeletedBefore(db, new Date(now.getTime() - BIN_MS));

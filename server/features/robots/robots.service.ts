@@ -1,7 +1,7 @@
 import type { AppContext } from '@server/config';
 import type { Db } from '@server/db/client';
 import type { RobotRow } from '@server/db/schema';
-import { recordEvent } from '@server/features/audit/audit.repository';
+import { recordEvent } from '@server/features/activity/activity.repository';
 import { HttpError } from '@server/lib/http-error';
 import type { CurrentUser } from '@shared/schemas/auth';
 import type { RobotConfig } from '@shared/schemas/robot-config';
@@ -79,7 +79,7 @@ export function revisionConflict(
 /**
  * Every way a revision is added on top of the head (save, restore, import), inside the caller's
  * transaction: the robot must exist, the person must have started from the head (else 409 with
- * the newer head and the unsaved draft, and nothing is written), and the audit log says what
+ * the newer head and the unsaved draft, and nothing is written), and the activity log says what
  * happened. `config` may look at the robot (an import takes its name) or throw (a restore whose
  * source revision is missing) before the head is compared. Returns the new revision's number
  * and the robot as it was found.

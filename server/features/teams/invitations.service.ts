@@ -1,5 +1,5 @@
 import type { AppContext } from '@server/config';
-import { recordEvent } from '@server/features/audit/audit.repository';
+import { recordEvent } from '@server/features/activity/activity.repository';
 import { findUserByEmail } from '@server/features/auth/auth.repository';
 import { HttpError } from '@server/lib/http-error';
 import { hashToken, newToken } from '@server/lib/ids';

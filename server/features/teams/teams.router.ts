@@ -5,7 +5,7 @@ import { grantedAccess, requireTeamRole } from '@server/middleware/team-access';
 import { validateBody } from '@server/middleware/validate';
 import { ChangeRoleInputSchema, CreateTeamInputSchema } from '@shared/schemas/teams';
 import { listMembers, listTeamsOf } from './teams.repository';
-import { changeRole, createTeam, removeMember, teamActivity, teamDetail } from './teams.service';
+import { changeRole, createTeam, removeMember, teamDetail } from './teams.service';
 
 export function teamsRoutes(ctx: AppContext): Router {
   const router = Router();
@@ -45,11 +45,6 @@ export function teamsRoutes(ctx: AppContext): Router {
     const { teamId, role } = grantedAccess(req);
     removeMember(ctx, currentUser(req), role, teamId, String(req.params.userId));
     res.status(204).end();
-  });
-
-  router.get('/teams/:teamId/activity', requireUser, viewer, (req, res) => {
-    const { teamId, role } = grantedAccess(req);
-    res.json({ events: teamActivity(ctx, teamId, role) });
   });
 
   return router;

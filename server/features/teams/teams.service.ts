@@ -1,9 +1,9 @@
 import type { AppContext } from '@server/config';
-import { listTeamEvents, recordEvent } from '@server/features/audit/audit.repository';
+import { recordEvent } from '@server/features/activity/activity.repository';
 import { findUserById } from '@server/features/auth/auth.repository';
 import { HttpError } from '@server/lib/http-error';
 import type { CurrentUser } from '@shared/schemas/auth';
-import type { Role, TeamActivity, TeamDetail } from '@shared/schemas/teams';
+import type { Role, TeamDetail } from '@shared/schemas/teams';
 import {
   countOwners,
   deleteMembership,
@@ -32,20 +32,6 @@ export function teamDetail(ctx: AppContext, teamId: string, role: Role): TeamDet
 }
 
 const LAST_OWNER = 'A team needs at least one owner; make someone else owner first';
-
-/**
- * The team's latest events as its members see them. The e-mail addresses of people invited
- * (who may never join) are for owners, who manage people; everyone else reads "someone".
- */
-export function teamActivity(ctx: AppContext, teamId: string, role: Role): TeamActivity[] {
-  const events = listTeamEvents(ctx.db, teamId, 50);
-  if (role === 'owner') return events;
-  return events.map((event) => {
-    if (!('email' in event.detail)) return event;
-    const { email: _email, ...detail } = event.detail;
-    return { ...event, detail };
-  });
-}
 
 export function changeRole(ctx: AppContext, actor: CurrentUser, teamId: string, userId: string, role: Role): void {
   ctx.db.transaction((tx) => {

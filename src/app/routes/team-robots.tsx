@@ -5,11 +5,11 @@ import { Cautions } from '@/components/ui/cautions';
 import { Dialog } from '@/components/ui/dialog';
 import { Panel } from '@/components/ui/panel';
 import { EmptyState, ErrorState, LoadingState } from '@/components/ui/states';
-import { DeletedRobotsPanel } from '@/features/history/components/robot-bin-panel';
-import { ImportRobotDialog } from '@/features/history/components/import-robot-dialog';
+import { DeletedRobotsPanel } from '@/features/robot-bin/components/robot-bin-panel';
+import { ImportRobotDialog } from '@/features/robot-files/components/import-robot-dialog';
 import { useTeamRobots } from '@/features/robots/api/get-team-robots';
 import { RobotTable } from '@/features/robots/components/robot-table';
-import { WhichRobotPanel } from '@/features/robots/components/which-robot-panel';
+import { WhichRobotPanel } from '@/features/boot-line/components/which-robot-panel';
 import { errorMessage } from '@/lib/api-client';
 import type { TeamDetail } from '@shared/schemas/teams';
 

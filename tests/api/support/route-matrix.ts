@@ -214,10 +214,6 @@ export const TEAM_ROUTES: Record<
     }),
     expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 403, owner: 200 },
   },
-  'GET /api/teams/:teamId/audit': {
-    request: (s) => ({ path: `/api/teams/${s.team.id}/audit` }),
-    expect: { anonymous: 401, outsider: 404, viewer: 403, editor: 403, owner: 200 },
-  },
 };
 
 /**

@@ -1,7 +1,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { DRIVE_LAYOUT_IDS, type DriveLayoutId } from '@shared/schemas/ids';
 import type { RobotConfig } from '@shared/schemas/robot-config';
-import { bootLine } from '@server/features/firmware/boot-line';
+import { formatBootLine } from '@shared/boot-line/boot-line';
+import { FIRMWARE_GENERATOR_VERSION } from '@server/features/firmware/generator-version';
 import { configHash } from '@server/features/firmware/model/config-hash';
 import { cyclesPerMs, simulate, type SimEvent, type SimResult } from '../sim/simavr';
 import { unoRegisters } from '../helpers/avr-registers';
@@ -122,6 +123,6 @@ describe.each(cases)('a %s robot on a simulated Uno fed %s frames', (layout, sou
 
   it('prints, as its first line, exactly the boot line the Firmware section shows', () => {
     const firstLine = result.uart.toString('utf8').split(/\r?\n/)[0];
-    expect(firstLine).toBe(bootLine(config, REVISION));
+    expect(firstLine).toBe(formatBootLine(config, REVISION, FIRMWARE_GENERATOR_VERSION));
   });
 });

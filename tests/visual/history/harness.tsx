@@ -1,10 +1,9 @@
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { MemoryRouter } from 'react-router';
-import { AuditLog } from '@/features/history/components/audit-log';
-import { HistorySection } from '@/features/history/components/history-section';
-import { ImportRobotDialog } from '@/features/history/components/import-robot-dialog';
-import { DeletedRobotsPanel } from '@/features/history/components/robot-bin-panel';
-import { ActivityList } from '@/features/teams/components/activity-list';
+import { ActivityLog } from '@/features/activity/components/activity-log';
+import { HistorySection } from '@/app/sections/history-section';
+import { ImportRobotDialog } from '@/features/robot-files/components/import-robot-dialog';
+import { DeletedRobotsPanel } from '@/features/robot-bin/components/robot-bin-panel';
 import type { RobotDetail } from '@shared/schemas/robots';
 
 // The answers the shooting script worked out with the real services on a scratch database,
@@ -47,9 +46,7 @@ export function Harness() {
               <DeletedRobotsPanel teamId={robot.teamId} />
             </div>
           )}
-          {part === 'audit' && (
-            <AuditLog teamId={robot.teamId} renderEvents={(events) => <ActivityList events={events} />} />
-          )}
+          {part === 'activity' && <ActivityLog teamId={robot.teamId} withSignIns />}
         </div>
       </MemoryRouter>
     </QueryClientProvider>

@@ -1,5 +1,5 @@
 // Screenshots of the history harness for a visual check (not a test):
-//   npx tsx tests/visual/history/shoot.ts out-dir "part=history" "part=history&click=garden_hauler/mw_config.h" "part=audit"
+//   npx tsx tests/visual/history/shoot.ts out-dir "part=history" "part=history&click=garden_hauler/mw_config.h" "part=activity"
 // The page's answers come from the real services on a scratch database; FULL=1 shoots the whole page.
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -7,10 +7,10 @@ import { join } from 'node:path';
 import type { AppContext } from '@server/config';
 import { openDatabase } from '@server/db/client';
 import { runMigrations } from '@server/db/migrate';
-import { listAuditLog } from '@server/features/audit/audit.repository';
+import { listTeamActivity } from '@server/features/activity/activity.repository';
 import { insertUser } from '@server/features/auth/auth.repository';
 import { renderBundle } from '@server/features/firmware/render-bundle';
-import { flashLog, recordFlash } from '@server/features/flashes/flashes.service';
+import { flashLog, recordFlash } from '@server/features/flash-log/flash-log.service';
 import { restoreRevision, revisionDiff, robotHistory } from '@server/features/history/history.service';
 import { deleteRobot, listBin } from '@server/features/robot-bin/robot-bin.service';
 import { createRobot, robotDetail, saveRevision } from '@server/features/robots/robots.service';
@@ -57,8 +57,8 @@ function fixture() {
     [`GET /api/robots/${id}/history`]: robotHistory(ctx, id),
     [`GET /api/robots/${id}/flashes`]: { flashes: flashLog(ctx, id) },
     [`GET /api/teams/${team.id}/robot-bin`]: { robots: listBin(ctx, team.id) },
-    [`GET /api/teams/${team.id}/audit`]: {
-      events: listAuditLog(database.db, team.id, { kind: 'all', limit: 50 }),
+    [`GET /api/teams/${team.id}/activity`]: {
+      events: listTeamActivity(database.db, team.id, { limit: 50, signIns: true }),
       nextBefore: null,
     },
   };

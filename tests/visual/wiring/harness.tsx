@@ -6,7 +6,7 @@ import type { BoardId, DriveLayoutId, DriverKindId, InputSourceId } from '@share
 import type { RobotConfig } from '@shared/schemas/robot-config';
 import type { RevisionDetail, RobotDetail } from '@shared/schemas/robots';
 import { buildStarterConfig } from '@shared/starter';
-import { WiringSection } from '@/features/robot-editor/sections/wiring-section';
+import { WiringSection } from '@/features/wiring/components/wiring-section';
 import { WiringSheet } from '@/features/wiring/components/wiring-sheet';
 
 // A page for looking at the Wiring section and the wiring sheet with a starter configuration per

@@ -3,7 +3,7 @@ import type { FirmwareFiles } from '@shared/schemas/firmware';
 import { Panel } from '@/components/ui/panel';
 import { ErrorState, LoadingState } from '@/components/ui/states';
 import { errorMessage } from '@/lib/api-client';
-import type { SectionProps } from '@/features/robot-editor/sections/section-props';
+import type { SectionProps } from '@/lib/editor-sections';
 import { bundleUrl } from '../api/get-bundle';
 import { useRevisionFiles } from '../api/get-revision-files';
 import { useDraftFiles } from '../api/preview-draft-files';

@@ -1,4 +1,4 @@
-import { sectionOfPath } from '@/features/robot-editor/lib/editor-sections';
+import { sectionOfPath } from '@/lib/editor-sections';
 
 /**
  * A link (relative to the current section's path) that opens the section showing the field and

@@ -1,11 +1,6 @@
-import type { AuditKind } from '@shared/schemas/history';
+import { robotKeys } from '@/lib/robot-keys';
 
 export const historyKeys = {
-  all: ['history'] as const,
-  robot: (robotId: string) => [...historyKeys.all, 'robot', robotId] as const,
-  list: (robotId: string) => [...historyKeys.robot(robotId), 'list'] as const,
-  diff: (robotId: string, from: number, to: number) => [...historyKeys.robot(robotId), 'diff', from, to] as const,
-  flashes: (robotId: string) => [...historyKeys.robot(robotId), 'flashes'] as const,
-  bin: (teamId: string) => [...historyKeys.all, 'bin', teamId] as const,
-  audit: (teamId: string, kind: AuditKind) => [...historyKeys.all, 'audit', teamId, kind] as const,
+  list: (robotId: string) => [...robotKeys.detail(robotId), 'history'] as const,
+  diff: (robotId: string, from: number, to: number) => [...robotKeys.detail(robotId), 'diff', from, to] as const,
 };

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest, isApiError } from '@/lib/api-client';
 import type { RevisionDetail } from '@shared/schemas/robots';
-import { refreshRobot } from './refresh-robot';
+import { refreshRobots } from '@/lib/robot-keys';
 
 export interface RestoreRevisionInput {
   robotId: string;
@@ -19,8 +19,8 @@ export function useRestoreRevision(robotId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: Omit<RestoreRevisionInput, 'robotId'>) => restoreRevision({ robotId, ...input }),
-    onSuccess: () => refreshRobot(queryClient, robotId),
+    onSuccess: () => refreshRobots(queryClient),
     // Someone saved meanwhile: show the newer head so the person can decide again.
-    onError: (error) => (isApiError(error, 409) ? refreshRobot(queryClient, robotId) : undefined),
+    onError: (error) => (isApiError(error, 409) ? refreshRobots(queryClient) : undefined),
   });
 }

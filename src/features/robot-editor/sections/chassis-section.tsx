@@ -6,7 +6,7 @@ import { LayoutPanel } from '../components/chassis/layout-panel';
 import { MotorTable } from '../components/chassis/motor-table';
 import { WheelTable } from '../components/chassis/wheel-table';
 import { DraftFields } from '../components/fields/draft-fields-context';
-import type { SectionProps } from './section-props';
+import type { SectionProps } from '@/lib/editor-sections';
 
 /** Chassis: the drive layout, the wheel and motor tables, the drawing and the engine's analysis. */
 export function ChassisSection({ config, onChange, canEdit, validConfig, fieldErrors }: SectionProps) {

@@ -2,7 +2,7 @@ import { useDeferredValue } from 'react';
 import { Panel } from '@/components/ui/panel';
 import { BenchCheck } from '../components/commissioning/bench-check';
 import { CommissioningDiagram } from '../components/commissioning-diagram';
-import type { SectionProps } from './section-props';
+import type { SectionProps } from '@/lib/editor-sections';
 
 /** Commissioning: the wheels-up bench check, and what every wheel should do for each stick. */
 export function CommissioningSection({

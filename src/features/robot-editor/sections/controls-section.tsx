@@ -6,7 +6,7 @@ import { ChannelTable } from '../components/controls/channel-table';
 import { LinkPanel } from '../components/controls/link-panel';
 import { SwitchesPanel } from '../components/controls/switches-panel';
 import { DraftFields } from '../components/fields/draft-fields-context';
-import type { SectionProps } from './section-props';
+import type { SectionProps } from '@/lib/editor-sections';
 
 // The preview runs an animation loop and the gamepad reader: loaded with the section, not before.
 const DrivePreview = lazy(async () => ({ default: (await import('../components/drive-preview')).DrivePreview }));

@@ -3,7 +3,7 @@ import { Cautions } from '@/components/ui/cautions';
 import { DraftFields } from '../components/fields/draft-fields-context';
 import { PowerAdvicePanel } from '../components/safety/power-advice-panel';
 import { MotorSafetyForm, PowerForm } from '../components/safety/safety-forms';
-import type { SectionProps } from './section-props';
+import type { SectionProps } from '@/lib/editor-sections';
 
 /** Safety: motor limits, battery and supply, the power advice, and the cautions always in view. */
 export function SafetySection({ config, onChange, canEdit, validConfig, fieldErrors }: SectionProps) {

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
 import type { CreateRobotInput, RobotSummary } from '@shared/schemas/robots';
-import { robotKeys } from './robot-keys';
+import { robotKeys } from '@/lib/robot-keys';
 
 export async function createRobot(teamId: string, input: CreateRobotInput): Promise<RobotSummary> {
   const path = `/teams/${encodeURIComponent(teamId)}/robots`;

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
 import type { RevisionDetail } from '@shared/schemas/robots';
-import { robotKeys } from './robot-keys';
+import { robotKeys } from '@/lib/robot-keys';
 
 export async function getRevision(robotId: string, number: number): Promise<RevisionDetail> {
   return (await apiRequest<{ revision: RevisionDetail }>(`/robots/${encodeURIComponent(robotId)}/revisions/${number}`))

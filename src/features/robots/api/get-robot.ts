@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
 import type { RobotDetail } from '@shared/schemas/robots';
-import { robotKeys } from './robot-keys';
+import { robotKeys } from '@/lib/robot-keys';
 
 export async function getRobot(robotId: string): Promise<RobotDetail> {
   return apiRequest<RobotDetail>(`/robots/${encodeURIComponent(robotId)}`);

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
 import type { RobotListItem } from '@shared/schemas/robots';
-import { robotKeys } from './robot-keys';
+import { robotKeys } from '@/lib/robot-keys';
 
 export async function getTeamRobots(teamId: string): Promise<RobotListItem[]> {
   return (await apiRequest<{ robots: RobotListItem[] }>(`/teams/${encodeURIComponent(teamId)}/robots`)).robots;

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
 import type { RevisionDetail, RobotDetail, SaveRevisionInput } from '@shared/schemas/robots';
-import { robotKeys } from './robot-keys';
+import { robotKeys } from '@/lib/robot-keys';
 
 export async function saveRevision(robotId: string, input: SaveRevisionInput): Promise<RevisionDetail> {
   const path = `/robots/${encodeURIComponent(robotId)}/revisions`;

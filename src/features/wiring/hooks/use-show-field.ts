@@ -4,7 +4,7 @@ import { useSearchParams } from 'react-router';
 /**
  * Leads to a field of the section through the editor's own mechanism: it sets `?field=<dotted
  * path>`, and the editor shell scrolls to the element with that `data-field`, focuses and
- * flashes it (see section-props.ts). The jump replaces the history entry, like the shell's own.
+ * flashes it (see src/lib/editor-sections.ts). The jump replaces the history entry, like the shell's own.
  */
 export function useShowField(): (fieldKey: string) => void {
   const [, setSearchParams] = useSearchParams();

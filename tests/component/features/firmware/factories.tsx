@@ -4,7 +4,7 @@ import type { ReactElement } from 'react';
 import { MemoryRouter, Route, Routes, useLocation } from 'react-router';
 import type { FirmwareFile, FirmwareFiles, SketchCheck, VerifyResult } from '@shared/schemas/firmware';
 import type { RobotConfig } from '@shared/schemas/robot-config';
-import type { SectionProps } from '@/features/robot-editor/sections/section-props';
+import type { SectionProps } from '@/lib/editor-sections';
 import { wiredConfig } from '../../../factories/wired-config';
 
 export function firmwareFile(path: string, content: string): FirmwareFile {

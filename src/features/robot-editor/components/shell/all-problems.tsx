@@ -1,11 +1,6 @@
 import { Panel } from '@/components/ui/panel';
-import {
-  homeSectionOf,
-  SECTION_IDS,
-  SECTION_LABELS,
-  type EditorProblem,
-  type SectionId,
-} from '../../lib/editor-sections';
+import { homeSectionOf, type EditorProblem } from '../../lib/section-problems';
+import { SECTION_IDS, SECTION_LABELS, type SectionId } from '@/lib/editor-sections';
 import { ProblemList } from './problem-list';
 
 /**

@@ -2,7 +2,8 @@ import { useId } from 'react';
 import { Link } from 'react-router';
 import { cx } from '@/components/ui/cx';
 import { pathKey } from '@shared/history/field-path';
-import { sectionOfPath, type EditorProblem, type SectionId } from '../../lib/editor-sections';
+import { sectionOfPath, type SectionId } from '@/lib/editor-sections';
+import type { EditorProblem } from '../../lib/section-problems';
 
 /** Where a problem's field is shown, as a link target; null when this build has no such section. */
 export function problemHref(problem: EditorProblem, available: readonly SectionId[]): string | null {

@@ -13,15 +13,12 @@ import { useRobotDraft } from '../../hooks/use-robot-draft';
 import {
   countBySection,
   fieldErrorProblems,
-  SECTION_IDS,
   problemsOfSection,
-  SECTION_LABELS,
   type EditorProblem,
   type SectionCount,
-  type SectionId,
-  type SectionRegistry,
-} from '../../lib/editor-sections';
-import type { SectionProps } from '../../sections/section-props';
+} from '../../lib/section-problems';
+import { SECTION_IDS, SECTION_LABELS, type SectionId, type SectionRegistry } from '@/lib/editor-sections';
+import type { SectionProps } from '@/lib/editor-sections';
 import { AllProblems } from './all-problems';
 import { ConflictDialog, type RevisionQuery } from './conflict-dialog';
 import { DiscardDialog } from './discard-dialog';

@@ -1,6 +1,7 @@
 import { NavLink } from 'react-router';
 import { cx } from '@/components/ui/cx';
-import { SECTION_LABELS, type SectionCount, type SectionId } from '../../lib/editor-sections';
+import { SECTION_LABELS, type SectionId } from '@/lib/editor-sections';
+import type { SectionCount } from '../../lib/section-problems';
 
 export function CountBadges({ count }: { count: SectionCount }) {
   if (count.errors === 0 && count.warnings === 0) return null;

@@ -1,6 +1,7 @@
 import { useEffect, useId, useRef, useState } from 'react';
 import { cx } from '@/components/ui/cx';
-import type { EditorProblem, SectionId } from '../../lib/editor-sections';
+import type { EditorProblem } from '../../lib/section-problems';
+import type { SectionId } from '@/lib/editor-sections';
 import { ProblemList } from './problem-list';
 
 function summary(problems: readonly EditorProblem[]): string {

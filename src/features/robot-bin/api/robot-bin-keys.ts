@@ -1,0 +1,3 @@
+export const robotBinKeys = {
+  list: (teamId: string) => ['robot-bin', teamId] as const,
+};
