@@ -5,6 +5,7 @@ import { HttpError } from '@server/lib/http-error';
 import type { FirmwareFile, FirmwareFileLanguage, FirmwareFiles, VerifyResult } from '@shared/schemas/firmware';
 import type { RobotConfig } from '@shared/schemas/robot-config';
 import { formatBootLine } from '@shared/boot-line/boot-line';
+import { createBundleCache } from './bundle-cache';
 import { FIRMWARE_GENERATOR_VERSION } from './generator-version';
 import { FirmwareConfigError } from './model/firmware-config-error';
 import { configHash } from './model/config-hash';
@@ -92,15 +93,24 @@ export function draftFiles(ctx: AppContext, robotId: string, config: RobotConfig
   return filesView(config, robot.headRevision + 1, true);
 }
 
-/** The saved revision's bundle as a zip, with its download name (`greenhouse-cart-r7.zip`). */
-export async function revisionZip(
+/** About 50 KB each: a couple of hundred bundles is a few megabytes. */
+const zipCache = createBundleCache<{ fileName: string; zip: Buffer }>(200);
+
+/**
+ * The saved revision's bundle as a zip, with its download name (`greenhouse-cart-r7.zip`).
+ * Rendered once per robot, revision and generator version: revisions never change.
+ */
+export function revisionZip(
   ctx: AppContext,
   robotId: string,
   number: number,
 ): Promise<{ fileName: string; zip: Buffer }> {
-  const { config } = getRevision(ctx, robotId, number);
-  const zip = await zipBundle(render(config, number));
-  return { fileName: bundleFileName(config.name, number), zip };
+  const key = { robotId, revision: number, generatorVersion: FIRMWARE_GENERATOR_VERSION };
+  return zipCache.get(key, async () => {
+    const { config } = getRevision(ctx, robotId, number);
+    const zip = await zipBundle(render(config, number));
+    return { fileName: bundleFileName(config.name, number), zip };
+  });
 }
 
 /**
